@@ -1,0 +1,28 @@
+using LevelDesign.Core.Composite;
+using LevelDesign.Core.Model;
+
+namespace LevelDesign.Core.Analysis;
+
+/// <summary>
+/// Recomputes with every cutoff raised (<see cref="Truncation.Raised"/>) and reports the change of each derived
+/// quantity; a change above the tolerance (default 1 kHz) is flagged.
+/// </summary>
+public static class TruncationConvergence
+{
+    public const double DefaultToleranceGHz = 1e-6;
+
+    public static IReadOnlyList<ConvergenceEntry> Check(DeviceSolver solver, Device device, double toleranceGHz = DefaultToleranceGHz)
+    {
+        var baseValues = DerivedQuantities.From(solver.Solve(device)).Named();
+        var raisedDevice = device with { Truncation = device.Truncation.Raised(device.Elements.Select(e => e.Id)) };
+        var raisedValues = DerivedQuantities.From(solver.Solve(raisedDevice)).Named();
+        var entries = new List<ConvergenceEntry>();
+        foreach (var (name, value) in baseValues)
+        {
+            double raised = raisedValues.TryGetValue(name, out double r) ? r : double.NaN;
+            bool flagged = double.IsNaN(value) != double.IsNaN(raised) || Math.Abs(raised - value) > toleranceGHz;
+            entries.Add(new ConvergenceEntry(name, value, raised, flagged));
+        }
+        return entries;
+    }
+}

@@ -1,0 +1,93 @@
+using System.Numerics;
+using LevelDesign.Core.Couplers;
+using LevelDesign.Core.Elements;
+using LevelDesign.Core.Labels;
+using LevelDesign.Core.Model;
+
+namespace LevelDesign.Core.Composite;
+
+/// <summary>
+/// The lowest dressed states of a device: energies (GHz, relative to the dressed ground), eigenvectors in the
+/// product basis, and bare labels. Energies of labelled states are read with <see cref="EnergyOf"/>.
+/// </summary>
+public sealed class DressedSpectrum
+{
+    private readonly int[] _dressedOfBare;
+
+    internal DressedSpectrum(Device device, IReadOnlyList<BareSpectrum> bare, IReadOnlyList<ResolvedCoupler> couplers,
+        CompositeBasis basis, double[] eigenvalues, double[] weights, Complex[]? complexVectors, double[]? realVectors,
+        DressedLabel[] labels, string solverName, bool isComplex)
+    {
+        Device = device;
+        Bare = bare;
+        Couplers = couplers;
+        Basis = basis;
+        GroundEnergy = eigenvalues[0];
+        Energies = eigenvalues.Select(e => e - GroundEnergy).ToArray();
+        Weights = weights;
+        ComplexVectors = complexVectors;
+        RealVectors = realVectors;
+        Labels = labels;
+        SolverName = solverName;
+        IsComplex = isComplex;
+        _dressedOfBare = Enumerable.Repeat(-1, basis.Dimension).ToArray();
+        for (int k = 0; k < labels.Length; k++) _dressedOfBare[labels[k].BareIndex] = k;
+    }
+
+    public Device Device { get; }
+    public IReadOnlyList<BareSpectrum> Bare { get; }
+    public IReadOnlyList<ResolvedCoupler> Couplers { get; }
+    public CompositeBasis Basis { get; }
+
+    /// <summary>Lowest eigenvalue in the frame where the bare ground is 0 (GHz).</summary>
+    public double GroundEnergy { get; }
+
+    /// <summary>Dressed energies above the dressed ground, ascending (GHz).</summary>
+    public double[] Energies { get; }
+
+    /// <summary>|⟨bare j|dressed k⟩|², column-major: Weights[k*Dimension + j].</summary>
+    public double[] Weights { get; }
+
+    public double[]? RealVectors { get; }
+    public Complex[]? ComplexVectors { get; }
+    public DressedLabel[] Labels { get; }
+
+    /// <summary>Name of the eigensolver that produced this spectrum.</summary>
+    public string SolverName { get; }
+
+    /// <summary>True when the Hamiltonian was complex Hermitian (solved with the complex path).</summary>
+    public bool IsComplex { get; }
+
+    public int Count => Energies.Length;
+    public int Dimension => Basis.Dimension;
+
+    /// <summary>Dressed index carrying the label of this product state, or −1 if it is not among the computed states.</summary>
+    public int DressedIndexOf(ReadOnlySpan<int> bareState)
+    {
+        int bare = Basis.IndexOf(bareState);
+        return bare < 0 ? -1 : _dressedOfBare[bare];
+    }
+
+    public int DressedIndexOfBare(int bareIndex) => bareIndex < 0 ? -1 : _dressedOfBare[bareIndex];
+
+    /// <summary>Energy (GHz above the dressed ground) of the dressed state labelled with this product state; NaN if absent.</summary>
+    public double EnergyOf(ReadOnlySpan<int> bareState)
+    {
+        int k = DressedIndexOf(bareState);
+        return k < 0 ? double.NaN : Energies[k];
+    }
+
+    /// <summary>Energy of the state with the given element levels and every other element in 0.</summary>
+    public double EnergyOfExcitation(params (int Element, int Level)[] levels)
+    {
+        var state = new int[Basis.ElementCount];
+        foreach (var (e, l) in levels) state[e] = l;
+        return EnergyOf(state);
+    }
+
+    /// <summary>Human label such as "qa1 ra0" → written as |qa:1, ra:0⟩ by formatters; here the raw levels.</summary>
+    public int[] LabelLevels(int dressedIndex) => Basis.States[Labels[dressedIndex].BareIndex];
+
+    /// <summary>Compact label "1,0,2" ordered like the device's elements.</summary>
+    public string LabelText(int dressedIndex) => string.Join(",", LabelLevels(dressedIndex));
+}

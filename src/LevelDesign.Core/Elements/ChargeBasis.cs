@@ -1,0 +1,44 @@
+using LevelDesign.Core.Linear;
+
+namespace LevelDesign.Core.Elements;
+
+/// <summary>
+/// H = 4E_C(n − n_g)² − E_J cos φ in the charge basis |n⟩, −N ≤ n ≤ N, with e^{iφ}|n⟩ = |n+1⟩.
+/// Operators: n (meaning n − n_g, the charge that couples), cos_phi, sin_phi.
+/// </summary>
+internal static class ChargeBasis
+{
+    public static NaturalBasisProblem Build(double ec, double ej, double ng, int nMax)
+    {
+        int size = 2 * nMax + 1;
+        var h = new double[size, size];
+        var n = new OperatorMatrix(size);
+        var cos = new OperatorMatrix(size);
+        var sin = new OperatorMatrix(size);
+        for (int i = 0; i < size; i++)
+        {
+            double charge = i - nMax - ng;
+            h[i, i] = 4 * ec * charge * charge;
+            n[i, i] = charge;
+            if (i + 1 < size)
+            {
+                h[i, i + 1] = h[i + 1, i] = -ej / 2;
+                cos[i, i + 1] = cos[i + 1, i] = 0.5;
+                // sin φ = (e^{iφ} − e^{−iφ})/2i, and ⟨n+1|e^{iφ}|n⟩ = 1
+                sin[i + 1, i] = new System.Numerics.Complex(0, -0.5);
+                sin[i, i + 1] = new System.Numerics.Complex(0, 0.5);
+            }
+        }
+        var ops = new Dictionary<string, OperatorMatrix> { ["n"] = n, ["cos_phi"] = cos, ["sin_phi"] = sin };
+        return new NaturalBasisProblem(h, ops, new BasisInfo("charge", size));
+    }
+
+    /// <summary>Solves with |n| ≤ N grown from a safe start until the kept levels converge.</summary>
+    public static BareSpectrum Solve(string id, double ec, double ej, double ng, int levels, int? basisSize)
+    {
+        int? nMax = basisSize is int s ? (s - 1) / 2 : null;
+        int start = Math.Max(10, levels + 6);
+        var spectrum = BasisConvergence.Solve(id, levels, nMax, start, 4, 400, m => Build(ec, ej, ng, m));
+        return spectrum;
+    }
+}

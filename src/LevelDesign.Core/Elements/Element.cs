@@ -1,0 +1,34 @@
+namespace LevelDesign.Core.Elements;
+
+/// <summary>
+/// A few-level element of a device. Elements are immutable; a sweep makes new ones with
+/// <see cref="WithParameter"/>. Parameters are numbers in GHz (energies), Φ0 (flux) or 2e (offset charge).
+/// </summary>
+public abstract record Element(string Id)
+{
+    public abstract ElementKind Kind { get; }
+
+    /// <summary>Whether ZZ, 2χ and anharmonicity are reported for this element.</summary>
+    public virtual bool IsQubitLike => true;
+
+    /// <summary>Names of the operators that couplers may use.</summary>
+    public abstract IReadOnlyList<string> OperatorNames { get; }
+
+    /// <summary>Numeric parameters by symbol (ec, ej, flux, ...), for output and sweeps.</summary>
+    public abstract IReadOnlyDictionary<string, double> Parameters { get; }
+
+    /// <summary>A copy with one parameter changed; throws for an unknown name.</summary>
+    public abstract Element WithParameter(string name, double value);
+
+    /// <summary>
+    /// Diagonalises the element alone and keeps the lowest <paramref name="levels"/> states.
+    /// <paramref name="basisSize"/> overrides the automatic (converged) basis size.
+    /// </summary>
+    public abstract BareSpectrum Diagonalise(int levels, int? basisSize = null);
+
+    /// <summary>Checks parameters; returns a list of problems (empty when valid).</summary>
+    public abstract IReadOnlyList<string> Validate();
+
+    protected Exception UnknownParameter(string name) =>
+        new ArgumentException($"element '{Id}' ({ElementKinds.Key(Kind)}) has no parameter '{name}' (it has: {string.Join(", ", Parameters.Keys)})");
+}

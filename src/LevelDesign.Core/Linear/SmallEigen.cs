@@ -1,0 +1,47 @@
+using MathNet.Numerics.LinearAlgebra;
+
+namespace LevelDesign.Core.Linear;
+
+/// <summary>Dense symmetric eigenproblems of single elements (tens to ~200 states), managed.</summary>
+public static class SmallEigen
+{
+    /// <summary>
+    /// Lowest <paramref name="count"/> eigenpairs of a real symmetric matrix; vectors column-major n×count,
+    /// each with its largest-magnitude component positive so that repeated solves keep one sign.
+    /// </summary>
+    public static (double[] Values, double[] Vectors) LowestSymmetric(double[,] matrix, int count)
+    {
+        int n = matrix.GetLength(0);
+        if (count > n) throw new ArgumentException($"asked for {count} levels of a {n}-state basis");
+        var evd = Matrix<double>.Build.DenseOfArray(matrix).Evd(Symmetricity.Symmetric);
+        var allValues = evd.EigenValues.Select(z => z.Real).ToArray();
+        var order = Enumerable.Range(0, n).OrderBy(i => allValues[i]).Take(count).ToArray();
+        var values = new double[count];
+        var vectors = new double[n * count];
+        for (int c = 0; c < count; c++)
+        {
+            values[c] = allValues[order[c]];
+            var column = evd.EigenVectors.Column(order[c]);
+            for (int i = 0; i < n; i++) vectors[c * n + i] = column[i];
+        }
+        FixSigns(vectors, n, count);
+        return (values, vectors);
+    }
+
+    /// <summary>Makes the largest-magnitude component of each column positive (first on ties).</summary>
+    public static void FixSigns(double[] vectors, int n, int count)
+    {
+        for (int c = 0; c < count; c++)
+        {
+            int best = 0;
+            double bestAbs = -1;
+            for (int i = 0; i < n; i++)
+            {
+                double a = Math.Abs(vectors[c * n + i]);
+                if (a > bestAbs + 1e-12) { bestAbs = a; best = i; }
+            }
+            if (vectors[c * n + best] < 0)
+                for (int i = 0; i < n; i++) vectors[c * n + i] = -vectors[c * n + i];
+        }
+    }
+}
