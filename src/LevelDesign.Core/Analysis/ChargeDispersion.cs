@@ -11,13 +11,11 @@ public static class ChargeDispersion
 {
     public static double OfLevel(Element element, int level)
     {
-        var (at0, atHalf) = element switch
-        {
-            Transmon t => (t with { Ng = 0 }, (Element)(t with { Ng = 0.5 })),
-            TunableTransmon t => (t with { Ng = 0 }, (Element)(t with { Ng = 0.5 })),
-            _ => throw new ArgumentException($"element '{element.Id}' is not a charge-basis element; charge dispersion applies to transmons"),
-        };
-        return atHalf.Diagonalise(level + 1).Energies[level] - ((Element)at0).Diagonalise(level + 1).Energies[level];
+        if (element is not (Transmon or TunableTransmon))
+            throw new ArgumentException($"element '{element.Id}' is not a charge-basis element; charge dispersion applies to transmons");
+        var at0 = element.WithParameter("ng", 0);
+        var atHalf = element.WithParameter("ng", 0.5);
+        return atHalf.Diagonalise(level + 1).Energies[level] - at0.Diagonalise(level + 1).Energies[level];
     }
 
     /// <summary>Asymptotic estimate (valid for E_J/E_C ≫ 1), GHz.</summary>

@@ -1,0 +1,25 @@
+using LevelDesign.Core.Analysis;
+using LevelDesign.Core.Composite;
+using LevelDesign.Core.Couplers;
+using LevelDesign.Core.Elements;
+using LevelDesign.Core.Model;
+
+namespace LevelDesign.Core.Tests.Physics;
+
+public class ConvergenceTests
+{
+    private static Device Device(int levels) => new("qr",
+        [new Transmon("q", 0.25, 15), new Resonator("r", 6.5)],
+        [Coupler.Create("c", CouplerKind.Capacitive, "q", "r", new CouplingStrength.TargetG(0.12))],
+        new Truncation { DefaultLevels = levels });
+
+    [Fact]
+    public void Coarse_truncation_is_flagged_and_fine_truncation_is_not()
+    {
+        var solver = new DeviceSolver();
+        var coarse = TruncationConvergence.Check(solver, Device(3));
+        Assert.Contains(coarse, e => e.Flagged && e.Quantity.StartsWith("chi2"));
+        var fine = TruncationConvergence.Check(solver, Device(9));
+        Assert.DoesNotContain(fine, e => e.Flagged && !double.IsNaN(e.Value));
+    }
+}
