@@ -1,0 +1,10 @@
+using LevelDesign.Core.Composite;
+
+namespace LevelDesign.Core.Sweeps;
+
+/// <summary>
+/// One computed sweep point: its axis values, the dressed spectrum, the derived quantities by name
+/// (see DerivedQuantities.Named), and whether label carrying from the neighbour was ambiguous here.
+/// </summary>
+public sealed record SweepPoint(int Index, IReadOnlyList<double> AxisValues, DressedSpectrum Spectrum,
+    IReadOnlyDictionary<string, double> Quantities, bool Ambiguous);
