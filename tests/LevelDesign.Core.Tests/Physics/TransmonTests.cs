@@ -84,4 +84,35 @@ public class TransmonTests
         var big = new Transmon("t", 1, 1, 0.25).Diagonalise(8, basisSize: 201).Energies;
         for (int i = 0; i < 8; i++) Assert.Equal(big[i], auto[i], 9);
     }
+
+    /// <summary>
+    /// Handbook Mathieu characteristic values (Abramowitz &amp; Stegun Table 20.1; NIST DLMF §28): E_0(n_g=0) = E_C·a0(q),
+    /// E_1(n_g=0) = E_C·b2(q), E_0(n_g=½) = E_C·b1(q), E_1(n_g=½) = E_C·a1(q) with q = E_J/(2E_C) (Koch et al. 2007).
+    /// a0(5) = −5.80004602 and a0(25) = −40.25677955 are from memory; the rest of the row is SciPy 1.10.1
+    /// (tests/reference/data/mathieu_handbook.csv), which also confirms the two remembered values.
+    /// </summary>
+    [Theory]
+    [InlineData(5.0, -5.80004602)]
+    [InlineData(25.0, -40.25677955)]
+    public void Ground_level_matches_handbook_value(double q, double a0)
+    {
+        double ec = 0.2;
+        var e = new Transmon("t", ec, 2 * q * ec).Diagonalise(1).Energies;
+        Assert.InRange(e[0] / ec - a0, -5e-9, 5e-9); // the remembered values carry 8 decimals
+    }
+
+    [Fact]
+    public void Lowest_levels_match_handbook_table_rows()
+    {
+        foreach (var row in ReferenceData.Rows("mathieu_handbook.csv"))
+        {
+            double q = row.Number("q"), ec = 0.3;
+            var at0 = new Transmon("t", ec, 2 * q * ec, 0).Diagonalise(2).Energies;
+            var atHalf = new Transmon("t", ec, 2 * q * ec, 0.5).Diagonalise(2).Energies;
+            Assert.Equal(row.Number("a0"), at0[0] / ec, 9);
+            Assert.Equal(row.Number("b2"), at0[1] / ec, 9);
+            Assert.Equal(row.Number("b1"), atHalf[0] / ec, 9);
+            Assert.Equal(row.Number("a1"), atHalf[1] / ec, 9);
+        }
+    }
 }
