@@ -1,3 +1,4 @@
+using System.Numerics;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.Eigen;
 using LevelDesign.Core.Model;
@@ -40,7 +41,7 @@ internal sealed class PointSolver
             string name = _solver.EigenSolver.Name;
             if (_iterative is not null && n >= _options.IterativeMinimumDimension)
             {
-                var (guess, columns) = WarmStart(problem.Basis);
+                var (guess, columns) = WarmStart(problem.Basis, null);
                 result = _iterative.TryLowest(h.ToCsrReal(), count, guess, columns);
                 if (result is not null) { name = $"block Davidson (sparse; projected: {_solver.EigenSolver.Name})"; IterativeSolves++; }
             }
@@ -49,25 +50,57 @@ internal sealed class PointSolver
         }
         else
         {
-            var complex = _solver.EigenSolver.LowestComplex(h.ToDenseComplex(), n, count);
-            DenseSolves++;
-            point = new SolvedPoint(problem, complex.Values, null, complex.Vectors, _solver.EigenSolver.Name);
+            ComplexEigenResult? complex = null;
+            string name = _solver.EigenSolver.Name;
+            if (_iterative is not null && n >= _options.IterativeMinimumDimension
+                && RealGauge.TryFind(n, h.LowerEntries()) is var (phases, realEntries))
+            {
+                var (guess, columns) = WarmStart(problem.Basis, phases);
+                var real = _iterative.TryLowest(CsrMatrix.FromLowerTriangle(n, realEntries), count, guess, columns);
+                if (real is not null)
+                {
+                    var vectors = new Complex[n * count];
+                    for (int c = 0; c < count; c++)
+                        for (int j = 0; j < n; j++) vectors[c * n + j] = phases[j] * real.Vectors[c * n + j];
+                    EigenvectorPhase.Normalize(vectors, n, count);
+                    complex = new ComplexEigenResult(real.Values, vectors, n);
+                    name = $"block Davidson (sparse, real gauge; projected: {_solver.EigenSolver.Name})";
+                    IterativeSolves++;
+                }
+            }
+            if (complex is null) { complex = _solver.EigenSolver.LowestComplex(h.ToDenseComplex(), n, count); DenseSolves++; }
+            point = new SolvedPoint(problem, complex.Values, null, complex.Vectors, name);
         }
         _previous = point;
         return point;
     }
 
-    /// <summary>The previous point's vectors re-indexed into this basis.</summary>
-    private (double[]? Guess, int Columns) WarmStart(CompositeBasis basis)
+    /// <summary>
+    /// The previous point's vectors re-indexed into this basis; for a gauged complex problem, rotated back by the
+    /// phases (D†v is real up to one global phase per vector, which is removed before taking the real part).
+    /// </summary>
+    private (double[]? Guess, int Columns) WarmStart(CompositeBasis basis, Complex[]? phases)
     {
-        if (_previous?.RealVectors is not double[] old) return (null, 0);
+        if (_previous is null) return (null, 0);
         int n = basis.Dimension, oldN = _previous.Dimension, columns = _previous.Count;
-        var guess = new double[n * columns];
+        var map = new int[n];
         for (int j = 0; j < n; j++)
+            map[j] = ReferenceEquals(basis, _previous.Problem.Basis) ? j : _previous.Problem.Basis.IndexOf(basis.States[j]);
+        var guess = new double[n * columns];
+        var column = new Complex[n];
+        for (int c = 0; c < columns; c++)
         {
-            int o = ReferenceEquals(basis, _previous.Problem.Basis) ? j : _previous.Problem.Basis.IndexOf(basis.States[j]);
-            if (o < 0) continue;
-            for (int c = 0; c < columns; c++) guess[c * n + j] = old[c * oldN + o];
+            for (int j = 0; j < n; j++)
+            {
+                int o = map[j];
+                column[j] = o < 0 ? Complex.Zero
+                    : _previous.RealVectors is double[] real ? real[c * oldN + o]
+                    : _previous.ComplexVectors![c * oldN + o];
+                if (phases is not null) column[j] = Complex.Conjugate(phases[j]) * column[j];
+            }
+            int pinned = EigenvectorPhase.PinnedIndex(column);
+            var rotate = column[pinned] == Complex.Zero ? Complex.One : Complex.Conjugate(column[pinned]) / column[pinned].Magnitude;
+            for (int j = 0; j < n; j++) guess[c * n + j] = (rotate * column[j]).Real;
         }
         return (guess, columns);
     }
