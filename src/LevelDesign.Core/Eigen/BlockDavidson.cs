@@ -14,7 +14,7 @@ public sealed class BlockDavidson
     /// <param name="residualTolerance">Converged when every wanted ‖A x − θ x‖ is below this (GHz); the Ritz
     /// value error is then below residual²/gap, far under it for any resolved gap.</param>
     /// <param name="guard">Extra vectors carried beyond those wanted: they keep a state entering from above from being missed.</param>
-    public BlockDavidson(IEigenSolver projected, double residualTolerance = 1e-8, int maxIterations = 40, int guard = 6)
+    public BlockDavidson(IEigenSolver projected, double residualTolerance = 1e-6, int maxIterations = 40, int guard = 6)
     {
         Projected = projected;
         ResidualTolerance = residualTolerance;
@@ -122,7 +122,8 @@ public sealed class BlockDavidson
                 TensorPrimitives.MultiplyAdd(ritz.AsSpan(c * n, n), -theta, ritzProduct.AsSpan(c * n, n), residual);
                 double norm = Math.Sqrt(TensorPrimitives.Dot(residual, residual));
                 if (norm <= ResidualTolerance) continue;
-                if (c < count) converged = false;
+                if (c >= count) continue;   // guard vectors ride along uncorrected
+                converged = false;
                 var t = new double[n];
                 for (int i = 0; i < n; i++)
                 {

@@ -22,7 +22,8 @@ internal sealed class PointSolver
     {
         _solver = solver;
         _options = options;
-        _iterative = options.Iterative ? new BlockDavidson(solver.EigenSolver) : null;
+        // the projected problems are small (tens of states): the managed solver beats a threaded native call there
+        _iterative = options.Iterative ? new BlockDavidson(EigenSolvers.Managed) : null;
     }
 
     public int IterativeSolves { get; private set; }
@@ -43,7 +44,7 @@ internal sealed class PointSolver
             {
                 var (guess, columns) = WarmStart(problem.Basis, null);
                 result = _iterative.TryLowest(h.ToCsrReal(), count, guess, columns);
-                if (result is not null) { name = $"block Davidson (sparse; projected: {_solver.EigenSolver.Name})"; IterativeSolves++; }
+                if (result is not null) { name = $"block Davidson (sparse; projected: {_iterative.Projected.Name})"; IterativeSolves++; }
             }
             if (result is null) { result = _solver.EigenSolver.LowestReal(h.ToDenseReal(), n, count); DenseSolves++; }
             point = new SolvedPoint(problem, result.Values, result.Vectors, null, name);
@@ -64,7 +65,7 @@ internal sealed class PointSolver
                         for (int j = 0; j < n; j++) vectors[c * n + j] = phases[j] * real.Vectors[c * n + j];
                     EigenvectorPhase.Normalize(vectors, n, count);
                     complex = new ComplexEigenResult(real.Values, vectors, n);
-                    name = $"block Davidson (sparse, real gauge; projected: {_solver.EigenSolver.Name})";
+                    name = $"block Davidson (sparse, real gauge; projected: {_iterative.Projected.Name})";
                     IterativeSolves++;
                 }
             }
