@@ -7,7 +7,8 @@ namespace LevelDesign.Core.Sweeps;
 /// <summary>
 /// Solves for every bias in a range where a named quantity equals a target (e.g. "qa.f01" = 5.25 GHz, or
 /// "zz:qa:qb" = 0): the range is scanned with a labelled sweep, and each sign change of (quantity − target)
-/// between neighbouring points is refined by Brent's bracketing root finder. Every root is reported.
+/// between neighbouring points is refined by Brent's bracketing root finder. Every root is reported; a sign
+/// change that is a jump rather than a root is reported with Refined = false and its residual.
 /// </summary>
 public static class TargetSolver
 {
@@ -40,7 +41,10 @@ public static class TargetSolver
             if (MathNet.Numerics.RootFinding.Brent.TryFindRoot(Residual, x[i], x[i + 1], tolerance, 200, out double root))
             {
                 double r = Residual(root);
-                roots.Add(new TargetRoot(quantity, target, root, target + r, r, true));
+                // a jump (e.g. a label moving to another state) changes sign without a root: Brent converges onto
+                // the jump and leaves a residual of the jump's size, so it is reported as not refined
+                bool isRoot = Math.Abs(r) <= Math.Max(1e-9, 1e-6 * Math.Max(Math.Abs(f[i]), Math.Abs(f[i + 1])));
+                roots.Add(new TargetRoot(quantity, target, root, target + r, r, isRoot));
             }
             else
             {
