@@ -1,4 +1,5 @@
 using System.Numerics;
+using LevelDesign.Core.Eigen;
 
 namespace LevelDesign.Core.Composite;
 
@@ -68,4 +69,8 @@ public sealed class SparseHermitian
         }
         return m;
     }
+
+    /// <summary>Compressed-row real copy (both triangles) for the iterative eigensolver; only valid when <see cref="IsReal"/>.</summary>
+    public CsrMatrix ToCsrReal() =>
+        CsrMatrix.FromLowerTriangle(Dimension, LowerEntries().Select(e => (e.Row, e.Column, e.Value.Real)));
 }

@@ -1,0 +1,108 @@
+using System.Diagnostics;
+using LevelDesign.Bench;
+using LevelDesign.Core.Analysis;
+using LevelDesign.Core.Composite;
+using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Eigen;
+using LevelDesign.Core.Sweeps;
+
+// Benchmarks only: figures are printed, never asserted. Run: dotnet run -c Release --project src/LevelDesign.Bench
+Console.WriteLine(EigenSolvers.Describe());
+Console.WriteLine($"cores: {Environment.ProcessorCount}");
+var device = ReferenceDevice.Build();
+var axis = new SweepAxis("c.flux", 0.0, 0.45, 201, []);
+var resolve = ParameterResolver.ForPaths(device, [axis]);
+var plan = new SweepPlan([axis]);
+
+// --- convergence of the cutoffs: ZZ and 2χ when every cutoff is raised
+{
+    var solver = new DeviceSolver();
+    var baseQ = DerivedQuantities.From(solver.Solve(device)).Named();
+    var raised = device with { Truncation = ReferenceDevice.Build(8, 7).Truncation };
+    var raisedQ = DerivedQuantities.From(solver.Solve(raised)).Named();
+    var p = solver.Prepare(device);
+    Console.WriteLine($"composite dimension {p.Basis.Dimension}, dressed states per point {DeviceSolver.DefaultDressedCount(p.Basis)}, stored entries {p.Hamiltonian.StoredEntries}");
+    foreach (string name in new[] { "zz:qa:qb", "chi2:qa:ra", "chi2:qb:rb" })
+        Console.WriteLine($"  {name} = {baseQ[name] * 1e6:F3} kHz; change when raised to 8 levels / 7 excitations: {(raisedQ[name] - baseQ[name]) * 1e6:F4} kHz");
+}
+
+double Seconds(Action action)
+{
+    var sw = Stopwatch.StartNew();
+    action();
+    return sw.Elapsed.TotalSeconds;
+}
+
+SweepResult Sweep(SweepOptions options) => SweepRunner.RunAsync(resolve, plan, options).GetAwaiter().GetResult();
+
+if (args.Contains("--profile"))
+{
+    var biases = Enumerable.Range(0, 60).Select(i => SweepGrid.Value(axis, i)).ToArray();
+    Profile.Run(resolve, biases, EigenSolvers.Managed);
+    Profile.Run(resolve, biases, EigenSolvers.Active);
+    Profile.Run(resolve, biases, EigenSolvers.Managed);
+    return;
+}
+
+// warm-up (JIT, native library load)
+Sweep(new SweepOptions { Parallelism = 2 });
+
+double sweep2 = Seconds(() => Sweep(new SweepOptions { Parallelism = 2 }));
+{
+    // split of the 2-chunk sweep: solving (parallel) vs labelling and quantities (sequential, after the last point)
+    var clock = Stopwatch.StartNew();
+    double solvedAt = 0;
+    var progress = new TimedProgress(clock, t => solvedAt = t, axis.Count);
+    SweepRunner.RunAsync(resolve, plan, new SweepOptions { Parallelism = 2 }, progress).GetAwaiter().GetResult();
+    Console.WriteLine($"  (2 chunks: points solved after {solvedAt:F3} s, labelled and finished at {clock.Elapsed.TotalSeconds:F3} s)");
+}
+double sweep1 = Seconds(() => Sweep(new SweepOptions { Parallelism = 1 }));
+double sweepManaged2 = Seconds(() => Sweep(new SweepOptions { Parallelism = 2, Solver = new DeviceSolver(EigenSolvers.Managed) }));
+double peakAfterSweeps = Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0;
+double sweepDense2 = Seconds(() => Sweep(new SweepOptions { Parallelism = 2, Iterative = false }));
+Console.WriteLine("sweep, 201 points, labels + derived quantities, iterative (projected solves managed):");
+Console.WriteLine($"  2 chunks: {sweep2:F3} s   1 chunk: {sweep1:F3} s   parallel speed-up {sweep1 / sweep2:F2}x");
+Console.WriteLine($"  2 chunks, no native LAPACK anywhere (managed dense fallback): {sweepManaged2:F3} s");
+Console.WriteLine($"  2 chunks, same pipeline with dense {EigenSolvers.Active.Name} instead of iterative: {sweepDense2:F3} s");
+Console.WriteLine($"  peak working set after the sweeps: {peakAfterSweeps:F0} MB");
+
+// --- the same matrices, dense
+var problems = new List<CompositeProblem>();
+var prepSolver = new DeviceSolver();
+double prepare = Seconds(() => { for (int i = 0; i < axis.Count; i++) problems.Add(prepSolver.Prepare(resolve([SweepGrid.Value(axis, i)]))); });
+int n = problems[0].Basis.Dimension, k = DeviceSolver.DefaultDressedCount(problems[0].Basis);
+double EigenOnly(IEigenSolver eigen, IEnumerable<CompositeProblem> set)
+{
+    double seconds = 0;
+    foreach (var p in set)
+    {
+        var m = p.Hamiltonian.ToDenseReal();   // densifying is not timed: only the solve
+        seconds += Seconds(() => eigen.LowestReal(m, n, k));
+    }
+    return seconds;
+}
+double denseNative = EigenSolvers.Native is IEigenSolver native ? EigenOnly(native, problems) : double.NaN;
+const int managedSample = 10;   // the plain managed solve is slow: time a sample and scale to 201
+double denseManaged = EigenOnly(EigenSolvers.Managed, problems.Where((_, i) => i % 20 == 0).Take(managedSample)) * axis.Count / managedSample;
+Console.WriteLine($"same 201 matrices, lowest {k} of {n}, eigen solve only, serial:");
+Console.WriteLine($"  dense native LAPACK: {denseNative:F3} s ({denseNative / axis.Count * 1e3:F1} ms/point)   ratio to iterative sweep (2 chunks): {denseNative / sweep2:F1}x");
+Console.WriteLine($"  dense managed (MathNet), scaled from {managedSample}: {denseManaged:F3} s   ratio: {denseManaged / sweep2:F1}x");
+Console.WriteLine($"  preparing the 201 problems alone (bare solves cached, basis, assembly): {prepare:F3} s");
+
+// --- core engine: whole spectrum of one point, each eigensolver path, total vs eigen solve alone
+foreach (var (label, solverPath) in new[] { ("native", EigenSolvers.Native), ("managed", (IEigenSolver?)EigenSolvers.Managed) })
+{
+    if (solverPath is null) { Console.WriteLine($"engine ({label}): unavailable — {EigenSolvers.NativeUnavailableReason}"); continue; }
+    var engine = new DeviceSolver(solverPath);
+    engine.Solve(device, n);
+    const int repeats = 3;
+    double total = Seconds(() => { for (int r = 0; r < repeats; r++) engine.Solve(device, n); }) / repeats;
+    var matrix = engine.Prepare(device).Hamiltonian.ToDenseReal();
+    double eigenOnly = Seconds(() => { for (int r = 0; r < repeats; r++) solverPath.LowestReal(matrix, n, n); }) / repeats;
+    double totalK = Seconds(() => { for (int r = 0; r < repeats; r++) engine.Solve(device); }) / repeats;
+    double eigenK = Seconds(() => { for (int r = 0; r < repeats; r++) solverPath.LowestReal(matrix, n, k); }) / repeats;
+    Console.WriteLine($"engine ({label}), all {n} states: total {total * 1e3:F1} ms, eigen alone {eigenOnly * 1e3:F1} ms, overhead {(total / eigenOnly - 1) * 100:F0}%");
+    Console.WriteLine($"engine ({label}), lowest {k}: total {totalK * 1e3:F1} ms, eigen alone {eigenK * 1e3:F1} ms, overhead {(totalK / eigenK - 1) * 100:F0}%");
+}
+
+Console.WriteLine($"peak working set: {Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0:F0} MB");

@@ -1,0 +1,179 @@
+using System.Numerics;
+using System.Numerics.Tensors;
+using LevelDesign.Core.Composite;
+using LevelDesign.Core.Labels;
+
+namespace LevelDesign.Core.Sweeps;
+
+/// <summary>
+/// Gives the states of each sweep point their labels, carried from the neighbouring point.
+/// By character: every label goes to the state that carries most of its bare weight, with a bonus
+/// (<see cref="SweepOptions.Hysteresis"/>) for the state that continues, by eigenvector overlap, the state
+/// that held it at the neighbour; a one-to-one (Hungarian) assignment settles it. A label therefore follows
+/// the diabatic identity through a crossing, and does not flicker where several bare states share a state.
+/// By order: the k-th state keeps the label the k-th state had at the neighbour.
+/// A point is marked ambiguous when a label could as well have gone elsewhere (margin below
+/// <see cref="SweepOptions.AmbiguityMargin"/>) or, by order, when two levels are degenerate.
+/// </summary>
+internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int judgedCount)
+{
+    private const int TopComponents = 4;
+    private const double DegenerateGHz = 1e-9;
+
+    public (DressedSpectrum Spectrum, bool Ambiguous) First(SolvedPoint point)
+    {
+        var weights = point.Weights();
+        var labels = Labeller.Label(weights, point.Dimension, point.Count, TopComponents, options.AmbiguityMargin);
+        bool ambiguous = labels.Take(judgedCount).Any(l => l.Ambiguous);
+        return (Build(point, weights, labels), ambiguous);
+    }
+
+    public (DressedSpectrum Spectrum, bool Ambiguous) Next(SolvedPoint point, SolvedPoint previous, DressedSpectrum previousSpectrum)
+    {
+        var weights = point.Weights();
+        int n = point.Dimension, count = point.Count;
+        // the neighbour's labels, as indices of this point's basis
+        var previousLabels = new int[previous.Count];
+        for (int i = 0; i < previous.Count; i++)
+            previousLabels[i] = point.Problem.Basis.IndexOf(previous.Problem.Basis.States[previousSpectrum.Labels[i].BareIndex]);
+
+        return mode == LabelMode.ByOrder
+            ? ByOrder(point, weights, previousLabels)
+            : ByCharacter(point, weights, previousLabels, Overlaps(previous, point));
+    }
+
+    private (DressedSpectrum, bool) ByOrder(SolvedPoint point, double[] weights, int[] previousLabels)
+    {
+        int n = point.Dimension, count = point.Count;
+        var taken = new HashSet<int>();
+        var chosen = new int[count];
+        for (int k = 0; k < count; k++)
+        {
+            int label = k < previousLabels.Length ? previousLabels[k] : -1;
+            if (label < 0 || !taken.Add(label))
+            {
+                // a level new to this point (more levels, or its label pruned): its own largest free component
+                label = Enumerable.Range(0, n).Where(j => !taken.Contains(j)).MaxBy(j => weights[k * n + j]);
+                taken.Add(label);
+            }
+            chosen[k] = label;
+        }
+        bool ambiguous = false;
+        for (int k = 0; k + 1 < Math.Min(count, judgedCount + 1); k++)
+            if (point.Values[k + 1] - point.Values[k] < DegenerateGHz) ambiguous = true;
+        var labels = new DressedLabel[count];
+        for (int k = 0; k < count; k++) labels[k] = MakeLabel(weights, n, k, chosen[k], k < judgedCount && ambiguous && IsDegenerate(point, k));
+        return (Build(point, weights, labels), ambiguous);
+    }
+
+    private static bool IsDegenerate(SolvedPoint point, int k) =>
+        (k > 0 && point.Values[k] - point.Values[k - 1] < DegenerateGHz) ||
+        (k + 1 < point.Count && point.Values[k + 1] - point.Values[k] < DegenerateGHz);
+
+    private (DressedSpectrum, bool) ByCharacter(SolvedPoint point, double[] weights, int[] previousLabels, double[,] overlaps)
+    {
+        int n = point.Dimension, count = point.Count;
+        var candidates = new List<int>();
+        var column = new Dictionary<int, int>();
+        void AddCandidate(int bare)
+        {
+            if (bare >= 0 && column.TryAdd(bare, candidates.Count)) candidates.Add(bare);
+        }
+        foreach (int label in previousLabels) AddCandidate(label);
+        for (int k = 0; k < count; k++)
+            foreach (int j in TopIndices(weights.AsSpan(k * n, n), 3)) AddCandidate(j);
+
+        var owner = new int[candidates.Count];   // neighbour state that held each candidate label, or −1
+        Array.Fill(owner, -1);
+        for (int i = 0; i < previousLabels.Length; i++)
+            if (previousLabels[i] >= 0) owner[column[previousLabels[i]]] = i;
+
+        var score = new double[count, candidates.Count];
+        var cost = new double[count, candidates.Count];
+        for (int k = 0; k < count; k++)
+            for (int c = 0; c < candidates.Count; c++)
+            {
+                double s = weights[k * n + candidates[c]];
+                if (owner[c] >= 0) s += options.Hysteresis * overlaps[owner[c], k];
+                score[k, c] = s;
+                cost[k, c] = -s;
+            }
+        var assigned = Assignment.Solve(cost);
+
+        bool ambiguous = false;
+        var labels = new DressedLabel[count];
+        for (int k = 0; k < count; k++)
+        {
+            double best = score[k, assigned[k]], runnerUp = double.NegativeInfinity;
+            for (int c = 0; c < candidates.Count; c++)
+                if (c != assigned[k]) runnerUp = Math.Max(runnerUp, score[k, c]);
+            bool close = best - runnerUp < options.AmbiguityMargin && k < judgedCount;
+            ambiguous |= close;
+            labels[k] = MakeLabel(weights, n, k, candidates[assigned[k]], close);
+        }
+        return (Build(point, weights, labels), ambiguous);
+    }
+
+    /// <summary>|⟨previous i|current k⟩|², matching product states across the two bases.</summary>
+    private static double[,] Overlaps(SolvedPoint previous, SolvedPoint current)
+    {
+        int n = current.Dimension, oldN = previous.Dimension;
+        var map = current.IndexMapTo(previous.Problem.Basis);
+        var result = new double[previous.Count, current.Count];
+        if (previous.RealVectors is double[] oldReal && current.RealVectors is double[] real)
+        {
+            var gathered = new double[n];
+            for (int i = 0; i < previous.Count; i++)
+            {
+                for (int j = 0; j < n; j++) gathered[j] = map[j] < 0 ? 0 : oldReal[i * oldN + map[j]];
+                for (int k = 0; k < current.Count; k++)
+                {
+                    double d = TensorPrimitives.Dot(gathered, real.AsSpan(k * n, n));
+                    result[i, k] = d * d;
+                }
+            }
+            return result;
+        }
+        Complex Old(int i, int j) => previous.ComplexVectors?[i * oldN + j] ?? previous.RealVectors![i * oldN + j];
+        Complex New(int k, int j) => current.ComplexVectors?[k * n + j] ?? current.RealVectors![k * n + j];
+        for (int i = 0; i < previous.Count; i++)
+            for (int k = 0; k < current.Count; k++)
+            {
+                Complex sum = 0;
+                for (int j = 0; j < n; j++)
+                    if (map[j] >= 0) sum += Complex.Conjugate(Old(i, map[j])) * New(k, j);
+                result[i, k] = sum.Real * sum.Real + sum.Imaginary * sum.Imaginary;
+            }
+        return result;
+    }
+
+    private static DressedLabel MakeLabel(double[] weights, int n, int k, int bare, bool ambiguous)
+    {
+        var top = TopIndices(weights.AsSpan(k * n, n), TopComponents);
+        var components = top.Select(j => new Component(j, weights[k * n + j])).ToArray();
+        return new DressedLabel(bare, weights[k * n + bare], ambiguous, components);
+    }
+
+    /// <summary>Indices of the largest entries, largest first (a partial selection; vectors are long, tops short).</summary>
+    private static int[] TopIndices(ReadOnlySpan<double> values, int count)
+    {
+        count = Math.Min(count, values.Length);
+        var top = new int[count];
+        var topValues = new double[count];
+        int filled = 0;
+        for (int j = 0; j < values.Length; j++)
+        {
+            double v = values[j];
+            if (filled == count && v <= topValues[count - 1]) continue;
+            int p = filled < count ? filled++ : count - 1;
+            while (p > 0 && topValues[p - 1] < v) { top[p] = top[p - 1]; topValues[p] = topValues[p - 1]; p--; }
+            top[p] = j;
+            topValues[p] = v;
+        }
+        return top;
+    }
+
+    private static DressedSpectrum Build(SolvedPoint point, double[] weights, DressedLabel[] labels) =>
+        new(point.Problem.Device, point.Problem.Bare, point.Problem.Couplers, point.Problem.Basis, point.Values, weights,
+            point.ComplexVectors, point.RealVectors, labels, point.SolverName, point.IsComplex);
+}

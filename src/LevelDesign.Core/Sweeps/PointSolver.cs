@@ -1,0 +1,108 @@
+using System.Numerics;
+using LevelDesign.Core.Composite;
+using LevelDesign.Core.Eigen;
+using LevelDesign.Core.Model;
+
+namespace LevelDesign.Core.Sweeps;
+
+/// <summary>
+/// Solves consecutive points of one contiguous stretch of a sweep. Real matrices go to the sparse iterative
+/// solver warm-started from the previous point's vectors (mapped by product state, since the basis order
+/// follows bare energies and can change); when it does not converge, or the matrix is complex, the dense
+/// solver of the shared <see cref="DeviceSolver"/> is used. Not thread-safe: one per chunk.
+/// </summary>
+internal sealed class PointSolver
+{
+    private readonly DeviceSolver _solver;
+    private readonly SweepOptions _options;
+    private readonly BlockDavidson? _iterative;
+    private SolvedPoint? _previous;
+
+    public PointSolver(DeviceSolver solver, SweepOptions options)
+    {
+        _solver = solver;
+        _options = options;
+        // the projected problems are small (tens of states): the managed solver beats a threaded native call there
+        _iterative = options.Iterative ? new BlockDavidson(EigenSolvers.Managed) : null;
+    }
+
+    public int IterativeSolves { get; private set; }
+    public int DenseSolves { get; private set; }
+
+    public SolvedPoint Solve(Device device, int? levels)
+    {
+        var problem = _solver.Prepare(device);
+        int n = problem.Basis.Dimension;
+        int count = Math.Min(n, levels ?? DeviceSolver.DefaultDressedCount(problem.Basis));
+        var h = problem.Hamiltonian;
+        SolvedPoint point;
+        if (h.IsReal)
+        {
+            RealEigenResult? result = null;
+            string name = _solver.EigenSolver.Name;
+            if (_iterative is not null && n >= _options.IterativeMinimumDimension)
+            {
+                var (guess, columns) = WarmStart(problem.Basis, null);
+                result = _iterative.TryLowest(h.ToCsrReal(), count, guess, columns);
+                if (result is not null) { name = $"block Davidson (sparse; projected: {_iterative.Projected.Name})"; IterativeSolves++; }
+            }
+            if (result is null) { result = _solver.EigenSolver.LowestReal(h.ToDenseReal(), n, count); DenseSolves++; }
+            point = new SolvedPoint(problem, result.Values, result.Vectors, null, name);
+        }
+        else
+        {
+            ComplexEigenResult? complex = null;
+            string name = _solver.EigenSolver.Name;
+            if (_iterative is not null && n >= _options.IterativeMinimumDimension
+                && RealGauge.TryFind(n, h.LowerEntries()) is var (phases, realEntries))
+            {
+                var (guess, columns) = WarmStart(problem.Basis, phases);
+                var real = _iterative.TryLowest(CsrMatrix.FromLowerTriangle(n, realEntries), count, guess, columns);
+                if (real is not null)
+                {
+                    var vectors = new Complex[n * count];
+                    for (int c = 0; c < count; c++)
+                        for (int j = 0; j < n; j++) vectors[c * n + j] = phases[j] * real.Vectors[c * n + j];
+                    EigenvectorPhase.Normalize(vectors, n, count);
+                    complex = new ComplexEigenResult(real.Values, vectors, n);
+                    name = $"block Davidson (sparse, real gauge; projected: {_iterative.Projected.Name})";
+                    IterativeSolves++;
+                }
+            }
+            if (complex is null) { complex = _solver.EigenSolver.LowestComplex(h.ToDenseComplex(), n, count); DenseSolves++; }
+            point = new SolvedPoint(problem, complex.Values, null, complex.Vectors, name);
+        }
+        _previous = point;
+        return point;
+    }
+
+    /// <summary>
+    /// The previous point's vectors re-indexed into this basis; for a gauged complex problem, rotated back by the
+    /// phases (D†v is real up to one global phase per vector, which is removed before taking the real part).
+    /// </summary>
+    private (double[]? Guess, int Columns) WarmStart(CompositeBasis basis, Complex[]? phases)
+    {
+        if (_previous is null) return (null, 0);
+        int n = basis.Dimension, oldN = _previous.Dimension, columns = _previous.Count;
+        var map = new int[n];
+        for (int j = 0; j < n; j++)
+            map[j] = ReferenceEquals(basis, _previous.Problem.Basis) ? j : _previous.Problem.Basis.IndexOf(basis.States[j]);
+        var guess = new double[n * columns];
+        var column = new Complex[n];
+        for (int c = 0; c < columns; c++)
+        {
+            for (int j = 0; j < n; j++)
+            {
+                int o = map[j];
+                column[j] = o < 0 ? Complex.Zero
+                    : _previous.RealVectors is double[] real ? real[c * oldN + o]
+                    : _previous.ComplexVectors![c * oldN + o];
+                if (phases is not null) column[j] = Complex.Conjugate(phases[j]) * column[j];
+            }
+            int pinned = EigenvectorPhase.PinnedIndex(column);
+            var rotate = column[pinned] == Complex.Zero ? Complex.One : Complex.Conjugate(column[pinned]) / column[pinned].Magnitude;
+            for (int j = 0; j < n; j++) guess[c * n + j] = (rotate * column[j]).Real;
+        }
+        return (guess, columns);
+    }
+}

@@ -1,0 +1,37 @@
+using LevelDesign.Core.Composite;
+using LevelDesign.Core.Labels;
+
+namespace LevelDesign.Core.Sweeps;
+
+/// <summary>
+/// How a sweep is computed. <see cref="Solver"/> is shared by every point so unchanged elements are
+/// diagonalised once (its cache compares elements by record equality).
+/// </summary>
+public sealed record SweepOptions
+{
+    /// <summary>Shared solver (and bare-spectrum cache); null makes one with the active eigensolver.</summary>
+    public DeviceSolver? Solver { get; init; }
+
+    /// <summary>Contiguous chunks computed at once; default all cores.</summary>
+    public int Parallelism { get; init; } = Environment.ProcessorCount;
+
+    /// <summary>Use the warm-started iterative eigensolver on real matrices (dense fallback when it does not converge).</summary>
+    public bool Iterative { get; init; } = true;
+
+    /// <summary>Below this dimension dense solves are as fast, so the iterative path is skipped.</summary>
+    public int IterativeMinimumDimension { get; init; } = 60;
+
+    /// <summary>Points whose chosen states have a purity below this are flagged in hybridization maps.</summary>
+    public double PurityThreshold { get; init; } = 0.99;
+
+    /// <summary>
+    /// How much continuity with the neighbouring point counts when carrying a label by character (in units of
+    /// weight): a label moves to another state only when that state's character beats it by more than this.
+    /// </summary>
+    public double Hysteresis { get; init; } = 0.1;
+
+    /// <summary>Two candidate labels of one state closer than this are called ambiguous.</summary>
+    public double AmbiguityMargin { get; init; } = Labeller.DefaultAmbiguityMargin;
+
+    public DeviceSolver CreateSolver() => Solver ?? new DeviceSolver();
+}

@@ -1,0 +1,40 @@
+using LevelDesign.Core.Composite;
+
+namespace LevelDesign.Core.Sweeps;
+
+/// <summary>
+/// The sweep results table: one row per point, columns named by axis path, label ("|1,0,0⟩", levels in the
+/// device's element order, <see cref="ElementOrder"/>) and quantity name. Formatted by the Export writers.
+/// </summary>
+public sealed record SweepTable(IReadOnlyList<string> AxisPaths, IReadOnlyList<string> ElementOrder, IReadOnlyList<string> Labels,
+    IReadOnlyList<string> QuantityNames, double PurityThreshold, IReadOnlyList<SweepTableRow> Rows)
+{
+    /// <param name="levels">Labels of the lowest this many states at the first point are tracked (default: the plan's, or 12).</param>
+    public static SweepTable From(SweepResult sweep, int? levels = null, double purityThreshold = 0.99)
+    {
+        if (sweep.Points.Count == 0)
+            return new SweepTable(sweep.Plan.Axes.Select(a => a.Path).ToArray(), [], [], [], purityThreshold, []);
+        var first = sweep.Points[0].Spectrum;
+        int count = Math.Min(first.Count, levels ?? sweep.Plan.Levels ?? 12);
+        var states = Enumerable.Range(0, count).Select(first.LabelLevels).ToArray();
+        var names = sweep.Points[0].Quantities.Keys.OrderBy(k => k, StringComparer.Ordinal).ToArray();
+        var rows = sweep.Points.Select(p =>
+        {
+            var energies = states.Select(s => p.Spectrum.EnergyOf(s)).ToArray();
+            var purities = states.Select(s => Purity(p.Spectrum, s)).ToArray();
+            var quantities = names.Select(n => p.Quantities.TryGetValue(n, out double v) ? v : double.NaN).ToArray();
+            bool low = purities.Any(x => x < purityThreshold);
+            return new SweepTableRow(p.Index, p.AxisValues, energies, purities, quantities, p.Ambiguous, low);
+        }).ToArray();
+        return new SweepTable(sweep.Plan.Axes.Select(a => a.Path).ToArray(), first.Device.Elements.Select(e => e.Id).ToArray(),
+            states.Select(LabelText).ToArray(), names, purityThreshold, rows);
+    }
+
+    public static string LabelText(IReadOnlyList<int> levels) => "|" + string.Join(",", levels) + "⟩";
+
+    private static double Purity(DressedSpectrum spectrum, int[] state)
+    {
+        int k = spectrum.DressedIndexOf(state);
+        return k < 0 ? double.NaN : spectrum.Labels[k].Purity;
+    }
+}

@@ -1,0 +1,58 @@
+using LevelDesign.Core.Composite;
+using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Model;
+
+namespace LevelDesign.Core.Sweeps;
+
+/// <summary>
+/// Solves for every bias in a range where a named quantity equals a target (e.g. "qa.f01" = 5.25 GHz, or
+/// "zz:qa:qb" = 0): the range is scanned with a labelled sweep, and each sign change of (quantity − target)
+/// between neighbouring points is refined by Brent's bracketing root finder. Every root is reported; a sign
+/// change that is a jump rather than a root is reported with Refined = false and its residual.
+/// </summary>
+public static class TargetSolver
+{
+    public static async Task<IReadOnlyList<TargetRoot>> FindAllAsync(Func<IReadOnlyList<double>, Device> resolve, SweepAxis axis,
+        string quantity, double target, SweepOptions? options = null, int? levels = null, double tolerance = 1e-12,
+        CancellationToken cancellation = default)
+    {
+        options ??= new SweepOptions();
+        var solver = options.CreateSolver();
+        options = options with { Solver = solver };
+        if (axis.Count < 2) throw new ArgumentException($"axis '{axis.Path}': a root search needs at least 2 scan points");
+        var scan = await SweepRunner.RunAsync(resolve, new SweepPlan([axis], LabelMode.ByCharacter, levels), options, null, cancellation)
+            .ConfigureAwait(false);
+        var x = scan.Points.Select(p => p.AxisValues[0]).ToArray();
+        var f = scan.Points.Select(p => QuantityLookup.Value(p.Quantities, quantity) - target).ToArray();
+
+        double Residual(double bias)
+        {
+            var spectrum = solver.Solve(resolve([bias]), levels);
+            return QuantityLookup.Value(spectrum, quantity) - target;
+        }
+
+        var roots = new List<TargetRoot>();
+        for (int i = 0; i < f.Length; i++)
+        {
+            cancellation.ThrowIfCancellationRequested();
+            if (f[i] == 0) { roots.Add(new TargetRoot(quantity, target, x[i], target, 0, true)); continue; }
+            if (i + 1 >= f.Length || !double.IsFinite(f[i]) || !double.IsFinite(f[i + 1]) || f[i + 1] == 0 || Math.Sign(f[i]) == Math.Sign(f[i + 1]))
+                continue;
+            if (MathNet.Numerics.RootFinding.Brent.TryFindRoot(Residual, x[i], x[i + 1], tolerance, 200, out double root))
+            {
+                double r = Residual(root);
+                // a jump (e.g. a label moving to another state) changes sign without a root: Brent converges onto
+                // the jump and leaves a residual of the jump's size, so it is reported as not refined
+                bool isRoot = Math.Abs(r) <= Math.Max(1e-9, 1e-6 * Math.Max(Math.Abs(f[i]), Math.Abs(f[i + 1])));
+                roots.Add(new TargetRoot(quantity, target, root, target + r, r, isRoot));
+            }
+            else
+            {
+                // the bracket holds a sign change but no smooth root (e.g. a label jump): report it unrefined
+                double middle = 0.5 * (x[i] + x[i + 1]);
+                roots.Add(new TargetRoot(quantity, target, middle, double.NaN, double.NaN, false));
+            }
+        }
+        return roots;
+    }
+}
