@@ -115,6 +115,21 @@ public sealed class DeviceDocument
         return device;
     }
 
+    /// <summary>
+    /// The device at one point of a sweep: each axis's target set to its value and each linked path to
+    /// Scale·value + Shift, on top of <paramref name="start"/> (default: the device at the file's bias values).
+    /// </summary>
+    public Device Resolve(IReadOnlyList<SweepAxis> axes, IReadOnlyList<double> values, IReadOnlyDictionary<string, double>? start = null)
+    {
+        var settings = new Dictionary<string, double>(start ?? new Dictionary<string, double>());
+        for (int i = 0; i < axes.Count; i++)
+        {
+            settings[axes[i].Path] = values[i];
+            foreach (var link in axes[i].Links) settings[link.Path] = link.Scale * values[i] + link.Shift;
+        }
+        return At(settings);
+    }
+
     /// <summary>The device at a named operating point.</summary>
     public Device AtPoint(string name)
     {
