@@ -16,8 +16,7 @@ public static class SourceReader
         var document = new SourceDocument { Root = root };
         foreach (var d in syntax.Diagnostics)
             if (d.Kind == DiagnosticMessageKind.Error)
-                document.SyntaxErrors.Add(new DeviceFileError(path, d.Span.Start.Line + 1, d.Span.Start.Column + 1, "syntax",
-                    "not valid TOML: " + d.Message));
+                document.SyntaxErrors.Add(Explain(path, d.Span.Start.Line + 1, d.Span.Start.Column + 1, d.Message));
         AddEntries(root, syntax.KeyValues, text);
         root.InsertOffset = EndOf(syntax.KeyValues, 0);
         foreach (var table in syntax.Tables)
@@ -32,6 +31,19 @@ public static class SourceReader
             document.Tables.Add(source);
         }
         return document;
+    }
+
+    /// <summary>Rewords the parser's message for a repeated key or table as a duplicate, naming the first place.</summary>
+    private static DeviceFileError Explain(string path, int line, int column, string message)
+    {
+        var m = System.Text.RegularExpressions.Regex.Match(message, @"The key `([^`]+)` is already defined at \((\d+),(\d+)\)");
+        if (!m.Success) return new DeviceFileError(path, line, column, "syntax", "not valid TOML: " + message);
+        string key = m.Groups[1].Value, first = m.Groups[2].Value;
+        var parts = key.Split('.');
+        string text = parts.Length == 2 && parts[0] is "elements" or "couplers" or "biases" or "points" or "sweeps"
+            ? $"duplicate id '{parts[1]}': [{key}] is already defined at line {first}; ids must be unique"
+            : $"key '{parts[^1]}' is given twice (first at line {first})";
+        return new DeviceFileError(path, line, column, key, text);
     }
 
     private static int EndOf(SyntaxList<KeyValueSyntax> items, int fallback)
