@@ -1,0 +1,13 @@
+using LevelDesign.Core.DeviceFiles.Source;
+using LevelDesign.Core.Model;
+
+namespace LevelDesign.Core.DeviceFiles;
+
+/// <summary>Everything read from a valid device file, before it is wrapped in a <see cref="DeviceDocument"/>.</summary>
+public sealed record DeviceFileContent(
+    SourceDocument Source,
+    Device Device,
+    IReadOnlyList<BiasDefinition> Biases,
+    IReadOnlyList<OperatingPoint> Points,
+    IReadOnlyList<SweepDefinition> Sweeps,
+    long CompositeDimension);

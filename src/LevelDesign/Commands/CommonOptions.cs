@@ -1,0 +1,28 @@
+using System.CommandLine;
+
+namespace LevelDesign.Commands;
+
+/// <summary>Options shared by several commands.</summary>
+public static class CommonOptions
+{
+    public static Argument<string> File() => new("FILE") { Description = "device file (TOML, see docs/device-format.md)" };
+
+    public static Option<string[]> At() => new("--at")
+    {
+        Description = "set a bias (control value, e.g. qa_flux=0.1 or qc_flux=0.6mA) or a parameter path (qa.ec=210MHz); repeatable",
+        AllowMultipleArgumentsPerToken = false,
+    };
+
+    public static Option<string?> Point() => new("--point") { Description = "start from a named operating point of the file" };
+
+    public static Option<bool> Json() => new("--json") { Description = "write JSON to stdout" };
+
+    public static Option<bool> Csv() => new("--csv") { Description = "write CSV to stdout" };
+
+    public static Option<bool> AllowLarge() => new("--allow-large")
+    {
+        Description = "compute even when the composite matrix is estimated not to fit in memory (same as allow_large = true in [truncation])",
+    };
+
+    public static Option<int?> Levels() => new("--levels") { Description = "number of dressed states to report" };
+}

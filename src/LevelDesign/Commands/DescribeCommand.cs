@@ -1,0 +1,41 @@
+using System.CommandLine;
+using LevelDesign.Core.Composite;
+using LevelDesign.Output;
+
+namespace LevelDesign.Commands;
+
+/// <summary>leveldesign describe FILE [--at ...] --json: the fully resolved model.</summary>
+public static class DescribeCommand
+{
+    public static Command Create()
+    {
+        var file = CommonOptions.File();
+        var at = CommonOptions.At();
+        var point = CommonOptions.Point();
+        var json = CommonOptions.Json();
+        var allowLarge = CommonOptions.AllowLarge();
+        var command = new Command("describe", "the fully resolved model (energies in GHz after every conversion), enough to rebuild the Hamiltonian")
+            { file, at, point, json, allowLarge };
+        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(at), parse.GetValue(point), parse.GetValue(allowLarge)));
+        return command;
+    }
+
+    public static int Run(string path, string[]? at, string? point, bool allowLarge)
+    {
+        var document = DeviceInput.Load(path, allowLarge);
+        if (document is null) return ExitCodes.InvalidInput;
+        var device = DeviceInput.Resolve(document, point, at, out var applied);
+        if (device is null) return ExitCodes.InvalidInput;
+        try
+        {
+            var problem = new DeviceSolver().Prepare(device);
+            // JSON is the only output form: the model is data for another program.
+            Console.WriteLine(JsonValues.Write(DescribeFormatter.Describe(problem, applied)));
+            return ExitCodes.Ok;
+        }
+        catch (Exception e) when (ComputationErrors.IsExpected(e))
+        {
+            return ComputationErrors.Report(path, e);
+        }
+    }
+}

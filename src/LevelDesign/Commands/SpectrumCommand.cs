@@ -1,0 +1,60 @@
+using System.CommandLine;
+using LevelDesign.Core.Composite;
+using LevelDesign.Output;
+
+namespace LevelDesign.Commands;
+
+/// <summary>leveldesign spectrum FILE [--at ...] [--levels K] [--json|--csv]: dressed states and derived quantities.</summary>
+public static class SpectrumCommand
+{
+    public static Command Create()
+    {
+        var file = CommonOptions.File();
+        var at = CommonOptions.At();
+        var point = CommonOptions.Point();
+        var levels = CommonOptions.Levels();
+        var json = CommonOptions.Json();
+        var csv = CommonOptions.Csv();
+        var allowLarge = CommonOptions.AllowLarge();
+        var command = new Command("spectrum", "dressed states (label, energy, purity, components) and derived quantities at one bias point")
+            { file, at, point, levels, json, csv, allowLarge };
+        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(at), parse.GetValue(point), parse.GetValue(levels),
+            parse.GetValue(json), parse.GetValue(csv), parse.GetValue(allowLarge)));
+        return command;
+    }
+
+    public static int Run(string path, string[]? at, string? point, int? levels, bool json, bool csv, bool allowLarge)
+    {
+        if (json && csv) { Console.Error.WriteLine("choose one of --json and --csv"); return ExitCodes.InvalidInput; }
+        if (levels is < 1) { Console.Error.WriteLine("--levels must be at least 1"); return ExitCodes.InvalidInput; }
+        var document = DeviceInput.Load(path, allowLarge);
+        if (document is null) return ExitCodes.InvalidInput;
+        var device = DeviceInput.Resolve(document, point, at, out var applied);
+        if (device is null) return ExitCodes.InvalidInput;
+        try
+        {
+            var (spectrum, shown) = Compute(new DeviceSolver(), device, levels);
+            if (json) Console.WriteLine(JsonValues.Write(SpectrumFormatter.Report(device.Name, spectrum, shown, applied)));
+            else if (csv) Console.Write(SpectrumFormatter.StatesCsv(spectrum, shown));
+            else Console.Write(SpectrumFormatter.Table(device.Name, spectrum, shown));
+            return ExitCodes.Ok;
+        }
+        catch (Exception e) when (ComputationErrors.IsExpected(e))
+        {
+            return ComputationErrors.Report(path, e);
+        }
+    }
+
+    /// <summary>
+    /// Solves for enough states to derive every quantity (all states up to two excitations), or more when asked,
+    /// and returns how many to show.
+    /// </summary>
+    public static (DressedSpectrum Spectrum, int Shown) Compute(DeviceSolver solver, Core.Model.Device device, int? levels)
+    {
+        var problem = solver.Prepare(device);
+        int needed = DeviceSolver.DefaultDressedCount(problem.Basis);
+        int count = Math.Min(problem.Basis.Dimension, Math.Max(needed, levels ?? 0));
+        var spectrum = solver.Solve(problem, count);
+        return (spectrum, Math.Min(levels ?? spectrum.Count, spectrum.Count));
+    }
+}
