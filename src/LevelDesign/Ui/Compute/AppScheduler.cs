@@ -7,7 +7,7 @@ public sealed class AppScheduler(IApplication app) : IUiScheduler
 {
     public void Post(Action action) => app.Invoke(action);
 
-    public object Delay(TimeSpan delay, Action action) => app.AddTimeout(delay, () => { action(); return false; });
+    public object Delay(TimeSpan delay, Action action) => app.AddTimeout(delay, () => { action(); return false; })!;
 
     public void Cancel(object handle) => app.RemoveTimeout(handle);
 }

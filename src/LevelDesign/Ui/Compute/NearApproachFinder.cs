@@ -1,32 +1,45 @@
 namespace LevelDesign.Ui.Compute;
 
 /// <summary>
-/// Until the sweep engine's crossing finder is merged: for every pair of branches that are energy
-/// neighbours somewhere on the sweep, the point where their gap is smallest; only minima inside the sweep
-/// (not at its ends) count as crossings. Ranked by gap, smallest first.
+/// Until the sweep engine's crossing finder is merged: for every pair of branches, the sweep point where
+/// their gap is smallest; it counts as a crossing only when it lies inside the sweep (a true minimum, not an
+/// end point) and the two are energy neighbours there. Ranked by gap, smallest first.
 /// </summary>
 public static class NearApproachFinder
 {
     public static IReadOnlyList<NearApproach> Find(SpectrumSeries series, int limit = 40)
     {
         int n = series.Axis.Length;
-        var best = new Dictionary<(int, int), NearApproach>();
-        for (int i = 0; i < n; i++)
-        {
-            var present = series.Branches.Where(b => double.IsFinite(b.Frequencies[i])).OrderBy(b => b.Frequencies[i]).ToList();
-            for (int k = 0; k + 1 < present.Count; k++)
+        var found = new List<NearApproach>();
+        var branches = series.Branches;
+        for (int a = 0; a < branches.Count; a++)
+            for (int b = a + 1; b < branches.Count; b++)
             {
-                var (a, b) = (present[k], present[k + 1]);
-                var key = a.BareIndex < b.BareIndex ? (a.BareIndex, b.BareIndex) : (b.BareIndex, a.BareIndex);
-                double gap = b.Frequencies[i] - a.Frequencies[i];
-                if (!best.TryGetValue(key, out var old) || gap < old.GapGHz)
-                    best[key] = new NearApproach(a.Label, b.Label, gap, i, series.Axis[i], (a.Frequencies[i] + b.Frequencies[i]) / 2);
+                int best = -1;
+                double bestGap = double.PositiveInfinity;
+                for (int i = 0; i < n; i++)
+                {
+                    double gap = Math.Abs(branches[a].Frequencies[i] - branches[b].Frequencies[i]);
+                    if (gap < bestGap) { bestGap = gap; best = i; }
+                }
+                if (best <= 0 || best >= n - 1 || !Neighbours(branches, a, b, best)) continue;
+                var (low, high) = branches[a].Frequencies[best] <= branches[b].Frequencies[best] ? (branches[a], branches[b]) : (branches[b], branches[a]);
+                found.Add(new NearApproach(low.Label, high.Label, bestGap, best, series.Axis[best],
+                    (low.Frequencies[best] + high.Frequencies[best]) / 2));
             }
+        return found.OrderBy(c => c.GapGHz).Take(limit).ToList();
+    }
+
+    private static bool Neighbours(IReadOnlyList<Branch> branches, int a, int b, int i)
+    {
+        double fa = branches[a].Frequencies[i], fb = branches[b].Frequencies[i];
+        double low = Math.Min(fa, fb), high = Math.Max(fa, fb);
+        for (int k = 0; k < branches.Count; k++)
+        {
+            if (k == a || k == b) continue;
+            double f = branches[k].Frequencies[i];
+            if (f > low && f < high) return false;
         }
-        return best.Values
-            .Where(c => c.PointIndex > 0 && c.PointIndex < n - 1)
-            .OrderBy(c => c.GapGHz)
-            .Take(limit)
-            .ToList();
+        return true;
     }
 }

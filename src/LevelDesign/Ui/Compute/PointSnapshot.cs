@@ -14,5 +14,5 @@ public sealed record PointSnapshot(
     /// <summary>"converged", "N flagged", or "not checked".</summary>
     public string ConvergenceText => Convergence is null
         ? "not checked"
-        : Convergence.Count(c => c.Flagged) is int n and > 0 ? $"{n} not converged" : "converged";
+        : Convergence.Count(c => c.Flagged) is int n and > 0 ? $"✗ {n} unconverged" : "✓ converged";
 }

@@ -18,7 +18,7 @@ public static class StatesTableText
         {
             new($"Dressed states at {where}", Heading: true),
             new("f = E/h above the dressed ground, GHz; " + Legend),
-            new($"  {"#",2} {"label",-12} {"f (GHz)",10} {"purity",6}  top components", Heading: true),
+            new($"  {"#",2} {"label",-10} {"f (GHz)",8} {"purity",6}  top components", Heading: true),
         };
         for (int k = 0; k < spectrum.Count; k++)
         {
@@ -28,7 +28,7 @@ public static class StatesTableText
             string components = string.Join("  ", label.Components.Where(c => c.Weight >= 0.005).Take(3)
                 .Select(c => $"{LabelNames.OfBare(spectrum, c.BareIndex)} {c.Weight:0.00}"));
             lines.Add(new TextLine(
-                $"{mark}{k,2} {Fit(LabelNames.OfDressed(spectrum, k), 12),-12} {Numbers.GHz(spectrum.Energies[k]),10} {label.Purity,6:0.000}  {components}",
+                $"{mark}{k,2} {Fit(LabelNames.OfDressed(spectrum, k), 10),-10} {Numbers.GHz(spectrum.Energies[k]),8} {label.Purity,6:0.000}  {components}",
                 Warning: low || label.Ambiguous));
         }
         lines.Add(new TextLine(""));

@@ -42,6 +42,13 @@ public class RowList : View
 
     public bool Selectable { get; init; } = true;
 
+    /// <summary>Adds a command of this list and binds a key to it (used for context keys such as Insert on the board).</summary>
+    public void Bind(Key key, Command command, Func<bool?> action)
+    {
+        AddCommand(command, action);
+        KeyBindings.ReplaceCommands(key, command);
+    }
+
     /// <summary>Rows that cannot be selected (headings) are skipped by the arrows.</summary>
     public Func<int, bool>? CanSelect { get; set; }
 
@@ -104,6 +111,7 @@ public class RowList : View
     {
         int height = Math.Max(1, Viewport.Height);
         if (!Selectable) return;
+        if (_selected < height) _top = 0; // keep the first rows (headings) in view when they fit
         if (_selected < _top) _top = _selected;
         if (_selected >= _top + height) _top = _selected - height + 1;
     }

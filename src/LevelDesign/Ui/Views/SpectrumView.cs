@@ -15,6 +15,8 @@ namespace LevelDesign.Ui.Views;
 public sealed class SpectrumView : View
 {
     private const int AxisWidth = 8;
+    /// <summary>Only the narrowest crossings are marked, so the marks stay readable; all are listed on the crossings page.</summary>
+    public const int MarkedCrossings = 8;
     private SpectrumSeries? _series;
     private IReadOnlyList<NearApproach> _crossings = [];
     private double? _low, _high;
@@ -150,7 +152,7 @@ public sealed class SpectrumView : View
 
         int cursorColumn = Math.Clamp(DotX(series.Axis[CursorIndex]) / 2, 0, plotColumns - 1);
         var marks = new HashSet<(int, int)>();
-        foreach (var c in _crossings)
+        foreach (var c in _crossings.Take(MarkedCrossings))
         {
             int cx = DotX(c.AxisValue) / 2, cy = DotY(c.FrequencyGHz) / 4;
             if (cx >= 0 && cx < plotColumns && cy >= 0 && cy < plotRows) marks.Add((cx, cy));
