@@ -4,9 +4,9 @@ public static class ManifoldText
 {
     public static string Describe(this Manifold manifold) => manifold switch
     {
-        Manifold.SingleExcitations => "single excitations",
-        Manifold.UpToTwo => "up to two excitations",
-        _ => "all kept levels",
+        Manifold.SingleExcitations => "1 excitation",
+        Manifold.UpToTwo => "≤2 excitations",
+        _ => "all kept",
     };
 
     public static bool Admits(this Manifold manifold, int excitations) => manifold switch

@@ -3,7 +3,9 @@ namespace LevelDesign.Ui.Compute;
 /// <summary>
 /// Until the sweep engine's crossing finder is merged: for every pair of branches, the sweep point where
 /// their gap is smallest; it counts as a crossing only when it lies inside the sweep (a true minimum, not an
-/// end point) and the two are energy neighbours there. Ranked by gap, smallest first.
+/// end point), the two are energy neighbours there, and the gap there is under half the gap at either
+/// end of the sweep (our own rule, so that two levels merely running side by side are not called a
+/// crossing). Ranked by gap, smallest first.
 /// </summary>
 public static class NearApproachFinder
 {
@@ -23,12 +25,16 @@ public static class NearApproachFinder
                     if (gap < bestGap) { bestGap = gap; best = i; }
                 }
                 if (best <= 0 || best >= n - 1 || !Neighbours(branches, a, b, best)) continue;
+                double endGap = Math.Min(Gap(branches[a], branches[b], 0), Gap(branches[a], branches[b], n - 1));
+                if (!(bestGap < 0.5 * endGap) && double.IsFinite(endGap)) continue;
                 var (low, high) = branches[a].Frequencies[best] <= branches[b].Frequencies[best] ? (branches[a], branches[b]) : (branches[b], branches[a]);
                 found.Add(new NearApproach(low.Label, high.Label, bestGap, best, series.Axis[best],
                     (low.Frequencies[best] + high.Frequencies[best]) / 2));
             }
         return found.OrderBy(c => c.GapGHz).Take(limit).ToList();
     }
+
+    private static double Gap(Branch a, Branch b, int i) => Math.Abs(a.Frequencies[i] - b.Frequencies[i]);
 
     private static bool Neighbours(IReadOnlyList<Branch> branches, int a, int b, int i)
     {

@@ -7,7 +7,7 @@ public static class ShiftsText
 {
     public static IReadOnlyList<TextLine> Build(DerivedQuantities q, string where)
     {
-        var lines = new List<TextLine> { new($"Shifts at {where}   (all in MHz)", Heading: true) };
+        var lines = new List<TextLine> { new($"At {where}; all in MHz", Heading: true) };
 
         lines.Add(new TextLine(""));
         lines.Add(new TextLine("2χ  qubit ↓ × resonator →", Heading: true));

@@ -16,7 +16,7 @@ public static class StatesTableText
     {
         var lines = new List<TextLine>
         {
-            new($"Dressed states at {where}", Heading: true),
+            new($"At {where}", Heading: true),
             new("f = E/h above the dressed ground, GHz; " + Legend),
             new($"  {"#",2} {"label",-10} {"f (GHz)",8} {"purity",6}  top components", Heading: true),
         };

@@ -213,7 +213,7 @@ public sealed partial class MainWindow
                 _crossingList.SetLines(_crossings.Count == 0
                     ? [new TextLine(_sweep is null ? "no sweep yet: F5 starts one" : "no near approaches inside the sweep")]
                     : _crossings.Select((c, i) => new TextLine(
-                        $"{i + 1,2}. gap {Numbers.MHz(c.GapGHz, 2),9} MHz at {_series?.AxisName} = {Numbers.Plain(c.AxisValue)}  {c.LabelA} ↔ {c.LabelB}")).ToList());
+                        $"{i + 1,2}. {c.LabelA} ↔ {c.LabelB}  gap {Numbers.MHz(c.GapGHz, 2)} MHz at {_series?.AxisName} = {Numbers.Plain(c.AxisValue)}")).ToList());
                 break;
         }
         SetNeedsDraw();

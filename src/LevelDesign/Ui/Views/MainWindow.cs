@@ -157,7 +157,7 @@ public sealed partial class MainWindow : Window
 
     // ---- layout -------------------------------------------------------------------------------------
 
-    private bool Wide => Viewport.Width >= 120 && Viewport.Height >= 34;
+    private bool Wide => Frame.Width >= 120 && Frame.Height >= 34;
 
     private void ApplyLayout()
     {
@@ -262,7 +262,8 @@ public sealed partial class MainWindow : Window
         }
         string? selectedId = _board.SelectedIndex < _nodes.Count ? _nodes[_board.SelectedIndex].Id : null;
         _nodes = BoardOutline.Nodes(document);
-        int select = Math.Max(0, _nodes.ToList().FindIndex(n => n.Id == selectedId && n.Kind != BoardNodeKind.Group));
+        int found = _nodes.ToList().FindIndex(n => n.Id == selectedId && n.Kind != BoardNodeKind.Group);
+        int select = found >= 0 ? found : Math.Min(_board.SelectedIndex, _nodes.Count - 1); // a renamed item keeps its place
         if (selectedId is null) select = Math.Max(0, _nodes.ToList().FindIndex(n => n.Kind == BoardNodeKind.Element));
         _board.SetLines(_nodes.Select(n => new TextLine(new string(' ', 2 * n.Depth) + (n.Kind == BoardNodeKind.Group ? "▾ " : "") + n.Text,
             Heading: n.Kind is BoardNodeKind.Group or BoardNodeKind.Device)).ToList(), select);
@@ -300,7 +301,7 @@ public sealed partial class MainWindow : Window
         _prompt.Ask($"{field.FieldPath} =   ({field.Hint})", field.ValueText, text =>
         {
             var outcome = _session.SetValue(field.FieldPath!, text);
-            if (!outcome.Accepted) return outcome.Message + $" — {field.Name} stays {field.ValueText}";
+            if (!outcome.Accepted) return $"{field.Name} stays {field.ValueText}: {outcome.Message}";
             Say(outcome.Message + (_lastSweep is null ? "" : "; the sweep re-runs shortly"));
             return null;
         });

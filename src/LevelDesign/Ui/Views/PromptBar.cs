@@ -112,10 +112,11 @@ public sealed class PromptBar : View
             foreach (char c in _choices.Keys) KeyBindings.Remove(new Key(c));
         _choices = null;
         _onAnswer = null;
+        bool hadFocus = HasFocus;   // an answer may already have moved focus on purpose (e.g. to the spectrum)
         Visible = false;
         var back = _returnFocus;
         _returnFocus = null;
-        if (back is { Visible: true }) back.SetFocus();
+        if (hadFocus && back is { Visible: true }) back.SetFocus();
         SuperView?.SetNeedsDraw();
     }
 

@@ -117,7 +117,7 @@ public sealed class SpectrumView : View
         var series = _series;
         string header = series is null || series.Axis.Length == 0
             ? $"Spectrum — {Status}"
-            : $"f (GHz) vs {series.AxisName} [{ManifoldText}]  cursor {series.AxisName} = {Numbers.Plain(series.Axis[CursorIndex])}  {Status}";
+            : $"cursor {series.AxisName} = {Numbers.Plain(series.Axis[CursorIndex])} │ {ManifoldText} │ {Status}";
         Move(0, 0);
         AddStr(RowList.Pad(header, width));
         int labelWidth = width >= 60 ? 12 : width >= 45 ? 8 : 0;
@@ -198,7 +198,7 @@ public sealed class SpectrumView : View
         string axisLine = new string(' ', AxisWidth) + left;
         int rightAt = AxisWidth + plotColumns - right.Length;
         axisLine = axisLine.PadRight(Math.Max(axisLine.Length, rightAt)) [..Math.Max(axisLine.Length, rightAt)] + right;
-        string hint = $"  {series.AxisName}  × crossing";
+        string hint = $"  {series.AxisName} → · f in GHz · × crossing";
         Move(0, height - 1);
         AddStr(RowList.Pad(axisLine + hint, width));
         return true;
