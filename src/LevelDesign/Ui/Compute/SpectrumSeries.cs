@@ -20,11 +20,15 @@ public sealed class SpectrumSeries
     public double[] Axis { get; }
     public IReadOnlyList<Branch> Branches { get; }
 
+    /// <summary>A series from ready branches (used by exports and tests).</summary>
+    public static SpectrumSeries Of(string axisName, double[] axis, IReadOnlyList<Branch> branches) => new(axisName, axis, branches);
+
     public static SpectrumSeries From(SweepResult result, Manifold manifold)
     {
         var points = result.Points;
         var axis = points.Select(p => p.AxisValues[0]).ToArray();
-        var byLabel = new Dictionary<int, Branch>();
+        // Keyed by the label text: bare indices are not stable across points (the basis is ordered by bare energy).
+        var byLabel = new Dictionary<string, Branch>();
         for (int i = 0; i < points.Count; i++)
         {
             var s = points[i].Spectrum;
@@ -33,12 +37,13 @@ public sealed class SpectrumSeries
                 int bare = s.Labels[k].BareIndex;
                 int excitations = s.Basis.States[bare].Sum();
                 if (!manifold.Admits(excitations)) continue;
-                if (!byLabel.TryGetValue(bare, out var branch))
+                string label = LabelNames.OfBare(s, bare);
+                if (!byLabel.TryGetValue(label, out var branch))
                 {
                     var values = new double[points.Count];
                     Array.Fill(values, double.NaN);
-                    branch = new Branch(bare, LabelNames.OfBare(s, bare), excitations, values);
-                    byLabel[bare] = branch;
+                    branch = new Branch(label, excitations, values);
+                    byLabel[label] = branch;
                 }
                 branch.Frequencies[i] = s.Energies[k];
             }
