@@ -6,10 +6,17 @@ namespace LevelDesign.Ui.Text;
 /// <summary>The help page: every key, the marks used, and (on L) the limits of the model and all conventions.</summary>
 public static class HelpText
 {
-    public static IReadOnlyList<TextLine> Keys()
+    /// <param name="width">Columns available; descriptions wrap under their key so nothing is cut off.</param>
+    public static IReadOnlyList<TextLine> Keys(int width = 100)
     {
         var lines = new List<TextLine> { new("Keys", Heading: true) };
-        foreach (var (keys, what) in KeyHelp.All) lines.Add(new TextLine($"  {keys,-26} {what}"));
+        int room = Math.Max(20, width - 30);
+        foreach (var (keys, what) in KeyHelp.All)
+        {
+            var wrapped = Wrap(what, room).ToList();
+            lines.Add(new TextLine($"  {keys,-27} {wrapped[0]}"));
+            foreach (var more in wrapped.Skip(1)) lines.Add(new TextLine($"  {"",-27} {more}"));
+        }
         lines.Add(new TextLine(""));
         lines.Add(new TextLine("Marks", Heading: true));
         lines.Add(new TextLine("  ● unsaved changes    ⚠ file changed on disk    " + StatesTableText.Legend));
@@ -19,15 +26,15 @@ public static class HelpText
         return lines;
     }
 
-    public static IReadOnlyList<TextLine> Limits() =>
+    public static IReadOnlyList<TextLine> Limits(int width = 100) =>
     [
         new("Limits of the model", Heading: true),
-        .. Wrap(Conventions.LimitsOfModel, 70).Select(l => new TextLine("  " + l)),
+        .. Wrap(Conventions.LimitsOfModel, Math.Max(20, width - 3)).Select(l => new TextLine("  " + l)),
         new(""),
         new("Conventions", Heading: true),
         .. new[] { Conventions.Energies, Conventions.Transitions, Conventions.LambShift, Conventions.DispersiveShift,
                    Conventions.ZZ, Conventions.Purity, Conventions.Purcell }
-            .SelectMany(c => Wrap(c, 70)).Select(l => new TextLine("  " + l)),
+            .SelectMany(c => Wrap(c, Math.Max(20, width - 3))).Select(l => new TextLine("  " + l)),
         new(""),
         new("Eigensolver", Heading: true),
         new("  " + EigenSolvers.Describe()),

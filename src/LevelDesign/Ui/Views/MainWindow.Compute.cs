@@ -204,7 +204,8 @@ public sealed partial class MainWindow
                 _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")] : ShiftsText.Build(shown.Quantities, Where()));
                 break;
             case Page.Help:
-                _page.SetLines(_showLimits ? HelpText.Limits() : HelpText.Keys());
+                int width = Math.Max(40, Frame.Width - (_boardFrame.Visible ? LeftWidth : 0) - 4);
+                _page.SetLines(_showLimits ? HelpText.Limits(width) : HelpText.Keys(width));
                 break;
             case Page.Errors:
                 _page.SetLines(LoadErrorText.Build(_session.LoadErrors, _session.LoadedText));

@@ -161,7 +161,8 @@ public sealed partial class MainWindow : Window
 
     private void ApplyLayout()
     {
-        bool left = !_wideOff;
+        // At small sizes help and errors take the whole width, so no line is cut.
+        bool left = !_wideOff && !(_pageShown is Page.Help or Page.Errors && Frame.Width < 120);
         _boardFrame.Visible = _formFrame.Visible = left;
         int x = left ? LeftWidth : 0;
         bool plotPage = _pageShown == Page.Spectrum;
