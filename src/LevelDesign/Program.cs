@@ -32,29 +32,21 @@ public static class Program
         return parse.Invoke();
     }
 
+    /// <summary>
+    /// Opens the terminal UI: on the demo without a path; otherwise the UI loads the file itself so that a bad
+    /// file opens with its errors listed instead of ending the program.
+    /// </summary>
     private static int OpenInteractive(string? path)
     {
-        DeviceDocument document;
-        if (path is null) document = DeviceDocument.Demo();
-        else
+        if (Console.IsInputRedirected || Console.IsOutputRedirected)
         {
-            var result = DeviceDocument.Load(path);
-            if (!result.Ok)
-            {
-                foreach (var e in result.Errors) Console.Error.WriteLine(e.ToString());
-                return ExitCodes.InvalidInput;
-            }
-            document = result.Document!;
+            // a full-screen UI on a pipe would only garble the output; say what works instead
+            Console.Error.WriteLine("the terminal UI needs an interactive terminal (standard input or output is redirected)");
+            Console.Error.WriteLine($"for scripts use: leveldesign spectrum {path ?? "devices/pair.toml"}   (see leveldesign --help)");
+            return ExitCodes.InvalidInput;
         }
-        return RunTerminalUi(document, path);
-    }
-
-    // TERMINAL UI CALL SITE: the one place the interactive UI starts. When LevelDesign.Ui.TerminalApp is merged,
-    // replace the body with: return LevelDesign.Ui.TerminalApp.Run(document, path);
-    private static int RunTerminalUi(DeviceDocument document, string? path)
-    {
-        Console.Error.WriteLine("the terminal UI is not available in this build");
-        Console.Error.WriteLine($"loaded {path ?? "the built-in demo device"}: try 'leveldesign spectrum {path ?? "devices/pair.toml"}'");
-        return ExitCodes.Ok;
+        return path is null
+            ? LevelDesign.Ui.TerminalApp.Run(DeviceDocument.Demo(), null)
+            : LevelDesign.Ui.TerminalApp.Run(null, path);
     }
 }

@@ -133,11 +133,11 @@ public sealed class EndToEndTests
     }
 
     [Fact]
-    public void NoArgumentOpensTheInteractiveEntryPoint()
+    public void NoArgumentWithoutATerminalExplainsInsteadOfDrawing()
     {
         var run = Executable.Run();
-        Assert.Equal(0, run.ExitCode);
-        Assert.Contains("terminal UI", run.Stderr);
+        Assert.Equal(2, run.ExitCode);
+        Assert.Contains("terminal UI needs an interactive terminal", run.Stderr);
     }
 
     [Theory]

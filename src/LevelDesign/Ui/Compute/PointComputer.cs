@@ -1,0 +1,30 @@
+using System.Diagnostics;
+using LevelDesign.Core.Analysis;
+using LevelDesign.Core.Composite;
+using LevelDesign.Core.Model;
+
+namespace LevelDesign.Ui.Compute;
+
+/// <summary>Solves one device (off the UI thread) and checks truncation convergence.</summary>
+public static class PointComputer
+{
+    public static PointSnapshot Compute(Device device, bool checkConvergence, CancellationToken cancellation)
+    {
+        var clock = Stopwatch.StartNew();
+        var solver = new DeviceSolver();
+        var spectrum = solver.Solve(device);
+        cancellation.ThrowIfCancellationRequested();
+        var quantities = DerivedQuantities.From(spectrum);
+        IReadOnlyList<ConvergenceEntry>? convergence = null;
+        if (checkConvergence)
+        {
+            cancellation.ThrowIfCancellationRequested();
+            convergence = TruncationConvergence.Check(solver, device);
+        }
+        return new PointSnapshot(spectrum, quantities, convergence, DateTime.Now, clock.Elapsed);
+    }
+
+    /// <summary>A snapshot of an already computed spectrum (a sweep point), without convergence.</summary>
+    public static PointSnapshot FromSpectrum(DressedSpectrum spectrum, DateTime computedAt) =>
+        new(spectrum, DerivedQuantities.From(spectrum), null, computedAt, TimeSpan.Zero);
+}

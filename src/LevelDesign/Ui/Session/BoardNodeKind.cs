@@ -1,0 +1,10 @@
+namespace LevelDesign.Ui.Session;
+
+public enum BoardNodeKind
+{
+    Device,
+    Group,
+    Element,
+    Coupler,
+    Bias,
+}

@@ -1,0 +1,207 @@
+using LevelDesign.Core.DeviceFiles;
+
+namespace LevelDesign.Ui.Session;
+
+/// <summary>
+/// The open device and its history: every accepted edit pushes the previous document on the undo stack
+/// (documents are immutable, so the stack is the history), redo is cleared by a new edit, "unsaved" means
+/// the current document is not the one last saved or loaded. Knows nothing of the screen.
+/// </summary>
+public sealed class EditSession
+{
+    private readonly IDocumentStore _store;
+    private readonly Stack<DeviceDocument> _undo = new();
+    private readonly Stack<DeviceDocument> _redo = new();
+    private DeviceDocument? _saved;
+    private AutosaveSidecar? _autosave;
+    private DiskStamp? _stamp;
+
+    public EditSession(IDocumentStore store) => _store = store;
+
+    public IDocumentStore Store => _store;
+    public DeviceDocument? Document { get; private set; }
+
+    /// <summary>The file this session writes to; null for the demo until "save as".</summary>
+    public string? Path { get; private set; }
+
+    /// <summary>Errors of a file that failed to load, with the file text for showing the offending lines.</summary>
+    public IReadOnlyList<DeviceFileError> LoadErrors { get; private set; } = [];
+    public string? LoadedText { get; private set; }
+
+    /// <summary>Autosave text found at start that differs from the file: offered for recovery, not forced.</summary>
+    public string? RecoveryText { get; private set; }
+
+    public bool IsDirty => Document is not null && !ReferenceEquals(Document, _saved);
+    public bool CanUndo => _undo.Count > 0;
+    public bool CanRedo => _redo.Count > 0;
+    public int UndoDepth => _undo.Count;
+
+    /// <summary>Raised after the current document changed (edit, undo, redo, load, recovery).</summary>
+    public event Action? Changed;
+
+    public void OpenDocument(DeviceDocument document, string? path)
+    {
+        Reset(path);
+        Document = _saved = document;
+        if (path is not null && File.Exists(path)) LoadedText = File.ReadAllText(path);
+        CheckRecovery();
+        Changed?.Invoke();
+    }
+
+    /// <summary>Opens a file; a bad file leaves no document and lists its errors (never throws for bad input).</summary>
+    public void OpenFile(string path)
+    {
+        Reset(path);
+        DeviceLoadResult result;
+        try { result = _store.Load(path); }
+        catch (Exception e) when (e is not OutOfMemoryException)
+        {
+            result = new DeviceLoadResult(null, [new DeviceFileError(path, 0, 0, "", e.Message)]);
+        }
+        LoadedText = File.Exists(path) ? File.ReadAllText(path) : null;
+        if (result.Ok) Document = _saved = result.Document;
+        else LoadErrors = result.Errors.Count > 0 ? result.Errors : [new DeviceFileError(path, 0, 0, "", "the file could not be read")];
+        CheckRecovery();
+        Changed?.Invoke();
+    }
+
+    public void OpenDemo()
+    {
+        Reset(null);
+        Document = _saved = _store.Demo();
+        Changed?.Invoke();
+    }
+
+    private void Reset(string? path)
+    {
+        Path = path;
+        _undo.Clear();
+        _redo.Clear();
+        LoadErrors = [];
+        LoadedText = null;
+        RecoveryText = null;
+        Document = _saved = null;
+        _autosave = path is null ? null : new AutosaveSidecar(path);
+        _stamp = path is null ? null : DiskStamp.Of(path);
+    }
+
+    private void CheckRecovery()
+    {
+        try { RecoveryText = _autosave?.PendingRecovery(LoadedText); }
+        catch (IOException) { RecoveryText = null; }
+    }
+
+    /// <summary>Takes the autosaved edits as the current (unsaved) document, on top of the file as loaded.</summary>
+    public EditOutcome AcceptRecovery()
+    {
+        if (RecoveryText is null || Path is null) return EditOutcome.Refused("nothing to recover");
+        var result = _store.Parse(RecoveryText, Path);
+        if (!result.Ok) return EditOutcome.Refused("the autosave does not parse: " + string.Join("; ", result.Errors));
+        RecoveryText = null;
+        if (Document is not null) _undo.Push(Document);
+        LoadErrors = [];
+        Document = result.Document;
+        Changed?.Invoke();
+        return EditOutcome.Ok("recovered unsaved edits from " + _autosave!.Path);
+    }
+
+    public void DeclineRecovery()
+    {
+        RecoveryText = null;
+        _autosave?.Delete();
+    }
+
+    public EditOutcome SetValue(string fieldPath, string text) =>
+        Apply(d => _store.WithValue(d, fieldPath, text.Trim(), out var e) is { } n ? (n, null) : (null, e), $"{fieldPath} = {text.Trim()}");
+
+    public EditOutcome AddElement(string kindKey, string id) =>
+        Apply(d => _store.AddElement(d, kindKey, id, out var e) is { } n ? (n, null) : (null, e), $"added {kindKey} '{id}'");
+
+    public EditOutcome AddCoupler(string kindKey, string id, string a, string b, string strength) =>
+        Apply(d => _store.AddCoupler(d, kindKey, id, a, b, strength, out var e) is { } n ? (n, null) : (null, e), $"added {kindKey} coupler '{id}'");
+
+    public EditOutcome Remove(string id) =>
+        Apply(d => _store.Remove(d, id, out var e) is { } n ? (n, null) : (null, e), $"removed '{id}'");
+
+    public EditOutcome Rename(string oldId, string newId) =>
+        Apply(d => _store.Rename(d, oldId, newId, out var e) is { } n ? (n, null) : (null, e), $"renamed '{oldId}' to '{newId}'");
+
+    private EditOutcome Apply(Func<DeviceDocument, (DeviceDocument? Next, string? Error)> edit, string done)
+    {
+        if (Document is null) return EditOutcome.Refused("no device is open");
+        (DeviceDocument? Next, string? Error) result;
+        try { result = edit(Document); }
+        catch (NotImplementedException) { return EditOutcome.Refused("editing needs the device file layer, which is not built in this version"); }
+        catch (Exception e) when (e is ArgumentException or InvalidOperationException or FormatException) { return EditOutcome.Refused(e.Message); }
+        if (result.Next is null) return EditOutcome.Refused(result.Error ?? "refused");
+        _undo.Push(Document);
+        _redo.Clear();
+        Document = result.Next;
+        WriteAutosave();
+        Changed?.Invoke();
+        return EditOutcome.Ok(done);
+    }
+
+    public EditOutcome Undo()
+    {
+        if (_undo.Count == 0 || Document is null) return EditOutcome.Refused("nothing to undo");
+        _redo.Push(Document);
+        Document = _undo.Pop();
+        WriteAutosave();
+        Changed?.Invoke();
+        return EditOutcome.Ok($"undone ({_undo.Count} more)");
+    }
+
+    public EditOutcome Redo()
+    {
+        if (_redo.Count == 0 || Document is null) return EditOutcome.Refused("nothing to redo");
+        _undo.Push(Document);
+        Document = _redo.Pop();
+        WriteAutosave();
+        Changed?.Invoke();
+        return EditOutcome.Ok($"redone ({_redo.Count} more)");
+    }
+
+    /// <summary>True when the file was changed by someone else since it was loaded or last saved here.</summary>
+    public bool ChangedOnDisk => Path is not null && _stamp is not null && DiskStamp.Of(Path) != _stamp;
+
+    public EditOutcome Save(string? asPath = null)
+    {
+        if (Document is null) return EditOutcome.Refused("no device is open");
+        string? target = asPath ?? Path;
+        if (string.IsNullOrWhiteSpace(target)) return EditOutcome.Refused("this device has no file yet; use save as (Ctrl+W)");
+        try { _store.Save(Document, target); }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotImplementedException or ArgumentException)
+        {
+            return EditOutcome.Refused($"could not save {target}: {e.Message}");
+        }
+        if (asPath is not null && asPath != Path)
+        {
+            _autosave?.Delete();
+            Path = asPath;
+            _autosave = new AutosaveSidecar(asPath);
+        }
+        _saved = Document;
+        _stamp = DiskStamp.Of(target);
+        _autosave?.Delete();
+        Changed?.Invoke();
+        return EditOutcome.Ok($"saved {target} (previous kept as {System.IO.Path.GetFileName(target)}.bak)");
+    }
+
+    /// <summary>A deliberate quit without saving: the autosave is no longer wanted.</summary>
+    public void Discard() => _autosave?.Delete();
+
+    private void WriteAutosave()
+    {
+        if (_autosave is null || Document is null) return;
+        try
+        {
+            if (IsDirty) _autosave.Write(_store.ToText(Document));
+            else _autosave.Delete();
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotImplementedException)
+        {
+            // Autosave is a safety net; a failure must not block editing.
+        }
+    }
+}

@@ -1,0 +1,31 @@
+using LevelDesign.Core.DeviceFiles;
+
+namespace LevelDesign.Ui.Text;
+
+/// <summary>A bad file's errors, each with the offending line and a caret under the column.</summary>
+public static class LoadErrorText
+{
+    public static IReadOnlyList<TextLine> Build(IReadOnlyList<DeviceFileError> errors, string? fileText)
+    {
+        var fileLines = fileText?.Split('\n') ?? [];
+        var lines = new List<TextLine>
+        {
+            new($"⚠ The device file has {errors.Count} error(s); nothing was computed.", Warning: true, Heading: true),
+            new("Fix the file and press Ctrl+L to reload, or Ctrl+Q to quit."),
+            new(""),
+        };
+        foreach (var e in errors)
+        {
+            string field = string.IsNullOrEmpty(e.Field) ? "" : $" [{e.Field}]";
+            lines.Add(new TextLine($"✗ {Path.GetFileName(e.File)}:{e.Line}:{e.Column}{field}: {e.Message}", Warning: true));
+            if (e.Line >= 1 && e.Line <= fileLines.Length)
+            {
+                string source = fileLines[e.Line - 1].TrimEnd('\r').Replace('\t', ' ');
+                lines.Add(new TextLine($"  {e.Line,4} │ {source}"));
+                if (e.Column >= 1) lines.Add(new TextLine($"       │ {new string(' ', e.Column - 1)}^"));
+            }
+            lines.Add(new TextLine(""));
+        }
+        return lines;
+    }
+}

@@ -1,0 +1,61 @@
+using LevelDesign.Core.Analysis;
+
+namespace LevelDesign.Ui.Text;
+
+/// <summary>The 2χ matrix (qubit rows × resonator columns), the ZZ matrix and per-element transitions, in MHz.</summary>
+public static class ShiftsText
+{
+    public static IReadOnlyList<TextLine> Build(DerivedQuantities q, string where)
+    {
+        var lines = new List<TextLine> { new($"At {where}; all in MHz", Heading: true) };
+
+        lines.Add(new TextLine(""));
+        lines.Add(new TextLine("2χ  qubit ↓ × resonator →", Heading: true));
+        lines.Add(new TextLine(Conventions.DispersiveShift));
+        lines.AddRange(Matrix(q.DispersiveShifts.Select(p => p.First).Distinct().ToList(),
+            q.DispersiveShifts.Select(p => p.Second).Distinct().ToList(), q.DispersiveShifts, symmetric: false));
+
+        lines.Add(new TextLine(""));
+        lines.Add(new TextLine("ZZ  ζ/h", Heading: true));
+        lines.Add(new TextLine(Conventions.ZZ));
+        var qubits = q.ZZ.SelectMany(p => new[] { p.First, p.Second }).Distinct().ToList();
+        lines.AddRange(Matrix(qubits, qubits, q.ZZ, symmetric: true));
+
+        lines.Add(new TextLine(""));
+        lines.Add(new TextLine("Transitions (GHz)        f01 dressed    α (MHz)   Lamb (MHz)", Heading: true));
+        lines.Add(new TextLine(Conventions.Transitions));
+        foreach (var t in q.Transitions)
+            lines.Add(new TextLine($"  {t.ElementId,-22} {Numbers.GHz(t.DressedF01),11} {Numbers.MHz(t.Anharmonicity, 2),10} {Numbers.MHz(t.LambShift, 3),12}"));
+        if (q.Purcell.Count > 0)
+        {
+            lines.Add(new TextLine(""));
+            lines.Add(new TextLine("Purcell", Heading: true));
+            lines.Add(new TextLine(Conventions.Purcell));
+            foreach (var p in q.Purcell)
+                lines.Add(new TextLine($"  {p.Qubit} via {p.Resonator}: γ = {Numbers.MHz(p.RateGHz, 6)} MHz"));
+        }
+        return lines;
+    }
+
+    private static IEnumerable<TextLine> Matrix(IReadOnlyList<string> rows, IReadOnlyList<string> columns, IReadOnlyList<PairValue> values, bool symmetric)
+    {
+        if (rows.Count == 0 || columns.Count == 0)
+        {
+            yield return new TextLine("  (no pairs in this device)");
+            yield break;
+        }
+        yield return new TextLine("  " + new string(' ', 8) + string.Concat(columns.Select(c => $"{Cut(c),12}")));
+        foreach (var r in rows)
+        {
+            var cells = columns.Select(c =>
+            {
+                if (symmetric && r == c) return $"{"·",12}";
+                var v = values.FirstOrDefault(p => (p.First == r && p.Second == c) || (symmetric && p.First == c && p.Second == r));
+                return v is null ? $"{"",12}" : $"{Numbers.MHz(v.Value, 4),12}";
+            });
+            yield return new TextLine($"  {Cut(r),-8}" + string.Concat(cells));
+        }
+    }
+
+    private static string Cut(string id) => id.Length <= 8 ? id : id[..7] + "…";
+}

@@ -1,0 +1,230 @@
+using System.Diagnostics;
+using LevelDesign.Core.Model;
+using LevelDesign.Core.Sweeps;
+using LevelDesign.Ui.Compute;
+using LevelDesign.Ui.Text;
+
+namespace LevelDesign.Ui.Views;
+
+public sealed partial class MainWindow
+{
+    private void StartPointCompute(Device device)
+    {
+        var (generation, token) = _pointJobs.Begin();
+        _computing = true;
+        Task.Run(() =>
+        {
+            try
+            {
+                string eigen = NativeEigen() ? "native" : "managed";
+                var quick = PointComputer.Compute(device, checkConvergence: false, token);
+                _scheduler.Post(() => ApplyPoint(generation, quick, eigen, final: false));
+                var full = PointComputer.Compute(device, checkConvergence: true, token);
+                _scheduler.Post(() => ApplyPoint(generation, full, eigen, final: true));
+            }
+            catch (OperationCanceledException) { }
+            catch (Exception e) when (e is not OutOfMemoryException)
+            {
+                _scheduler.Post(() =>
+                {
+                    if (!_pointJobs.IsCurrent(generation)) return;
+                    _computing = false;
+                    _snapshot = null;
+                    Say("✗ cannot compute: " + DescribeProblem(e), warning: true);
+                    RefreshPage();
+                });
+            }
+        }, CancellationToken.None);
+    }
+
+    private void ApplyPoint(int generation, PointSnapshot snapshot, string eigen, bool final)
+    {
+        if (!_pointJobs.IsCurrent(generation)) return; // stale: a newer edit superseded it
+        _snapshot = snapshot;
+        _eigenPath = eigen;
+        _computing = !final;
+        RefreshPage();
+        UpdateStatus();
+    }
+
+    // ---- sweeps ---------------------------------------------------------------------------------
+
+    private void AskSweep()
+    {
+        var document = _session.Document;
+        if (document is null) { Say("no device is open", warning: true); return; }
+        string suggestion = _lastSweep?.Text ?? SweepRequestParser.Suggest(document);
+        _prompt.Ask($"sweep: {SweepRequestParser.Syntax}", suggestion, text =>
+        {
+            var request = SweepRequestParser.Parse(text, _session.Document!, out string? error);
+            if (request is null) return error;
+            _lastSweep = request;
+            StartSweep(request);
+            ShowPage(Page.Spectrum);
+            return null;
+        });
+    }
+
+    private void ScheduleResweep()
+    {
+        if (_resweepTimer is not null) _scheduler.Cancel(_resweepTimer);
+        if (_sweeping) { _sweepJobs.Cancel(); _sweeping = false; }
+        _sweepStale = _sweep is not null;
+        _spectrum.Status = "stale: re-running after the edit…";
+        _spectrum.SetNeedsDraw();
+        _resweepTimer = _scheduler.Delay(ResweepPause, () =>
+        {
+            _resweepTimer = null;
+            if (_lastSweep is not null && _session.Document is not null) StartSweep(_lastSweep);
+        });
+    }
+
+    public void StartSweep(SweepRequest request)
+    {
+        var document = _session.Document;
+        if (document is null) return;
+        var store = _session.Store;
+        var (generation, token) = _sweepJobs.Begin();
+        _sweeping = true;
+        int total = request.Axes.Aggregate(1, (n, a) => n * Math.Max(1, a.Count));
+        _progressText = $"sweeping 0/{total}";
+        _spectrum.Status = "⟳ " + _progressText;
+        UpdateStatus();
+        var plan = new SweepPlan(request.Axes);
+        var progress = new PostingProgress(_scheduler, p =>
+        {
+            if (!_sweepJobs.IsCurrent(generation)) return;
+            _progressText = $"sweeping {p.Done}/{p.Total} {Bar(p.Done, p.Total)}";
+            _spectrum.Status = "⟳ " + _progressText;
+            _spectrum.SetNeedsDraw();
+            UpdateStatus();
+        });
+        var clock = Stopwatch.StartNew();
+        Task.Run(async () =>
+        {
+            try
+            {
+                var result = await _sweeps.RunAsync(values => store.At(document, request.ValuesAt(values)), plan, progress, token).ConfigureAwait(false);
+                _scheduler.Post(() => ApplySweep(generation, result, clock.Elapsed));
+            }
+            catch (OperationCanceledException) { }
+            catch (Exception e) when (e is not OutOfMemoryException)
+            {
+                _scheduler.Post(() =>
+                {
+                    if (!_sweepJobs.IsCurrent(generation)) return;
+                    _sweeping = false;
+                    _spectrum.Status = "sweep failed";
+                    Say("✗ sweep failed: " + DescribeProblem(e), warning: true);
+                });
+            }
+        }, CancellationToken.None);
+    }
+
+    private static string Bar(int done, int total)
+    {
+        int filled = total == 0 ? 0 : (int)Math.Round(10.0 * done / total);
+        return "[" + new string('#', filled) + new string('.', 10 - filled) + "]";
+    }
+
+    private void ApplySweep(int generation, SweepResult result, TimeSpan elapsed)
+    {
+        if (!_sweepJobs.IsCurrent(generation)) return; // a newer sweep or an edit made this one stale
+        _sweeping = false;
+        _sweepStale = false;
+        _sweep = result;
+        RebuildSeries();
+        int total = result.Plan.Axes.Aggregate(1, (n, a) => n * Math.Max(1, a.Count));
+        _spectrum.Status = result.Completed ? "" : $"cancelled: {result.Points.Count}/{total} points";
+        Say(result.Completed
+            ? $"sweep done: {result.Points.Count} points in {elapsed.TotalSeconds:0.0} s"
+            : $"sweep cancelled: {result.Points.Count} of {total} points kept");
+        OnCursorMoved(_spectrum.CursorIndex);
+    }
+
+    private void RebuildSeries()
+    {
+        if (_sweep is null || _sweep.Points.Count == 0) { _series = null; _crossings = []; _spectrum.Show(null, []); return; }
+        _series = SpectrumSeries.From(_sweep, _manifold);
+        _crossings = NearApproachFinder.Find(_series);
+        _spectrum.ManifoldText = _manifold.Describe();
+        _spectrum.Show(_series, _crossings);
+        RefreshPage();
+    }
+
+    private void NextManifold()
+    {
+        _manifold = _manifold.Next();
+        _spectrum.ManifoldText = _manifold.Describe();
+        RebuildSeries();
+        Say("spectrum shows " + _manifold.Describe());
+    }
+
+    private void OnCursorMoved(int index)
+    {
+        if (_sweep is null || index >= _sweep.Points.Count) { _cursorSnapshot = null; RefreshPage(); return; }
+        _cursorSnapshot = PointComputer.FromSpectrum(_sweep.Points[index].Spectrum, DateTime.Now);
+        RefreshPage();
+    }
+
+    private string Where()
+    {
+        if (_cursorSnapshot is not null && _sweep is not null && _spectrum.CursorIndex < _sweep.Points.Count)
+        {
+            var p = _sweep.Points[_spectrum.CursorIndex];
+            string axes = string.Join(", ", _sweep.Plan.Axes.Select((a, i) => $"{a.Path} = {Numbers.Plain(p.AxisValues[i])}"));
+            return $"{axes} (point {p.Index + 1}/{_sweep.Points.Count}{(_sweepStale ? ", stale" : "")})";
+        }
+        return "the biases in the file";
+    }
+
+    private PointSnapshot? Shown => _cursorSnapshot ?? _snapshot;
+
+    private void RefreshPage()
+    {
+        _crossingList.Visible = _pageShown == Page.Crossings && _pageFrame.Visible;
+        _page.Visible = !_crossingList.Visible;
+        var page = _pageShown == Page.Spectrum ? Page.States : _pageShown; // in wide mode the lower page shows states
+        _pageFrame.Title = page switch
+        {
+            Page.States => "States at cursor",
+            Page.Shifts => "Shifts at cursor",
+            Page.Crossings => "Crossings (Enter: go to)",
+            Page.Help => _showLimits ? "Help: limits of the model" : "Help: keys",
+            Page.Errors => "Errors in the device file",
+            _ => "",
+        };
+        var shown = Shown;
+        switch (page)
+        {
+            case Page.States:
+                _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")] : StatesTableText.Build(shown.Spectrum, Where()));
+                break;
+            case Page.Shifts:
+                _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")] : ShiftsText.Build(shown.Quantities, Where()));
+                break;
+            case Page.Help:
+                int width = Math.Max(40, Frame.Width - (_boardFrame.Visible ? LeftWidth : 0) - 4);
+                _page.SetLines(_showLimits ? HelpText.Limits(width) : HelpText.Keys(width));
+                break;
+            case Page.Errors:
+                _page.SetLines(LoadErrorText.Build(_session.LoadErrors, _session.LoadedText));
+                break;
+            case Page.Crossings:
+                _crossingList.SetLines(_crossings.Count == 0
+                    ? [new TextLine(_sweep is null ? "no sweep yet: F5 starts one" : "no near approaches inside the sweep")]
+                    : _crossings.Select((c, i) => new TextLine(
+                        $"{i + 1,2}. {c.LabelA} ↔ {c.LabelB}  gap {Numbers.MHz(c.GapGHz, 2)} MHz at {_series?.AxisName} = {Numbers.Plain(c.AxisValue)}")).ToList());
+                break;
+        }
+        SetNeedsDraw();
+    }
+
+    private void JumpToCrossing(int index)
+    {
+        if (index >= _crossings.Count) return;
+        _spectrum.SetCursor(_crossings[index].PointIndex);
+        ShowPage(Page.Spectrum);
+        Say($"cursor at the crossing {_crossings[index].LabelA} ↔ {_crossings[index].LabelB}");
+    }
+}

@@ -1,0 +1,405 @@
+using LevelDesign.Core.Eigen;
+using LevelDesign.Core.Model;
+using LevelDesign.Core.Sweeps;
+using LevelDesign.Ui.Compute;
+using LevelDesign.Ui.Export;
+using LevelDesign.Ui.Session;
+using LevelDesign.Ui.Text;
+using Terminal.Gui.Input;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+
+namespace LevelDesign.Ui.Views;
+
+/// <summary>
+/// The board: device tree and parameter form on the left, one page (states, shifts, spectrum, crossings,
+/// help) on the right — at 120×34 and above the spectrum and a page show together — then the status line,
+/// the question bar and the key bar. All work runs off the UI thread and comes back through the scheduler;
+/// a result whose generation is no longer current is dropped.
+/// </summary>
+public sealed partial class MainWindow : Window
+{
+    private const int LeftWidth = 30;
+    private static readonly TimeSpan ResweepPause = TimeSpan.FromMilliseconds(600);
+
+    private readonly EditSession _session;
+    private readonly ISweepService _sweeps;
+    private readonly ITargetSolver _targets;
+    private readonly IPlotExporter? _plots;
+    private readonly IUiScheduler _scheduler;
+
+    private readonly FrameView _boardFrame, _formFrame, _pageFrame, _plotFrame;
+    private readonly RowList _board, _form, _page;
+    private readonly SpectrumView _spectrum;
+    private readonly StatusLine _status;
+    private readonly PromptBar _prompt;
+
+    private readonly LatestOnly _pointJobs = new(), _sweepJobs = new();
+    private IReadOnlyList<BoardNode> _nodes = [];
+    private IReadOnlyList<FieldRow> _fields = [];
+    private Page _pageShown = Page.States, _pageBeforeHelp = Page.States;
+    private bool _showLimits, _wideOff, _allowQuit, _computing, _sweeping, _sweepStale;
+    private PointSnapshot? _snapshot, _cursorSnapshot;
+    private string _eigenPath = "…";
+    private SweepRequest? _lastSweep;
+    private SweepResult? _sweep;
+    private SpectrumSeries? _series;
+    private IReadOnlyList<NearApproach> _crossings = [];
+    private Manifold _manifold = Manifold.UpToTwo;
+    private object? _resweepTimer;
+    private string _progressText = "";
+
+    public MainWindow(EditSession session, IUiScheduler scheduler, ISweepService? sweeps = null, ITargetSolver? targets = null, IPlotExporter? plots = null)
+    {
+        _session = session;
+        _scheduler = scheduler;
+        _sweeps = sweeps ?? new SweepService();
+        _targets = targets ?? new PendingTargetSolver();
+        _plots = plots;
+        if (Palette.Monochrome) SetScheme(Palette.MonochromeScheme());
+
+        _board = new RowList { Width = Dim.Fill(), Height = Dim.Fill() };
+        _board.CanSelect = i => i < _nodes.Count && _nodes[i].Kind != BoardNodeKind.Group;
+        _boardFrame = new FrameView { Title = "Board", X = 0, Y = 0, Width = LeftWidth, Height = Dim.Percent(45) };
+        _boardFrame.Add(_board);
+
+        _form = new RowList { Width = Dim.Fill(), Height = Dim.Fill() };
+        _formFrame = new FrameView { Title = "Parameters", X = 0, Y = Pos.Bottom(_boardFrame), Width = LeftWidth, Height = Dim.Fill(3) };
+        _formFrame.Add(_form);
+
+        _page = new RowList { Selectable = false, Width = Dim.Fill(), Height = Dim.Fill() };
+        _pageFrame = new FrameView { Title = "States", X = LeftWidth, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(3) };
+        _pageFrame.Add(_page);
+
+        _spectrum = new SpectrumView { Width = Dim.Fill(), Height = Dim.Fill() };
+        _plotFrame = new FrameView { Title = "Spectrum", X = LeftWidth, Y = 0, Width = Dim.Fill(), Height = Dim.Fill(3), Visible = false };
+        _plotFrame.Add(_spectrum);
+
+        _crossingList = new RowList { Width = Dim.Fill(), Height = Dim.Fill(), Visible = false };
+        _pageFrame.Add(_crossingList);
+
+        _status = new StatusLine { X = 0, Y = Pos.AnchorEnd(3), Width = Dim.Fill() };
+        _prompt = new PromptBar { X = 0, Y = Pos.AnchorEnd(6), Width = Dim.Fill() };
+
+        Add(_boardFrame, _formFrame, _pageFrame, _plotFrame, _status, _prompt, BuildKeyBar());
+        BindBoardKeys();
+        BindWindowKeys();
+
+        _board.SelectionChanged += _ => ShowFields();
+        _board.RowActivated += _ => _form.SetFocus();
+        _form.RowActivated += _ => EditField();
+        _form.Bind(Key.F2, Command.Edit, () => { EditField(); return true; });
+        _spectrum.CursorMoved += OnCursorMoved;
+        _crossingList.RowActivated += JumpToCrossing;
+        _crossingList.Bind(Key.Esc, Command.Cancel, () => { ShowPage(Page.Spectrum); return true; });
+        FrameChanged += (_, _) => ApplyLayout();
+
+        _session.Changed += OnDocumentChanged;
+        Title = "LevelDesign";
+        OnDocumentChanged();
+        ApplyLayout();
+        _scheduler.Post(OfferRecovery);
+        WatchDisk();
+    }
+
+    private readonly RowList _crossingList;
+
+    /// <summary>The question bar, for tests and for the app to answer start-up offers.</summary>
+    public PromptBar Prompt => _prompt;
+    public Page CurrentPage => _pageShown;
+    public SpectrumView Spectrum => _spectrum;
+    public SweepResult? LastSweep => _sweep;
+    public bool IsComputing => _computing || _sweeping;
+    public bool QuitAllowed => _allowQuit;
+
+    private StatusBar BuildKeyBar() => new(
+    [
+        // Most used first: at 80 columns the tail is cut off, and the help page (F1) lists every key.
+        new Shortcut(Key.F1, "Help", ToggleHelp, ""),
+        new Shortcut(Key.F2, "Edit", EditField, ""),
+        new Shortcut(Key.F3, "Page", NextPage, ""),
+        new Shortcut(Key.F5, "Sweep", AskSweep, ""),
+        new Shortcut(Key.S.WithCtrl, "Save", () => InvokeCommand(Command.Save), ""),
+        new Shortcut(Key.Z.WithCtrl, "Undo", () => InvokeCommand(Command.Undo), ""),
+        new Shortcut(Key.Q.WithCtrl, "Quit", () => InvokeCommand(Command.Quit), ""),
+        new Shortcut(Key.F4, "Wide", ToggleWide, ""),
+        new Shortcut(Key.F7, "Manifold", NextManifold, ""),
+        new Shortcut(Key.F8, "Export", AskExport, ""),
+        new Shortcut(Key.F9, "Target", AskTarget, ""),
+    ]);
+
+    private void BindWindowKeys()
+    {
+        AddCommand(Command.Save, () => { Save(null); return true; });
+        AddCommand(Command.SaveAs, () => { AskSaveAs(); return true; });
+        AddCommand(Command.Undo, () => { Report(_session.Undo()); return true; });
+        AddCommand(Command.Redo, () => { Report(_session.Redo()); return true; });
+        AddCommand(Command.Refresh, () => { AskReload(); return true; });
+        AddCommand(Command.Quit, () => { RequestQuit(); return true; });
+        AddCommand(Command.Cancel, CancelSomething);
+        AddCommand(Command.Context, () => { ToggleLimits(); return true; });
+        KeyBindings.ReplaceCommands(Key.S.WithCtrl, Command.Save);
+        KeyBindings.ReplaceCommands(Key.W.WithCtrl, Command.SaveAs);
+        KeyBindings.ReplaceCommands(Key.Z.WithCtrl, Command.Undo);
+        KeyBindings.ReplaceCommands(Key.Y.WithCtrl, Command.Redo);
+        KeyBindings.ReplaceCommands(Key.L.WithCtrl, Command.Refresh);
+        KeyBindings.ReplaceCommands(Key.Q.WithCtrl, Command.Quit);
+        KeyBindings.ReplaceCommands(Key.Esc, Command.Cancel);
+        _page.Bind(Key.L, Command.Context, () => { ToggleLimits(); return true; });
+    }
+
+    private void BindBoardKeys()
+    {
+        _board.Bind(Key.InsertChar, Command.Insert, () => { AskAdd(); return true; });
+        _board.Bind(Key.Delete, Command.DeleteCharRight, () => { AskRemove(); return true; });
+        _board.Bind(Key.F6, Command.Edit, () => { AskRename(); return true; });
+    }
+
+    // ---- layout -------------------------------------------------------------------------------------
+
+    private bool Wide => Frame.Width >= 120 && Frame.Height >= 34;
+
+    private void ApplyLayout()
+    {
+        // At small sizes help and errors take the whole width, so no line is cut.
+        bool left = !_wideOff && !(_pageShown is Page.Help or Page.Errors && Frame.Width < 120);
+        _boardFrame.Visible = _formFrame.Visible = left;
+        int x = left ? LeftWidth : 0;
+        bool plotPage = _pageShown == Page.Spectrum;
+        if (Wide && _pageShown is not (Page.Help or Page.Errors))
+        {
+            _plotFrame.Visible = _pageFrame.Visible = true;
+            _plotFrame.X = _pageFrame.X = x;
+            _plotFrame.Y = 0;
+            _plotFrame.Height = Dim.Percent(55);
+            _pageFrame.Y = Pos.Bottom(_plotFrame);
+        }
+        else
+        {
+            _plotFrame.Visible = plotPage;
+            _pageFrame.Visible = !plotPage;
+            _plotFrame.X = _pageFrame.X = x;
+            _plotFrame.Y = _pageFrame.Y = 0;
+            _plotFrame.Height = Dim.Fill(3);
+        }
+        _pageFrame.Height = Dim.Fill(3);
+        RefreshPage();
+    }
+
+    private void ToggleWide()
+    {
+        _wideOff = !_wideOff;
+        if (_wideOff && (_board.HasFocus || _form.HasFocus)) FocusPage();
+        ApplyLayout();
+    }
+
+    private void FocusPage()
+    {
+        if (_plotFrame.Visible && _pageShown == Page.Spectrum) _spectrum.SetFocus();
+        else if (_crossingList.Visible) _crossingList.SetFocus();
+        else _page.SetFocus();
+    }
+
+    private void NextPage()
+    {
+        var next = _pageShown switch
+        {
+            Page.States => Page.Shifts,
+            Page.Shifts => Page.Spectrum,
+            Page.Spectrum => Page.Crossings,
+            _ => Page.States,
+        };
+        ShowPage(next);
+    }
+
+    public void ShowPage(Page page)
+    {
+        if (page == Page.Help && _pageShown != Page.Help) _pageBeforeHelp = _pageShown;
+        _pageShown = page;
+        ApplyLayout();
+        FocusPage();
+    }
+
+    private void ToggleHelp()
+    {
+        if (_pageShown == Page.Help) ShowPage(_pageBeforeHelp);
+        else { _showLimits = false; ShowPage(Page.Help); }
+    }
+
+    private void ToggleLimits()
+    {
+        if (_pageShown != Page.Help) return;
+        _showLimits = !_showLimits;
+        RefreshPage();
+    }
+
+    private bool? CancelSomething()
+    {
+        if (_sweeping)
+        {
+            _sweepJobs.Cancel();
+            _sweeping = false;
+            Say("sweep cancelled; the points computed so far stay on screen");
+            return true;
+        }
+        if (_pageShown == Page.Help) { ShowPage(_pageBeforeHelp); return true; }
+        return false;
+    }
+
+    // ---- board and form -------------------------------------------------------------------------
+
+    private void OnDocumentChanged()
+    {
+        var document = _session.Document;
+        Title = "LevelDesign — " + (_session.Path is null ? "demo device" : Path.GetFileName(_session.Path));
+        if (document is null)
+        {
+            _nodes = [];
+            _board.SetLines([new TextLine("(no device)")]);
+            _form.SetLines([]);
+            if (_session.LoadErrors.Count > 0) ShowPage(Page.Errors);
+            UpdateStatus();
+            return;
+        }
+        string? selectedId = _board.SelectedIndex < _nodes.Count ? _nodes[_board.SelectedIndex].Id : null;
+        _nodes = BoardOutline.Nodes(document);
+        int found = _nodes.ToList().FindIndex(n => n.Id == selectedId && n.Kind != BoardNodeKind.Group);
+        int select = found >= 0 ? found : Math.Min(_board.SelectedIndex, _nodes.Count - 1); // a renamed item keeps its place
+        if (selectedId is null) select = Math.Max(0, _nodes.ToList().FindIndex(n => n.Kind == BoardNodeKind.Element));
+        _board.SetLines(_nodes.Select(n => new TextLine(new string(' ', 2 * n.Depth) + (n.Kind == BoardNodeKind.Group ? "▾ " : "") + n.Text,
+            Heading: n.Kind is BoardNodeKind.Group or BoardNodeKind.Device)).ToList(), select);
+        ShowFields();
+        if (_pageShown == Page.Errors) ShowPage(Page.States);
+        StartPointCompute(document.Device);
+        if (_lastSweep is not null) ScheduleResweep();
+        UpdateStatus();
+    }
+
+    private void ShowFields()
+    {
+        var document = _session.Document;
+        if (document is null || _board.SelectedIndex >= _nodes.Count) { _form.SetLines([]); return; }
+        var node = _nodes[_board.SelectedIndex];
+        _fields = BoardOutline.Fields(document, node);
+        _formFrame.Title = node.Kind switch
+        {
+            BoardNodeKind.Element => $"Parameters: {node.Id}",
+            BoardNodeKind.Coupler => $"Coupler: {node.Id}",
+            BoardNodeKind.Bias => $"Bias: {node.Id}",
+            _ => "Device",
+        };
+        int nameWidth = Math.Max(6, _fields.Select(f => f.Name.Length).DefaultIfEmpty(6).Max());
+        _form.SetLines(_fields.Select(f => new TextLine($"{f.Name.PadRight(nameWidth)} {(f.Editable ? "" : "·")}{f.ValueText}")).ToList(),
+            _fields.ToList().FindIndex(f => f.Editable) is int first and >= 0 ? Math.Max(first, Math.Min(_form.SelectedIndex, _fields.Count - 1)) : 0);
+    }
+
+    private void EditField()
+    {
+        if (_session.Document is null) { Say("no device is open", warning: true); return; }
+        if (_form.SelectedIndex >= _fields.Count) return;
+        var field = _fields[_form.SelectedIndex];
+        if (!field.Editable) { Say($"{field.Name} is shown for reference; it is not edited here (· marks read-only rows)"); return; }
+        _prompt.Ask($"{field.FieldPath} =   ({field.Hint})", field.ValueText, text =>
+        {
+            var outcome = _session.SetValue(field.FieldPath!, text);
+            if (!outcome.Accepted) return $"{field.Name} stays {field.ValueText}: {outcome.Message}";
+            Say(outcome.Message + (_lastSweep is null ? "" : "; the sweep re-runs shortly"));
+            return null;
+        });
+    }
+
+    private string? SelectedItemId(params BoardNodeKind[] kinds) =>
+        _board.SelectedIndex < _nodes.Count && kinds.Contains(_nodes[_board.SelectedIndex].Kind) ? _nodes[_board.SelectedIndex].Id : null;
+
+    private void AskAdd()
+    {
+        var kinds = new Dictionary<char, (string Kind, bool Coupler)>
+        {
+            ['t'] = ("transmon", false), ['u'] = ("tunable_transmon", false), ['f'] = ("fluxonium", false),
+            ['k'] = ("kerr", false), ['r'] = ("resonator", false),
+            ['c'] = ("capacitive", true), ['i'] = ("inductive", true), ['x'] = ("exchange", true),
+        };
+        _prompt.Choose("add: t transmon · u tunable transmon · f fluxonium · k kerr · r resonator │ couplers: c capacitive · i inductive · x exchange",
+            kinds.ToDictionary(k => k.Key, k => (Action)(() => AskNewId(k.Value.Kind, k.Value.Coupler))));
+    }
+
+    private void AskNewId(string kind, bool coupler)
+    {
+        if (!coupler)
+        {
+            _prompt.Ask($"id of the new {kind}", "", id => Report(_session.AddElement(kind, id.Trim())) ? null : _prompt.Message);
+            return;
+        }
+        var ids = _session.Document?.Device.Elements.Select(e => e.Id).ToList() ?? [];
+        string suggestion = ids.Count >= 2 ? $"g_{ids[0]}_{ids[1]} {ids[0]} {ids[1]} 10 MHz" : "";
+        _prompt.Ask($"new {kind} coupler: ID ELEMENT_A ELEMENT_B STRENGTH", suggestion, text =>
+        {
+            var w = text.Split(' ', 4, StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
+            if (w.Length < 4) return "write ID ELEMENT_A ELEMENT_B STRENGTH, e.g. g_qa_qb qa qb 10 MHz";
+            var outcome = _session.AddCoupler(kind, w[0], w[1], w[2], w[3]);
+            Report(outcome);
+            return outcome.Accepted ? null : outcome.Message;
+        });
+    }
+
+    private void AskRemove()
+    {
+        string? id = SelectedItemId(BoardNodeKind.Element, BoardNodeKind.Coupler);
+        if (id is null) { Say("select an element or coupler to remove"); return; }
+        _prompt.Choose($"remove '{id}' (couplers linked to it go too)?  y remove · Esc keep",
+            new Dictionary<char, Action> { ['y'] = () => Report(_session.Remove(id)) });
+    }
+
+    private void AskRename()
+    {
+        string? id = SelectedItemId(BoardNodeKind.Element, BoardNodeKind.Coupler);
+        if (id is null) { Say("select an element or coupler to rename"); return; }
+        _prompt.Ask($"rename '{id}' to (couplers follow)", id, text =>
+        {
+            var outcome = _session.Rename(id, text.Trim());
+            Report(outcome);
+            return outcome.Accepted ? null : outcome.Message;
+        });
+    }
+
+    // ---- messages -------------------------------------------------------------------------------
+
+    private bool Report(EditOutcome outcome)
+    {
+        Say(outcome.Accepted ? outcome.Message : "✗ " + outcome.Message, warning: !outcome.Accepted);
+        return outcome.Accepted;
+    }
+
+    private void Say(string message, bool warning = false)
+    {
+        _status.Message = message;
+        _status.MessageIsWarning = warning;
+        UpdateStatus();
+    }
+
+    private void UpdateStatus()
+    {
+        string file = _session.Path is null ? "demo" : Path.GetFileName(_session.Path);
+        string dirty = _session.IsDirty ? " ● unsaved" : "";
+        string disk = _diskChanged ? " ⚠ changed on disk" : "";
+        string computed = _computing ? "⟳ computing" : _snapshot is null ? "not computed" : $"at {_snapshot.ComputedAt:HH:mm:ss} ({_snapshot.Elapsed.TotalSeconds:0.00} s)";
+        string trunc = _snapshot?.ConvergenceText ?? "…";
+        string sweep = _sweeping ? $" │ {_progressText} Esc cancels" : "";
+        _status.Facts = $"{file}{dirty}{disk} │ eigen {_eigenPath} │ trunc {trunc} │ {computed}{sweep}";
+        _status.SetNeedsDraw();
+    }
+
+    private static bool NativeEigen()
+    {
+        try { return EigenSolvers.Active.IsNative; }
+        catch (Exception e) when (e is not OutOfMemoryException) { return false; }
+    }
+
+    private static string DescribeProblem(Exception e) => e switch
+    {
+        InvalidDeviceException invalid => "the device is not valid: " + string.Join("; ", invalid.Problems),
+        AggregateException { InnerException: { } inner } => DescribeProblem(inner),
+        NotImplementedException => "this needs a part of LevelDesign that is not built yet",
+        _ => e.Message,
+    };
+}

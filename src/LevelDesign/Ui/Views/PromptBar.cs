@@ -1,0 +1,136 @@
+using Terminal.Gui.Drawing;
+using Terminal.Gui.Input;
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+
+namespace LevelDesign.Ui.Views;
+
+/// <summary>
+/// The two-line question area at the bottom of the board: either a typed answer (Enter accepts, Esc
+/// cancels; a refused answer keeps the prompt open and shows the reason) or a one-key choice such as
+/// "s save and quit · d discard · Esc stay". Used instead of modal dialogs so nothing ever blocks.
+/// </summary>
+public sealed class PromptBar : View
+{
+    private readonly TextField _input;
+    private Func<string, string?>? _onAnswer;
+    private IReadOnlyDictionary<char, Action>? _choices;
+    private Action? _onCancel;
+    private View? _returnFocus;
+    private string _question = "";
+    private string _message = "";
+
+    public PromptBar()
+    {
+        CanFocus = true;
+        Visible = false;
+        Height = 3;
+        _input = new TextField { X = 2, Y = 1, Width = Dim.Fill(1) };
+        _input.Accepting += (_, e) =>
+        {
+            e.Handled = true;
+            Answer();
+        };
+        Add(_input);
+        AddCommand(Command.Cancel, Cancel);
+        AddCommand(Command.Toggle, context =>
+        {
+            if (_choices is null || context?.Binding is not KeyBinding { Key: { } key }) return false;
+            char c = char.ToLowerInvariant((char)key.AsRune.Value);
+            if (!_choices.TryGetValue(c, out var action)) return false;
+            Close();
+            action();
+            return true;
+        });
+        KeyBindings.Add(Key.Esc, Command.Cancel);
+    }
+
+    public bool IsOpen => Visible;
+    public string Question => _question;
+    public string Message => _message;
+
+    /// <summary>Asks for text. <paramref name="onAnswer"/> returns null to close, or a reason to keep asking.</summary>
+    public void Ask(string question, string initial, Func<string, string?> onAnswer, Action? onCancel = null)
+    {
+        Open(question, onCancel);
+        _onAnswer = onAnswer;
+        _choices = null;
+        _input.Visible = true;
+        _input.Text = initial;
+        _input.InsertionPoint = initial.Length;
+        _input.SetFocus();
+    }
+
+    /// <summary>Asks for one key; each key in <paramref name="choices"/> runs its action. Esc runs <paramref name="onCancel"/>.</summary>
+    public void Choose(string question, IReadOnlyDictionary<char, Action> choices, Action? onCancel = null)
+    {
+        Open(question, onCancel);
+        _onAnswer = null;
+        _choices = choices;
+        _input.Visible = false;
+        foreach (char c in choices.Keys) KeyBindings.ReplaceCommands(new Key(c), Command.Toggle);
+        SetFocus();
+    }
+
+    private void Open(string question, Action? onCancel)
+    {
+        if (!Visible) _returnFocus = App?.Navigation?.GetFocused();
+        _question = question;
+        _message = "";
+        _onCancel = onCancel;
+        Visible = true;
+        SetNeedsDraw();
+    }
+
+    private void Answer()
+    {
+        if (_onAnswer is null) return;
+        string text = _input.Text ?? "";
+        var handler = _onAnswer;
+        string? refusal = handler(text);
+        if (refusal is null)
+        {
+            if (ReferenceEquals(handler, _onAnswer)) Close();
+            return;
+        }
+        _message = "✗ " + refusal;
+        SetNeedsDraw();
+    }
+
+    private bool? Cancel()
+    {
+        if (!Visible) return false;
+        var cancel = _onCancel;
+        Close();
+        cancel?.Invoke();
+        return true;
+    }
+
+    public void Close()
+    {
+        if (_choices is not null)
+            foreach (char c in _choices.Keys) KeyBindings.Remove(new Key(c));
+        _choices = null;
+        _onAnswer = null;
+        bool hadFocus = HasFocus;   // an answer may already have moved focus on purpose (e.g. to the spectrum)
+        Visible = false;
+        var back = _returnFocus;
+        _returnFocus = null;
+        if (hadFocus && back is { Visible: true }) back.SetFocus();
+        SuperView?.SetNeedsDraw();
+    }
+
+    protected override bool OnDrawingContent(DrawContext? context)
+    {
+        int width = Viewport.Width;
+        SetAttribute(GetAttributeForRole(VisualRole.Normal));
+        Move(0, 0);
+        AddStr(RowList.Pad("» " + _question, width));
+        if (_choices is not null) { Move(0, 1); AddStr(RowList.Pad("", width)); }
+        else { Move(0, 1); AddStr("  "); }
+        Move(0, 2);
+        SetAttribute(_message.Length > 0 ? Palette.Warning(this) : GetAttributeForRole(VisualRole.Normal));
+        AddStr(RowList.Pad(_message.Length > 0 ? "  " + _message : _choices is null ? "  Enter accept · Esc cancel" : "  Esc cancel", width));
+        return true;
+    }
+}

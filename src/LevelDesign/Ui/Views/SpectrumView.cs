@@ -1,0 +1,206 @@
+using LevelDesign.Ui.Compute;
+using LevelDesign.Ui.Drawing;
+using LevelDesign.Ui.Text;
+using Terminal.Gui.Drawing;
+using Terminal.Gui.Input;
+using Terminal.Gui.ViewBase;
+
+namespace LevelDesign.Ui.Views;
+
+/// <summary>
+/// Dressed transition frequencies against the swept bias, drawn with braille dots. Each branch is named at
+/// its right end; crossings are marked "×"; the bias cursor is a dotted column with its value in the header.
+/// ←/→ move the cursor, +/− zoom and PgUp/PgDn pan the frequency axis, Home fits it again.
+/// </summary>
+public sealed class SpectrumView : View
+{
+    private const int AxisWidth = 8;
+    /// <summary>Only the narrowest crossings are marked, so the marks stay readable; all are listed on the crossings page.</summary>
+    public const int MarkedCrossings = 8;
+    private SpectrumSeries? _series;
+    private IReadOnlyList<NearApproach> _crossings = [];
+    private double? _low, _high;
+
+    public SpectrumView()
+    {
+        CanFocus = true;
+        AddCommand(Command.Left, () => MoveCursor(-1));
+        AddCommand(Command.Right, () => MoveCursor(1));
+        AddCommand(Command.LeftStart, () => MoveCursor(-10));
+        AddCommand(Command.RightEnd, () => MoveCursor(10));
+        AddCommand(Command.ZoomIn, () => Zoom(0.5));
+        AddCommand(Command.ZoomOut, () => Zoom(2));
+        AddCommand(Command.PageUp, () => Pan(0.5));
+        AddCommand(Command.PageDown, () => Pan(-0.5));
+        AddCommand(Command.Up, () => Pan(0.1));
+        AddCommand(Command.Down, () => Pan(-0.1));
+        AddCommand(Command.Start, () => { _low = _high = null; SetNeedsDraw(); return true; });
+        KeyBindings.Add(Key.CursorLeft, Command.Left);
+        KeyBindings.Add(Key.CursorRight, Command.Right);
+        KeyBindings.Add(Key.CursorLeft.WithShift, Command.LeftStart);
+        KeyBindings.Add(Key.CursorRight.WithShift, Command.RightEnd);
+        KeyBindings.Add(new Key('+'), Command.ZoomIn);
+        KeyBindings.Add(new Key('='), Command.ZoomIn);
+        KeyBindings.Add(new Key('-'), Command.ZoomOut);
+        KeyBindings.Add(Key.PageUp, Command.PageUp);
+        KeyBindings.Add(Key.PageDown, Command.PageDown);
+        KeyBindings.Add(Key.CursorUp, Command.Up);
+        KeyBindings.Add(Key.CursorDown, Command.Down);
+        KeyBindings.Add(Key.Home, Command.Start);
+    }
+
+    public int CursorIndex { get; private set; }
+    public string ManifoldText { get; set; } = "";
+    public string Status { get; set; } = "no sweep yet: F5 starts one";
+    public SpectrumSeries? Series => _series;
+
+    public event Action<int>? CursorMoved;
+
+    public void Show(SpectrumSeries? series, IReadOnlyList<NearApproach> crossings)
+    {
+        _series = series;
+        _crossings = crossings;
+        if (series is not null) CursorIndex = Math.Clamp(CursorIndex, 0, Math.Max(0, series.Axis.Length - 1));
+        SetNeedsDraw();
+    }
+
+    public void SetCursor(int index)
+    {
+        if (_series is null || _series.Axis.Length == 0) return;
+        CursorIndex = Math.Clamp(index, 0, _series.Axis.Length - 1);
+        SetNeedsDraw();
+        CursorMoved?.Invoke(CursorIndex);
+    }
+
+    private bool? MoveCursor(int delta)
+    {
+        SetCursor(CursorIndex + delta);
+        return true;
+    }
+
+    private bool? Zoom(double factor)
+    {
+        var (low, high) = Range();
+        double middle = (low + high) / 2, half = (high - low) / 2 * factor;
+        (_low, _high) = (middle - half, middle + half);
+        SetNeedsDraw();
+        return true;
+    }
+
+    private bool? Pan(double fraction)
+    {
+        var (low, high) = Range();
+        double shift = (high - low) * fraction;
+        (_low, _high) = (low + shift, high + shift);
+        SetNeedsDraw();
+        return true;
+    }
+
+    /// <summary>The frequency window shown: the zoomed one, or all branches with a small margin.</summary>
+    public (double Low, double High) Range()
+    {
+        if (_low is double l && _high is double h) return (l, h);
+        var values = _series?.Branches.SelectMany(b => b.Frequencies).Where(double.IsFinite).ToList() ?? [];
+        if (values.Count == 0) return (0, 10);
+        double min = values.Min(), max = values.Max(), pad = Math.Max(0.02, (max - min) * 0.05);
+        return (min - pad, max + pad);
+    }
+
+    protected override bool OnDrawingContent(DrawContext? context)
+    {
+        int width = Viewport.Width, height = Viewport.Height;
+        var normal = GetAttributeForRole(VisualRole.Normal);
+        SetAttribute(normal);
+        for (int r = 0; r < height; r++) { Move(0, r); AddStr(new string(' ', Math.Max(0, width))); }
+        if (width < AxisWidth + 10 || height < 5) { Move(0, 0); AddStr(RowList.Pad("enlarge to see the spectrum", width)); return true; }
+
+        var series = _series;
+        string header = series is null || series.Axis.Length == 0
+            ? $"Spectrum — {Status}"
+            : $"cursor {series.AxisName} = {Numbers.Plain(series.Axis[CursorIndex])} │ {ManifoldText} │ {Status}";
+        Move(0, 0);
+        AddStr(RowList.Pad(header, width));
+        int labelWidth = width >= 60 ? 12 : width >= 45 ? 8 : 0;
+        int plotColumns = width - AxisWidth - labelWidth, plotRows = height - 3;
+        if (series is null || series.Axis.Length == 0 || plotColumns < 4 || plotRows < 2)
+        {
+            Move(0, 2);
+            AddStr(RowList.Pad("←/→ cursor  +/− zoom  PgUp/PgDn pan  Home fit  F7 manifold", width));
+            return true;
+        }
+
+        var (low, high) = Range();
+        double xMin = series.Axis[0], xMax = series.Axis[^1];
+        if (xMax == xMin) xMax = xMin + 1;
+        var canvas = new BrailleCanvas(plotColumns, plotRows);
+        int DotX(double x) => (int)Math.Round((x - xMin) / (xMax - xMin) * (canvas.DotWidth - 1));
+        int DotY(double f) => (int)Math.Round((high - f) / (high - low) * (canvas.DotHeight - 1));
+        var ends = new List<(int Row, string Label)>();
+        foreach (var branch in series.Branches)
+        {
+            int? lastX = null, lastY = null;
+            for (int i = 0; i < series.Axis.Length; i++)
+            {
+                double f = branch.Frequencies[i];
+                if (!double.IsFinite(f)) { lastX = lastY = null; continue; }
+                int x = DotX(series.Axis[i]), y = DotY(f);
+                if (lastX is int px && lastY is int py) canvas.Line(px, py, x, y); else canvas.Set(x, y);
+                (lastX, lastY) = (x, y);
+            }
+            if (lastY is int endY && endY >= 0 && endY < canvas.DotHeight) ends.Add((endY / 4, branch.Label));
+        }
+
+        int cursorColumn = Math.Clamp(DotX(series.Axis[CursorIndex]) / 2, 0, plotColumns - 1);
+        var marks = new HashSet<(int, int)>();
+        foreach (var c in _crossings.Take(MarkedCrossings))
+        {
+            int cx = DotX(c.AxisValue) / 2, cy = DotY(c.FrequencyGHz) / 4;
+            if (cx >= 0 && cx < plotColumns && cy >= 0 && cy < plotRows) marks.Add((cx, cy));
+        }
+
+        for (int row = 0; row < plotRows; row++)
+        {
+            Move(0, row + 1);
+            SetAttribute(normal);
+            bool tick = row == 0 || row == plotRows - 1 || row == plotRows / 2;
+            double f = high - (high - low) * (row * 4 + 1.5) / (canvas.DotHeight - 1);
+            AddStr(tick ? $"{Numbers.Plain(f, 3),7}┤" : "       │");
+            for (int column = 0; column < plotColumns; column++)
+            {
+                if (marks.Contains((column, row))) { SetAttribute(Palette.Warning(this)); AddRune('×'); SetAttribute(normal); continue; }
+                if (column == cursorColumn)
+                {
+                    SetAttribute(Palette.Cursor(this));
+                    AddRune(canvas.IsEmpty(column, row) ? '┊' : canvas.CharAt(column, row));
+                    SetAttribute(normal);
+                    continue;
+                }
+                AddRune(canvas.IsEmpty(column, row) ? ' ' : canvas.CharAt(column, row));
+            }
+        }
+
+        // Branch names at the right end, nudged down so two never share a row.
+        var used = new HashSet<int>();
+        foreach (var (row, label) in ends.OrderBy(e => e.Row))
+        {
+            if (labelWidth == 0) break;
+            int r = row;
+            while (used.Contains(r) && r < plotRows - 1) r++;
+            if (used.Contains(r)) continue;
+            used.Add(r);
+            Move(AxisWidth + plotColumns, r + 1);
+            AddStr(RowList.Pad(" " + label, labelWidth));
+        }
+
+        Move(0, height - 2);
+        AddStr(new string(' ', AxisWidth - 1) + "└" + new string('─', plotColumns));
+        string left = Numbers.Plain(xMin, 3), right = Numbers.Plain(xMax, 3);
+        string axisLine = new string(' ', AxisWidth) + left;
+        int rightAt = AxisWidth + plotColumns - right.Length;
+        axisLine = axisLine.PadRight(Math.Max(axisLine.Length, rightAt)) [..Math.Max(axisLine.Length, rightAt)] + right;
+        string hint = $"  {series.AxisName} → · f in GHz · × crossing";
+        Move(0, height - 1);
+        AddStr(RowList.Pad(axisLine + hint, width));
+        return true;
+    }
+}

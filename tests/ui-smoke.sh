@@ -1,0 +1,99 @@
+#!/usr/bin/env bash
+# Smoke test of the real terminal UI in tmux at 80x24 and 120x40: sends keys, captures the pane, checks text.
+# Also kills the process mid-edit (kill -9) and checks that the next start offers the recovered edits.
+# Usage: tests/ui-smoke.sh            (skips with exit 0 when tmux is missing)
+# LEVELDESIGN_CMD overrides how the UI is started (default: dotnet <built leveldesign.dll>).
+set -euo pipefail
+cd "$(dirname "$0")/.."
+if ! command -v tmux >/dev/null; then echo "ui-smoke: tmux not found, skipped"; exit 0; fi
+
+dotnet build src/LevelDesign/LevelDesign.csproj -nologo -v q >/dev/null
+CMD=${LEVELDESIGN_CMD:-"dotnet $(pwd)/src/LevelDesign/bin/Debug/net10.0/leveldesign.dll"}
+WORK=$(mktemp -d)
+SESSION="ld-smoke-$$"
+trap 'tmux kill-session -t "$SESSION" 2>/dev/null || true; rm -rf "$WORK"' EXIT
+
+# The device: the example file when the device-file layer reads it, else an empty development edit log.
+if [[ -f devices/pair.toml ]] && ! grep -q "NotImplementedException" src/LevelDesign.Core/DeviceFiles/DeviceDocument.cs; then
+  cp devices/pair.toml "$WORK/pair.toml"
+else
+  echo "# development edit log" > "$WORK/pair.toml"
+fi
+export NO_COLOR=1 TERM=xterm-256color
+
+fail=0
+capture() { tmux capture-pane -t "$SESSION" -p; }
+wait_for() { # text, seconds
+  local i
+  for ((i = 0; i < ${2:-20} * 5; i++)); do
+    if capture | grep -qF -- "$1"; then return 0; fi
+    sleep 0.2
+  done
+  echo "FAIL: '$1' did not appear; screen was:"; capture; fail=1; return 1
+}
+has_braille() { capture | grep -qP '[\x{2801}-\x{28FF}]' || { echo "FAIL: no braille dots drawn"; capture; fail=1; }; }
+start() { # width height
+  tmux kill-session -t "$SESSION" 2>/dev/null || true
+  tmux new-session -d -s "$SESSION" -x "$1" -y "$2" "cd '$WORK' && $CMD pair.toml; echo UI-EXITED; sleep 30"
+}
+keys() { tmux send-keys -t "$SESSION" "$@"; sleep 0.3; }
+clear_field() { keys End; for _ in $(seq 30); do tmux send-keys -t "$SESSION" BSpace; done; sleep 0.2; }
+
+echo "== 80x24: open, edit, sweep, cursor"
+start 80 24
+wait_for "States at cursor" 40
+wait_for "trunc" 20
+keys Enter; keys Enter              # board → form → edit the first value
+wait_for "» elements." 5
+clear_field; keys "210 MHz" Enter
+wait_for "● unsaved" 10
+wait_for "210 MHz" 5
+keys F5; wait_for "» sweep:" 5; keys Enter
+wait_for "sweep done" 60
+has_braille
+keys Right Right Right
+wait_for "cursor " 5
+capture > "$WORK/80x24.txt"
+
+echo "== kill -9 mid-edit, then the next start offers recovery"
+pid=$(tmux list-panes -t "$SESSION" -F '#{pane_pid}')
+child=$(pgrep -P "$pid" -f leveldesign || true)
+[[ -n "$child" ]] && kill -9 $child
+wait_for "UI-EXITED" 10
+test -f "$WORK/pair.toml.autosave" || { echo "FAIL: no autosave sidecar after the edit"; fail=1; }
+start 80 24
+wait_for "found edits not saved" 40
+keys r
+wait_for "● unsaved" 10
+
+echo "== save, then quit"
+keys C-s
+wait_for "saved" 10
+test -f "$WORK/pair.toml.bak" || { echo "FAIL: no .bak after save"; fail=1; }
+test -f "$WORK/pair.toml.autosave" && { echo "FAIL: autosave left after save"; fail=1; }
+keys C-q
+wait_for "UI-EXITED" 10
+
+echo "== quit guard"
+start 80 24
+wait_for "States at cursor" 40
+keys Enter; keys Enter; clear_field; keys "215 MHz" Enter
+wait_for "● unsaved" 10
+keys C-q
+wait_for "unsaved changes" 5
+keys Escape
+keys C-q; keys d
+wait_for "UI-EXITED" 10
+
+echo "== 120x40: spectrum and states together, help, limits"
+start 120 40
+wait_for "States at cursor" 40
+wait_for "Spectrum" 5
+keys F1; wait_for "Keys" 5
+keys l; wait_for "Limits of the model" 5
+capture > "$WORK/120x40.txt"
+keys F1; keys C-q
+wait_for "UI-EXITED" 10
+
+if [[ $fail -ne 0 ]]; then echo "ui-smoke: FAILED"; exit 1; fi
+echo "ui-smoke: all checks passed"
