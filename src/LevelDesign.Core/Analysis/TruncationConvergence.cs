@@ -14,7 +14,7 @@ public static class TruncationConvergence
     public static IReadOnlyList<ConvergenceEntry> Check(DeviceSolver solver, Device device, double toleranceGHz = DefaultToleranceGHz)
     {
         var baseValues = DerivedQuantities.From(solver.Solve(device)).Named();
-        var raisedDevice = device with { Truncation = device.Truncation.Raised(device.Elements.Select(e => e.Id)) };
+        var raisedDevice = device with { Truncation = device.Truncation.Raised(device.Elements) };
         var raisedValues = DerivedQuantities.From(solver.Solve(raisedDevice)).Named();
         var entries = new List<ConvergenceEntry>();
         foreach (var (name, value) in baseValues)

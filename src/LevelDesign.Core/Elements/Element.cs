@@ -11,6 +11,9 @@ public abstract record Element(string Id)
     /// <summary>Whether ZZ, 2χ and anharmonicity are reported for this element.</summary>
     public virtual bool IsQubitLike => true;
 
+    /// <summary>The most levels this element can have (a level list has only its given states); null when unbounded.</summary>
+    public virtual int? MaxLevels => null;
+
     /// <summary>Names of the operators that couplers may use.</summary>
     public abstract IReadOnlyList<string> OperatorNames { get; }
 

@@ -18,6 +18,8 @@ public sealed record LevelList(
 
     public int BasisSize => Hamiltonian.GetLength(0);
 
+    public override int? MaxLevels => BasisSize;
+
     public override IReadOnlyList<string> OperatorNames =>
         OperatorMatrices.Keys.Concat(["a", "adag"]).Distinct().ToList();
 

@@ -1,3 +1,5 @@
+using LevelDesign.Core.Elements;
+
 namespace LevelDesign.Core.Model;
 
 /// <summary>
@@ -17,10 +19,13 @@ public sealed record Truncation
 
     public int? BasisSizeOf(string elementId) => BasisSizes.TryGetValue(elementId, out int n) ? n : null;
 
-    /// <summary>Every cutoff raised, for the convergence check: +2 levels each, +1 excitation, +20% energy window, bigger bases.</summary>
-    public Truncation Raised(IEnumerable<string> elementIds)
+    /// <summary>
+    /// Every cutoff raised, for the convergence check: +2 levels each (never past an element's <see cref="Element.MaxLevels"/>),
+    /// +1 excitation, +20% energy window, bigger bases.
+    /// </summary>
+    public Truncation Raised(IEnumerable<Element> elements)
     {
-        var levels = elementIds.ToDictionary(id => id, id => LevelsOf(id) + 2);
+        var levels = elements.ToDictionary(e => e.Id, e => Math.Min(LevelsOf(e.Id) + 2, e.MaxLevels ?? int.MaxValue));
         var sizes = BasisSizes.ToDictionary(kv => kv.Key, kv => kv.Value + 10);
         return this with
         {

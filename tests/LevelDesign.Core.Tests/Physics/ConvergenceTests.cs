@@ -22,4 +22,15 @@ public class ConvergenceTests
         var fine = TruncationConvergence.Check(solver, Device(9));
         Assert.DoesNotContain(fine, e => e.Flagged && !double.IsNaN(e.Value));
     }
+
+    [Fact]
+    public void Level_lists_are_not_raised_past_their_given_states()
+    {
+        var defect = new LevelList("tls", new[,] { { 0.0, 0.0 }, { 0.0, 5.1 } }, new Dictionary<string, double[,]> { ["sx"] = new[,] { { 0.0, 1.0 }, { 1.0, 0.0 } } });
+        var device = new Device("q-tls", [new Transmon("q", 0.25, 15), defect],
+            [Coupler.Create("c", CouplerKind.Custom, "q", "tls", new CouplingStrength.Coefficient(0.01), "n", "sx")],
+            new Truncation { DefaultLevels = 4, Levels = new Dictionary<string, int> { ["tls"] = 2 } });
+        var entries = TruncationConvergence.Check(new DeviceSolver(), device);
+        Assert.Contains(entries, e => e.Quantity == "q.f01" && !e.Flagged);
+    }
 }
