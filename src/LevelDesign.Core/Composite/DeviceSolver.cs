@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using System.Numerics;
 using LevelDesign.Core.Couplers;
 using LevelDesign.Core.Eigen;
@@ -20,6 +21,9 @@ public sealed class DeviceSolver
         Cache = cache ?? new BareSpectrumCache();
     }
 
+    private readonly ConcurrentDictionary<string, BasisStructure> _structures = new();
+    private readonly AssemblyPlanCache _plans = new();
+
     public IEigenSolver EigenSolver { get; }
     public BareSpectrumCache Cache { get; }
 
@@ -31,9 +35,23 @@ public sealed class DeviceSolver
         var t = device.Truncation;
         var bare = device.Elements.Select(e => Cache.Get(e, t.LevelsOf(e.Id), t.BasisSizeOf(e.Id))).ToArray();
         var couplers = device.Couplers.Select(c => CouplerResolver.Resolve(c, device.Elements, bare)).ToArray();
-        var basis = new CompositeBasis(bare.Select(b => b.Energies).ToArray(), t.MaxExcitations, t.MaxBareEnergyGHz);
-        var hamiltonian = HamiltonianAssembler.Assemble(basis, bare, couplers);
+        var energies = bare.Select(b => b.Energies).ToArray();
+        var basis = new CompositeBasis(StructureFor(energies, t), energies);
+        var hamiltonian = HamiltonianAssembler.Assemble(basis, couplers, _plans);
         return new CompositeProblem(device, bare, couplers, basis, hamiltonian);
+    }
+
+    /// <summary>
+    /// The kept product states; without an energy cutoff they depend only on level counts and the excitation cap,
+    /// so one structure (and its assembly plans) is shared by every point of a sweep.
+    /// </summary>
+    private BasisStructure StructureFor(double[][] energies, Truncation t)
+    {
+        if (t.MaxBareEnergyGHz is not null) return new BasisStructure(energies, t.MaxExcitations, t.MaxBareEnergyGHz);
+        string key = string.Join(",", energies.Select(e => e.Length)) + "/" + t.MaxExcitations;
+        if (_structures.TryGetValue(key, out var structure)) return structure;
+        if (_structures.Count >= 64) _structures.Clear();
+        return _structures[key] = new BasisStructure(energies, t.MaxExcitations, null);
     }
 
     public DressedSpectrum Solve(Device device, int? dressedCount = null) => Solve(Prepare(device), dressedCount);

@@ -4,33 +4,28 @@ using LevelDesign.Core.Eigen;
 namespace LevelDesign.Core.Composite;
 
 /// <summary>
-/// A Hermitian matrix stored as its lower triangle (row ≥ column) in coordinate form, summed on build.
+/// A Hermitian matrix stored as values on the lower-triangle positions of a <see cref="HermitianPattern"/>.
 /// The composite Hamiltonian is mostly zeros, so it is assembled here and only densified for dense solvers.
 /// </summary>
 public sealed class SparseHermitian
 {
-    private readonly Dictionary<long, Complex> _lower = new();
+    private readonly HermitianPattern _pattern;
+    private readonly Complex[] _lower;
 
-    public SparseHermitian(int dimension) => Dimension = dimension;
-
-    public int Dimension { get; }
-
-    public int StoredEntries => _lower.Count;
-
-    /// <summary>Adds v at (row, column) and, implicitly, v* at (column, row).</summary>
-    public void AddHermitianPair(int row, int column, Complex value)
+    internal SparseHermitian(HermitianPattern pattern, Complex[] lower)
     {
-        if (row < column) { (row, column) = (column, row); value = Complex.Conjugate(value); }
-        long key = (long)row * Dimension + column;
-        _lower[key] = _lower.TryGetValue(key, out var old) ? old + value : value;
+        _pattern = pattern;
+        _lower = lower;
     }
 
-    /// <summary>Adds to a diagonal entry (real for a Hermitian matrix).</summary>
-    public void AddDiagonal(int index, double value) => AddHermitianPair(index, index, value);
+    public int Dimension => _pattern.Dimension;
+
+    public int StoredEntries => _lower.Length;
 
     public IEnumerable<(int Row, int Column, Complex Value)> LowerEntries()
     {
-        foreach (var (key, v) in _lower) yield return ((int)(key / Dimension), (int)(key % Dimension), v);
+        for (int slot = 0; slot < _lower.Length; slot++)
+            yield return (_pattern.SlotRow[slot], _pattern.SlotColumn[slot], _lower[slot]);
     }
 
     public bool IsReal
@@ -38,8 +33,9 @@ public sealed class SparseHermitian
         get
         {
             double scale = 0;
-            foreach (var v in _lower.Values) scale = Math.Max(scale, Complex.Abs(v));
-            foreach (var v in _lower.Values) if (Math.Abs(v.Imaginary) > 1e-14 * Math.Max(scale, 1)) return false;
+            foreach (var v in _lower) scale = Math.Max(scale, Math.Abs(v.Real) + Math.Abs(v.Imaginary));
+            double negligible = 1e-14 * Math.Max(scale, 1);
+            foreach (var v in _lower) if (Math.Abs(v.Imaginary) > negligible) return false;
             return true;
         }
     }
@@ -49,10 +45,11 @@ public sealed class SparseHermitian
     {
         int n = Dimension;
         var m = new double[(long)n * n];
-        foreach (var (row, col, v) in LowerEntries())
+        for (int slot = 0; slot < _lower.Length; slot++)
         {
-            m[(long)col * n + row] = v.Real;
-            m[(long)row * n + col] = v.Real;
+            int row = _pattern.SlotRow[slot], col = _pattern.SlotColumn[slot];
+            m[(long)col * n + row] = _lower[slot].Real;
+            m[(long)row * n + col] = _lower[slot].Real;
         }
         return m;
     }
@@ -62,15 +59,20 @@ public sealed class SparseHermitian
     {
         int n = Dimension;
         var m = new Complex[(long)n * n];
-        foreach (var (row, col, v) in LowerEntries())
+        for (int slot = 0; slot < _lower.Length; slot++)
         {
-            m[(long)col * n + row] = v;
-            m[(long)row * n + col] = Complex.Conjugate(v);
+            int row = _pattern.SlotRow[slot], col = _pattern.SlotColumn[slot];
+            m[(long)col * n + row] = _lower[slot];
+            m[(long)row * n + col] = Complex.Conjugate(_lower[slot]);
         }
         return m;
     }
 
-    /// <summary>Compressed-row real copy (both triangles) for the iterative eigensolver; only valid when <see cref="IsReal"/>.</summary>
-    public CsrMatrix ToCsrReal() =>
-        CsrMatrix.FromLowerTriangle(Dimension, LowerEntries().Select(e => (e.Row, e.Column, e.Value.Real)));
+    /// <summary>The real part as a full compressed-row matrix for the iterative solver (layout shared along a sweep).</summary>
+    public CsrMatrix ToCsrReal()
+    {
+        var values = new double[_pattern.SourceSlot.Length];
+        for (int p = 0; p < values.Length; p++) values[p] = _lower[_pattern.SourceSlot[p]].Real;
+        return new CsrMatrix(Dimension, _pattern.RowStart, _pattern.Columns, values);
+    }
 }

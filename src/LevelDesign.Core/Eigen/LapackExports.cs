@@ -78,7 +78,19 @@ internal sealed unsafe class LapackExports
         }
 
         failureReason = null;
+        UseOneThreadUnlessAsked(handle);
         return new LapackExports(libraryName, MappedFileContaining(dsyevr), dsyevr, zheevr, dpotrf, dsygst, dtrsm);
+    }
+
+    /// <summary>
+    /// Sweeps run points in parallel and the iterative solver's projected problems are small (tens of states);
+    /// threaded OpenBLAS only adds contention there, so it runs one thread unless OPENBLAS_NUM_THREADS says otherwise.
+    /// </summary>
+    private static void UseOneThreadUnlessAsked(nint handle)
+    {
+        if (Environment.GetEnvironmentVariable("OPENBLAS_NUM_THREADS") is not null) return;
+        if (NativeLibrary.TryGetExport(handle, "openblas_set_num_threads", out nint setThreads))
+            ((delegate* unmanaged<int, void>)setThreads)(1);
     }
 
     /// <summary>

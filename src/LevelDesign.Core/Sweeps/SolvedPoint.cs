@@ -30,7 +30,7 @@ internal sealed record SolvedPoint(CompositeProblem Problem, double[] Values, do
     {
         var basis = Problem.Basis;
         var map = new int[basis.Dimension];
-        bool same = ReferenceEquals(basis, other);
+        bool same = ReferenceEquals(basis.Structure, other.Structure);
         for (int j = 0; j < map.Length; j++) map[j] = same ? j : other.IndexOf(basis.States[j]);
         return map;
     }
