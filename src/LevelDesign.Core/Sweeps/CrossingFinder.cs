@@ -86,9 +86,12 @@ public static class CrossingFinder
             return (Math.Abs(s.Energies[pair[0]] - s.Energies[pair[1]]), purity);
         }
 
-        var (bias, gap) = BrentMinimizer.Minimize(b => Separation(b).Gap is double g && double.IsFinite(g) ? g : double.MaxValue,
+        // the squared gap of two coupled levels is a parabola in the bias near its minimum, so Brent's parabolic
+        // steps converge in a few solves
+        var (bias, squared) = BrentMinimizer.Minimize(b => Separation(b).Gap is double g && double.IsFinite(g) ? g * g : double.MaxValue,
             lower, upper, tolerance);
-        if (gap == double.MaxValue) return null;
+        if (squared == double.MaxValue) return null;
+        double gap = Math.Sqrt(squared);
         var (_, purity) = Separation(bias);
         string label(int[] s) => "|" + string.Join(",", s) + "⟩";
         bool interior = bias > Math.Min(lower, upper) + 10 * tolerance && bias < Math.Max(lower, upper) - 10 * tolerance;
