@@ -46,7 +46,9 @@ public static class CrossingFinder
 
         var found = new Crossing?[candidates.Count];
         int count = first.Count;
-        Parallel.For(0, candidates.Count, new ParallelOptions { CancellationToken = cancellation }, c =>
+        // CPU-bound items: without a cap the thread pool keeps adding workers that only contend for the cores
+        var parallel = new ParallelOptions { CancellationToken = cancellation, MaxDegreeOfParallelism = Environment.ProcessorCount };
+        Parallel.For(0, candidates.Count, parallel, c =>
         {
             var (a, b, lower, upper) = candidates[c];
             found[c] = Refine(solver, resolve, states[a], states[b], lower, upper, count, options.BiasTolerance);
