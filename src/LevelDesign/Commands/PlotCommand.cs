@@ -61,6 +61,8 @@ public static class PlotCommand
             title: $"{document.Device.Name}: spectrum along {setup.Axes[0].Path} ({AxisUnitText.Of(document, setup.Axes[0].Path)}), labels by {(mode == LabelMode.ByCharacter ? "character" : "order")}"
                    + (manifold is int m ? $", {m}-excitation manifold" : ""));
         PlotManifold.Apply(plot, manifold);
+        // the caption from the axis name alone cannot know a bias's control unit; say it, and what the bias moves
+        plot.XLabel(XCaption(document, setup.Axes[0]));
         try
         {
             if (extension == ".svg") SpectrumPlot.SaveSvg(plot, output, w, h);
@@ -73,4 +75,15 @@ public static class PlotCommand
         Console.Error.WriteLine($"wrote {output} ({result.Points.Count} points, {crossings.Count} crossing(s))");
         return ExitCodes.Ok;
     });
+
+    private static string XCaption(Core.DeviceFiles.DeviceDocument document, Core.DeviceFiles.SweepAxis axis)
+    {
+        string unit = AxisUnitText.Of(document, axis.Path);
+        string caption = unit.Length > 0 ? $"{axis.Path} ({unit})" : axis.Path;
+        if (document.Bias(axis.Path) is Core.DeviceFiles.BiasDefinition bias && (bias.Period != 1 || bias.Offset != 0))
+            caption += string.Create(System.Globalization.CultureInfo.InvariantCulture, $";  {bias.Target} = (value − {bias.Offset:G6}) / {bias.Period:G6}");
+        else if (document.Bias(axis.Path) is Core.DeviceFiles.BiasDefinition plain)
+            caption += $" = {plain.Target}";
+        return caption;
+    }
 }
