@@ -126,12 +126,12 @@ public sealed class EndToEndTests
             Assert.True(run.ExitCode == 0, run.ToString());
             var lines = File.ReadAllLines(output).Where(l => !l.StartsWith('#')).ToArray();
             Assert.Equal(7, lines.Length);
-            var header = lines[0].Split(',');
+            var header = ReferenceCsv.Cells(lines[0]);
             Assert.Equal(["point", "q_flux"], header[..2]);
             int column = Array.IndexOf(header, "q.f01");
             Assert.True(column > 0, lines[0]);
             // The tunable transmon's f01 falls monotonically from 0 to Φ0/2 (E_J(Φ) falls; Koch et al. 2007).
-            var f01 = lines.Skip(1).Select(l => double.Parse(l.Split(',')[column], System.Globalization.CultureInfo.InvariantCulture)).ToList();
+            var f01 = lines.Skip(1).Select(l => double.Parse(ReferenceCsv.Cells(l)[column], System.Globalization.CultureInfo.InvariantCulture)).ToList();
             for (int i = 1; i < f01.Count; i++) Assert.True(f01[i] < f01[i - 1]);
         }
         finally
