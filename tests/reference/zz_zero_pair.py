@@ -7,14 +7,19 @@ elements' lowest bare levels pruned by total excitations, couplers c*(opA x opB)
 or, for the exchange form, c*(a_A^dag a_B + a_A a_B^dag). Labels: the bare product state of largest overlap.
 ZZ = E11 - E10 - E01 + E00. Every sign change of ZZ on a scan is refined with scipy.optimize.brentq.
 
-Assumed describe-JSON shape (to be checked against the files work when devices/pair.toml lands):
+describe-JSON shape read here (checked against `leveldesign describe devices/pair.toml --json`):
   {"elements": [{"id": "qa", "kind": "tunable_transmon", "parameters": {"ec":..,"ej_sum":..,"asymmetry":..,"flux":..,"ng":..}}, ...],
-   "couplers": [{"id": "g", "element_a": "qa", "operator_a": "n", "element_b": "c", "operator_b": "n",
-                 "form": "full"|"exchange", "coefficient_ghz": ..  (or "g_ghz": ..)}, ...],
-   "truncation": {"levels": {"qa": 4, ...}, "default_levels": 4, "max_excitations": 3}}
-A "g_ghz" coupler is converted as c = g / |<0|opA|1><0|opB|1>| with the bare matrix elements at each flux.
+   "couplers": [{"id": "qa_qc", "elements": ["qa", "qc"], "operators": ["n", "n"], "form": "full"|"exchange",
+                 "coefficient_ghz": .., "given_as": {"g_ghz": ..} | {"coefficient_ghz": ..} | {"capacitance_f": ..},
+                 "adds_conjugate": bool}, ...],
+   "truncation": {"levels": {"qa": 5, ...}, "max_excitations": 6, "max_bare_energy_ghz": null}}
+A coupler given as "g_ghz" is converted here as c = g / |<0|opA|1><0|opB|1>| with this script's own bare matrix
+elements at each flux (so c follows the coupler flux); every describe in the input file is used to check that
+conversion against the coefficient_ghz LevelDesign reports at that bias (relative 1e-6).
+A pair_describe.json file (tests/reference/make_pair_describe.sh) wraps several describes:
+  {"bias": {"name", "target", "period", "offset"}, "describes": [{"control_a": .., "describe": {...}}, ...]}
 
-usage: zz_zero_pair.py describe.json COUPLER_ID QA QB [flux_lo flux_hi points]
+usage: zz_zero_pair.py pair_describe.json COUPLER_ID QA QB [flux_lo flux_hi points]   (writes data/zz_zero_pair.csv)
        zz_zero_pair.py --self-test
 """
 import itertools
@@ -57,10 +62,37 @@ def element(spec, levels):
     raise SystemExit(f"element '{spec['id']}': kind '{kind}' not handled by this reference script")
 
 
+def coefficient(c, oa, ob):
+    """The coefficient of c*(opA x opB): a given g is converted through this script's bare matrix elements."""
+    given = c.get("given_as", {})
+    if "g_ghz" in given:
+        return given["g_ghz"] / abs(oa[0, 1] * ob[0, 1])
+    if "coefficient_ghz" in given:
+        return given["coefficient_ghz"]
+    raise SystemExit(f"coupler '{c['id']}': given as {given}; not handled by this reference script")
+
+
+def check_conversions(dev):
+    """Every g-given coupler's coefficient computed here must equal the one LevelDesign reports (relative 1e-6)."""
+    ids = [e["id"] for e in dev["elements"]]
+    lv = dev["truncation"]["levels"]
+    bare = {e["id"]: element(e, lv[e["id"]]) for e in dev["elements"]}
+    worst = 0.0
+    for c in dev["couplers"]:
+        a, b = c["elements"]
+        mine = coefficient(c, bare[a][1][c["operators"][0]], bare[b][1][c["operators"][1]])
+        rel = abs(mine - c["coefficient_ghz"]) / abs(c["coefficient_ghz"])
+        assert rel < 1e-6, f"coupler {c['id']}: coefficient {mine} here, {c['coefficient_ghz']} in describe"
+        worst = max(worst, rel)
+    return worst
+
+
 def spectrum(dev):
     t = dev["truncation"]
+    if t.get("max_bare_energy_ghz") is not None:
+        raise SystemExit("a bare-energy window is not handled by this reference script")
     ids = [e["id"] for e in dev["elements"]]
-    lv = [t.get("levels", {}).get(i, t.get("default_levels", 4)) for i in ids]
+    lv = [t["levels"][i] for i in ids]
     bare = [element(e, l) for e, l in zip(dev["elements"], lv)]
     mx = t.get("max_excitations")
     states = [s for s in itertools.product(*[range(l) for l in lv]) if mx is None or sum(s) <= mx]
@@ -70,11 +102,9 @@ def spectrum(dev):
     for i, s in enumerate(states):
         h[i, i] = sum(b[0][l] - b[0][0] for b, l in zip(bare, s))
     for c in dev["couplers"]:
-        ia, ib = ids.index(c["element_a"]), ids.index(c["element_b"])
-        oa, ob = bare[ia][1][c["operator_a"]], bare[ib][1][c["operator_b"]]
-        coef = c.get("coefficient_ghz")
-        if coef is None:
-            coef = c["g_ghz"] / abs(oa[0, 1] * ob[0, 1])
+        ia, ib = ids.index(c["elements"][0]), ids.index(c["elements"][1])
+        oa, ob = bare[ia][1][c["operators"][0]], bare[ib][1][c["operators"][1]]
+        coef = coefficient(c, oa, ob)
         exchange = c.get("form") == "exchange"
         x = oa.conj().T if exchange else oa
         term = np.zeros((dim, dim), dtype=complex)
@@ -126,10 +156,10 @@ def self_test():
         {"id": "c", "kind": "tunable_transmon", "parameters": {"ec": 0.18, "ej_sum": 45.0, "asymmetry": 0.0, "flux": 0.0}},
         {"id": "qb", "kind": "transmon", "parameters": {"ec": 0.21, "ej": 15.0}}],
         "couplers": [
-            {"id": "g1", "element_a": "qa", "operator_a": "n", "element_b": "c", "operator_b": "n", "form": "full", "coefficient_ghz": 0.06},
-            {"id": "g2", "element_a": "qb", "operator_a": "n", "element_b": "c", "operator_b": "n", "form": "full", "coefficient_ghz": 0.06},
-            {"id": "g3", "element_a": "qa", "operator_a": "n", "element_b": "qb", "operator_b": "n", "form": "full", "coefficient_ghz": 0.004}],
-        "truncation": {"default_levels": 4, "max_excitations": 3}}
+            {"id": "g1", "elements": ["qa", "c"], "operators": ["n", "n"], "form": "full", "given_as": {"coefficient_ghz": 0.06}},
+            {"id": "g2", "elements": ["qb", "c"], "operators": ["n", "n"], "form": "full", "given_as": {"coefficient_ghz": 0.06}},
+            {"id": "g3", "elements": ["qa", "qb"], "operators": ["n", "n"], "form": "full", "given_as": {"coefficient_ghz": 0.004}}],
+        "truncation": {"levels": {"qa": 4, "c": 4, "qb": 4}, "max_excitations": 3}}
     r = roots(dev, "c", "qa", "qb", 0.0, 0.45, 31)
     print("self-test ZZ-zero coupler fluxes:", r)
     assert r, "the self-test device should have a ZZ zero in range"
@@ -146,13 +176,35 @@ def self_test():
             f.write(f"{i},{x:.13f}\n")
 
 
+def pair_reference(path, coupler, qa, qb, lo, hi, points):
+    import os
+    import scipy
+    with open(path) as f:
+        wrapped = json.load(f)
+    bias = wrapped["bias"]
+    worst = max(check_conversions(d["describe"]) for d in wrapped["describes"])
+    for d in wrapped["describes"]:  # the bias mapping of the file is the one LevelDesign applied
+        flux = next(e for e in d["describe"]["elements"] if e["id"] == coupler)["parameters"]["flux"]
+        assert abs(flux - (d["control_a"] - bias["offset"]) / bias["period"]) < 1e-12
+    dev = wrapped["describes"][0]["describe"]
+    found = roots(dev, coupler, qa, qb, lo, hi, points)
+    out = os.path.join(os.path.dirname(os.path.abspath(__file__)), "data", "zz_zero_pair.csv")
+    with open(out, "w") as f:
+        f.write(f"# zz_zero_pair.py data/pair_describe.json {coupler} {qa} {qb} {lo} {hi} {points}  SciPy {scipy.__version__}, NumPy {np.__version__}\n")
+        f.write(f"# model: describe --json of devices/pair.toml (truncation as there: levels {dev['truncation']['levels']}, max_excitations {dev['truncation']['max_excitations']}); |n| <= {N_CHARGE}\n")
+        f.write(f"# g-given couplers re-converted at each flux; checked against LevelDesign's coefficients at {len(wrapped['describes'])} biases (worst relative difference {worst:.1e})\n")
+        f.write(f"# ZZ = E11 - E10 - E01 + E00 (largest-overlap labels); roots of ZZ({coupler}.flux) on [{lo}, {hi}] Phi0 by brentq; control = flux*period + offset (A)\n")
+        f.write("root,flux_phi0,control_a\n")
+        for i, x in enumerate(found):
+            f.write(f"{i},{x:.13f},{x * bias['period'] + bias['offset']:.15e}\n")
+    for x in found:
+        print(f"{x:.12f} Phi0  {x * bias['period'] + bias['offset']:.12e} A")
+
+
 if __name__ == "__main__":
     if sys.argv[1:] == ["--self-test"]:
         self_test()
         sys.exit(0)
     path, coupler, qa, qb = sys.argv[1:5]
-    lo, hi, pts = (float(sys.argv[5]), float(sys.argv[6]), int(sys.argv[7])) if len(sys.argv) > 7 else (0.0, 0.5, 51)
-    with open(path) as f:
-        device = json.load(f)
-    for x in roots(device, coupler, qa, qb, lo, hi, pts):
-        print(f"{x:.12f}")
+    lo, hi, pts = (float(sys.argv[5]), float(sys.argv[6]), int(sys.argv[7])) if len(sys.argv) > 7 else (0.0, 0.375, 76)
+    pair_reference(path, coupler, qa, qb, lo, hi, pts)

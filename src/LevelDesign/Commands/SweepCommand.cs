@@ -1,159 +1,80 @@
 using System.CommandLine;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Sweeps;
 using LevelDesign.Output;
 
 namespace LevelDesign.Commands;
 
 /// <summary>
-/// leveldesign sweep FILE --vary BIAS=START:STOP:COUNT [...] [--sweep NAME] [--json|--csv] [--out PATH].
-/// Runs point by point (the parallel sweep engine will replace the loop); Ctrl-C stops and keeps finished points.
+/// leveldesign sweep FILE --vary BIAS=START:STOP:COUNT [--vary ...] [--link ...] [--sweep NAME] [--labels ...]
+/// [--levels K] [--purity P] [--json|--csv] [--out PATH]: the labelled spectrum and derived quantities at every
+/// point, computed in parallel; Ctrl-C keeps the finished points (exit 130).
 /// </summary>
 public static class SweepCommand
 {
+    public static Option<string[]> Vary(string description) => new("--vary") { Description = description, AllowMultipleArgumentsPerToken = false };
+
+    public static Option<string[]> Link() => new("--link")
+    {
+        Description = "move another bias or parameter with an axis: TARGET=SCALE*AXIS+SHIFT (base units; SHIFT in TARGET's unit), e.g. qb_flux=1.0*qa_flux+0.05; repeatable",
+        AllowMultipleArgumentsPerToken = false,
+    };
+
+    public static Option<string?> Labels() => new("--labels") { Description = "label states by 'character' (follow the bare character through crossings; default) or 'order' (k-th level stays k-th)" };
+
+    public static Option<string?> SweepName() => new("--sweep") { Description = "use a sweep defined in the file ([sweeps.NAME]); default: the first one when no --vary is given" };
+
     public static Command Create()
     {
         var file = CommonOptions.File();
-        var vary = new Option<string[]>("--vary")
-        {
-            Description = "an axis BIAS=START:STOP:COUNT (bias name or parameter path; values in the bias's unit); give two for a grid",
-            AllowMultipleArgumentsPerToken = false,
-        };
-        var sweep = new Option<string?>("--sweep") { Description = "use a sweep defined in the file ([sweeps.NAME])" };
+        var vary = Vary("an axis BIAS=START:STOP:COUNT (bias name or parameter path; values in the bias's unit); give two for a grid");
+        var link = Link();
+        var sweep = SweepName();
         var at = CommonOptions.At();
         var point = CommonOptions.Point();
         var levels = CommonOptions.Levels();
+        var labels = Labels();
+        var purity = new Option<double?>("--purity") { Description = "flag points where a tracked state's purity is below this (default 0.99)" };
         var json = CommonOptions.Json();
         var csv = CommonOptions.Csv();
         var output = new Option<string?>("--out") { Description = "write the result to this file instead of stdout" };
         var allowLarge = CommonOptions.AllowLarge();
-        var command = new Command("sweep", "the spectrum at every point of a bias sweep; progress on stderr, Ctrl-C keeps finished points")
-            { file, vary, sweep, at, point, levels, json, csv, output, allowLarge };
-        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(vary), parse.GetValue(sweep), parse.GetValue(at),
-            parse.GetValue(point), parse.GetValue(levels), parse.GetValue(json), parse.GetValue(csv), parse.GetValue(output), parse.GetValue(allowLarge)));
+        var command = new Command("sweep", "the labelled spectrum at every point of a bias sweep (parallel); progress on stderr, Ctrl-C keeps finished points")
+            { file, vary, link, sweep, at, point, levels, labels, purity, json, csv, output, allowLarge };
+        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(vary), parse.GetValue(link), parse.GetValue(sweep), parse.GetValue(at),
+            parse.GetValue(point), parse.GetValue(levels), parse.GetValue(labels), parse.GetValue(purity), parse.GetValue(json), parse.GetValue(csv),
+            parse.GetValue(output), parse.GetValue(allowLarge)));
         return command;
     }
 
-    public static int Run(string path, string[]? vary, string? sweepName, string[]? at, string? point, int? levels,
-        bool json, bool csv, string? output, bool allowLarge)
+    public static int Run(string path, string[]? vary, string[]? links, string? sweepName, string[]? at, string? point, int? levels,
+        string? labels, double? purity, bool json, bool csv, string? output, bool allowLarge) => CommandGuard.Run(path, () =>
     {
-        if (json && csv) { Console.Error.WriteLine("choose one of --json and --csv"); return ExitCodes.InvalidInput; }
-        var document = DeviceInput.Load(path, allowLarge);
-        if (document is null) return ExitCodes.InvalidInput;
-        if (DeviceInput.Resolve(document, point, at, out var applied) is null) return ExitCodes.InvalidInput;
-        var start = applied.ToDictionary(kv => kv.Key, kv => kv.Value!.GetValue<double>());
-        var axes = Axes(document, vary, sweepName);
-        if (axes is null) return ExitCodes.InvalidInput;
-
-        using var cancel = new CancellationTokenSource();
-        ConsoleCancelEventHandler onCancel = (_, e) => { e.Cancel = true; cancel.Cancel(); };
-        Console.CancelKeyPress += onCancel;
-        var points = new List<SweepFormatter.Point>();
+        CommandGuard.OneFormat(json, csv);
+        var mode = CommandGuard.LabelMode(labels);
+        if (purity is double p && !(p > 0 && p <= 1)) throw new UsageException($"--purity {p}: give a purity in (0, 1], e.g. 0.99");
+        var document = CommandGuard.Load(path, allowLarge);
+        var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 2);
         var solver = new DeviceSolver();
-        int total = axes.Aggregate(1, (n, a) => n * a.Count);
-        var progress = new ProgressBar(total);
-        try
-        {
-            foreach (var values in Grid(axes))
-            {
-                if (cancel.IsCancellationRequested) break;
-                var device = document.Resolve(axes, values, start);
-                var (spectrum, _) = SpectrumCommand.Compute(solver, device, levels);
-                points.Add(new SweepFormatter.Point(values, spectrum));
-                progress.Report(points.Count);
-            }
-        }
-        catch (Exception e) when (ComputationErrors.IsExpected(e))
-        {
-            progress.Finish();
-            Console.Error.WriteLine($"stopped at point {points.Count + 1} of {total}");
-            int code = ComputationErrors.Report(path, e);
-            Write(document, axes, points, levels, json, csv, output, completed: false);
-            return code;
-        }
-        finally
-        {
-            Console.CancelKeyPress -= onCancel;
-        }
-        bool completed = points.Count == total;
-        if (!completed) Console.Error.WriteLine($"\ncancelled: keeping the {points.Count} of {total} points computed");
-        Write(document, axes, points, levels, json, csv, output, completed);
-        return completed ? ExitCodes.Ok : ExitCodes.Cancelled;
-    }
+        var (planLevels, shown) = SweepExecution.Levels(setup, levels, solver);
+        var result = SweepExecution.Run(setup, mode, planLevels, solver);
+        var table = SweepTable.From(result, shown, purity ?? 0.99);
+        int total = SweepGrid.PointCount(result.Plan);
+        if (!result.Completed) Console.Error.WriteLine($"cancelled: keeping the {result.Points.Count} of {total} points computed");
+        Write(json ? SweepReport.Json(document, result, table) : SweepReport.Csv(document, result, table), output, result.Points.Count);
+        int flagged = table.Rows.Count(r => r.LowPurity), ambiguous = table.Rows.Count(r => r.Ambiguous);
+        if (flagged > 0 || ambiguous > 0)
+            Console.Error.WriteLine($"{flagged} point(s) with a tracked state below purity {table.PurityThreshold}, {ambiguous} with an ambiguous label (columns low_purity, ambiguous)");
+        return result.Completed ? ExitCodes.Ok : ExitCodes.Cancelled;
+    });
 
-    private static void Write(DeviceDocument document, IReadOnlyList<SweepAxis> axes, List<SweepFormatter.Point> points, int? levels,
-        bool json, bool csv, string? output, bool completed)
+    /// <summary>Writes to stdout, or atomically to a file (keeping a previous file as .bak).</summary>
+    public static void Write(string text, string? output, int points)
     {
-        string text = json
-            ? JsonValues.Write(SweepFormatter.Json(document.Device.Name, axes, points, levels, completed)) + Environment.NewLine
-            : SweepFormatter.Csv(axes, points, levels);
-        if (!json && !csv && output is null)
-            Console.Error.WriteLine("(no --json given: writing CSV)");
-        if (output is null) Console.Write(text);
-        else
-        {
-            AtomicFile.Write(output, text);
-            Console.Error.WriteLine($"wrote {points.Count} points to {output}");
-        }
-    }
-
-    private static IReadOnlyList<SweepAxis>? Axes(DeviceDocument document, string[]? vary, string? sweepName)
-    {
-        if (vary is { Length: > 0 })
-        {
-            if (vary.Length > 2) { Console.Error.WriteLine("at most two --vary axes (a grid)"); return null; }
-            var axes = new List<SweepAxis>();
-            foreach (var v in vary)
-            {
-                if (ParseAxis(document, v, out var axis, out string error)) axes.Add(axis!);
-                else { Console.Error.WriteLine($"--vary {v}: {error}"); return null; }
-            }
-            return axes;
-        }
-        var sweeps = document.Sweeps;
-        var chosen = sweepName is null ? sweeps.FirstOrDefault() : sweeps.FirstOrDefault(s => s.Name == sweepName);
-        if (chosen is null)
-        {
-            Console.Error.WriteLine(sweepName is null
-                ? "give --vary BIAS=START:STOP:COUNT (this file defines no sweep)"
-                : $"no sweep '{sweepName}'{EditDistance.Suggestion(sweepName, sweeps.Select(s => s.Name))} (sweeps: {string.Join(", ", sweeps.Select(s => s.Name))})");
-            return null;
-        }
-        return chosen.Axes;
-    }
-
-    public static bool ParseAxis(DeviceDocument document, string text, out SweepAxis? axis, out string error)
-    {
-        axis = null;
-        int eq = text.IndexOf('=');
-        var parts = eq > 0 ? text[(eq + 1)..].Split(':') : [];
-        if (eq <= 0 || parts.Length != 3)
-        {
-            error = "write BIAS=START:STOP:COUNT, e.g. qc_flux=0:0.5:101";
-            return false;
-        }
-        string name = text[..eq].Trim();
-        if (!DeviceInput.TryParseValue(document, name, parts[0], out double from, out error)) return false;
-        if (!DeviceInput.TryParseValue(document, name, parts[1], out double to, out error)) return false;
-        if (!int.TryParse(parts[2], out int count) || count < 1)
-        {
-            error = $"COUNT '{parts[2]}' must be a whole number ≥ 1";
-            return false;
-        }
-        axis = new SweepAxis(name, from, to, count, []);
-        return true;
-    }
-
-    /// <summary>Axis values in row-major order (the last axis varies fastest).</summary>
-    public static IEnumerable<double[]> Grid(IReadOnlyList<SweepAxis> axes)
-    {
-        var index = new int[axes.Count];
-        int total = axes.Aggregate(1, (n, a) => n * a.Count);
-        for (int p = 0; p < total; p++)
-        {
-            int rest = p;
-            for (int a = axes.Count - 1; a >= 0; a--) { index[a] = rest % axes[a].Count; rest /= axes[a].Count; }
-            yield return axes.Select((a, i) => a.Count == 1 ? a.Start : a.Start + (a.Stop - a.Start) * index[i] / (a.Count - 1)).ToArray();
-        }
+        if (output is null) { Console.Write(text); return; }
+        try { AtomicFile.Write(output, text); }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException) { throw new UsageException($"--out {output}: cannot write: {e.Message}"); }
+        Console.Error.WriteLine($"wrote {points} points to {output}");
     }
 }

@@ -1,0 +1,89 @@
+using System.CommandLine;
+using LevelDesign.Core.Sweeps;
+using LevelDesign.Output;
+using LevelDesign.Plots;
+
+namespace LevelDesign.Commands;
+
+/// <summary>
+/// leveldesign plot FILE --vary BIAS=START:STOP:COUNT --out PATH.svg|PATH.png [--manifold 1|2|all] [--width W]
+/// [--height H]: the labelled spectrum along a 1-D sweep with the crossings marked.
+/// </summary>
+public static class PlotCommand
+{
+    public static Command Create()
+    {
+        var file = CommonOptions.File();
+        var vary = SweepCommand.Vary("the axis BIAS=START:STOP:COUNT (one axis)");
+        var link = SweepCommand.Link();
+        var sweep = SweepCommand.SweepName();
+        var output = new Option<string?>("--out") { Description = "the picture to write: PATH.svg or PATH.png" };
+        var manifold = new Option<string?>("--manifold") { Description = "which branches to draw: 1 (single excitations), 2 (two excitations) or all (default)" };
+        var width = new Option<int?>("--width") { Description = "picture width in pixels (default 1200)" };
+        var height = new Option<int?>("--height") { Description = "picture height in pixels (default 800)" };
+        var at = CommonOptions.At();
+        var point = CommonOptions.Point();
+        var levels = CommonOptions.Levels();
+        var labels = SweepCommand.Labels();
+        var allowLarge = CommonOptions.AllowLarge();
+        var command = new Command("plot", "picture (SVG or PNG) of the labelled spectrum along a sweep, crossings marked with their gaps")
+            { file, vary, link, sweep, output, manifold, width, height, at, point, levels, labels, allowLarge };
+        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(vary), parse.GetValue(link), parse.GetValue(sweep), parse.GetValue(output),
+            parse.GetValue(manifold), parse.GetValue(width), parse.GetValue(height), parse.GetValue(at), parse.GetValue(point), parse.GetValue(levels),
+            parse.GetValue(labels), parse.GetValue(allowLarge)));
+        return command;
+    }
+
+    public static int Run(string path, string[]? vary, string[]? links, string? sweepName, string? output, string? manifoldText, int? width, int? height,
+        string[]? at, string? point, int? levels, string? labels, bool allowLarge) => CommandGuard.Run(path, () =>
+    {
+        if (output is null) throw new UsageException("give --out PATH.svg or --out PATH.png");
+        string extension = Path.GetExtension(output).ToLowerInvariant();
+        if (extension is not (".svg" or ".png")) throw new UsageException($"--out {output}: the name must end in .svg or .png");
+        int w = width ?? 1200, h = height ?? 800;
+        if (w is < 200 or > 10000 || h is < 150 or > 10000) throw new UsageException("--width must be 200–10000 and --height 150–10000 pixels");
+        int? manifold = manifoldText switch
+        {
+            null or "all" => null,
+            "1" => 1,
+            "2" => 2,
+            _ => throw new UsageException($"--manifold {manifoldText}: choose 1, 2 or all"),
+        };
+        var mode = CommandGuard.LabelMode(labels);
+        var document = CommandGuard.Load(path, allowLarge);
+        var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 1);
+        if (setup.Axes[0].Count < 3) throw new UsageException($"--vary: a plot needs at least 3 points (got {setup.Axes[0].Count})");
+        var (result, crossings, judged) = CrossingsCommand.Find(setup, mode, levels, 0, 0.5, []);
+        if (result is null) return ExitCodes.Cancelled;
+        // all judged labels when one manifold is picked (its branches may lie above the lowest 12), else the lowest 12
+        int shown = levels ?? (manifold is null ? Math.Min(judged, 12) : judged);
+        var plot = SpectrumPlot.Build(result, PlotManifold.Crossings(crossings, manifold), shown,
+            title: $"{document.Device.Name}: spectrum along {setup.Axes[0].Path} ({AxisUnitText.Of(document, setup.Axes[0].Path)}), labels by {(mode == LabelMode.ByCharacter ? "character" : "order")}"
+                   + (manifold is int m ? $", {m}-excitation manifold" : ""));
+        PlotManifold.Apply(plot, manifold);
+        // the caption from the axis name alone cannot know a bias's control unit; say it, and what the bias moves
+        plot.XLabel(XCaption(document, setup.Axes[0]));
+        try
+        {
+            if (extension == ".svg") SpectrumPlot.SaveSvg(plot, output, w, h);
+            else SpectrumPlot.SavePng(plot, output, w, h);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw new UsageException($"--out {output}: cannot write: {e.Message}");
+        }
+        Console.Error.WriteLine($"wrote {output} ({result.Points.Count} points, {crossings.Count} crossing(s))");
+        return ExitCodes.Ok;
+    });
+
+    private static string XCaption(Core.DeviceFiles.DeviceDocument document, Core.DeviceFiles.SweepAxis axis)
+    {
+        string unit = AxisUnitText.Of(document, axis.Path);
+        string caption = unit.Length > 0 ? $"{axis.Path} ({unit})" : axis.Path;
+        if (document.Bias(axis.Path) is Core.DeviceFiles.BiasDefinition bias && (bias.Period != 1 || bias.Offset != 0))
+            caption += string.Create(System.Globalization.CultureInfo.InvariantCulture, $";  {bias.Target} = (value − {bias.Offset:G6}) / {bias.Period:G6}");
+        else if (document.Bias(axis.Path) is Core.DeviceFiles.BiasDefinition plain)
+            caption += $" = {plain.Target}";
+        return caption;
+    }
+}

@@ -1,0 +1,58 @@
+using System.CommandLine;
+using LevelDesign.Core.Analysis;
+using LevelDesign.Core.Composite;
+using LevelDesign.Core.Sweeps;
+using LevelDesign.Output;
+
+namespace LevelDesign.Commands;
+
+/// <summary>
+/// leveldesign solve FILE --vary BIAS=START:STOP[:SCAN] --target QUANTITY=VALUE [--json]: every bias in the range
+/// where the quantity equals the target (scan for sign changes, then Brent refinement).
+/// </summary>
+public static class SolveCommand
+{
+    public const int DefaultScan = 41;
+
+    public static Command Create()
+    {
+        var file = CommonOptions.File();
+        var vary = SweepCommand.Vary($"the range BIAS=START:STOP[:SCAN] to search (SCAN scan points, default {DefaultScan})");
+        var target = new Option<string?>("--target") { Description = "QUANTITY=VALUE, e.g. qa.f01=5.25GHz or zz:qa:qb=0 (values in Hz units; a bare number is GHz)" };
+        var link = SweepCommand.Link();
+        var at = CommonOptions.At();
+        var point = CommonOptions.Point();
+        var levels = CommonOptions.Levels();
+        var json = CommonOptions.Json();
+        var allowLarge = CommonOptions.AllowLarge();
+        var command = new Command("solve", "every bias in a range where a quantity meets a target (e.g. the coupler flux of zero ZZ)")
+            { file, vary, target, link, at, point, levels, json, allowLarge };
+        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(vary), parse.GetValue(target), parse.GetValue(link), parse.GetValue(at),
+            parse.GetValue(point), parse.GetValue(levels), parse.GetValue(json), parse.GetValue(allowLarge)));
+        return command;
+    }
+
+    public static int Run(string path, string[]? vary, string? target, string[]? links, string[]? at, string? point, int? levels, bool json,
+        bool allowLarge) => CommandGuard.Run(path, () =>
+    {
+        if (vary is not { Length: > 0 }) throw new UsageException("give the range: --vary BIAS=START:STOP[:SCAN]");
+        if (target is null) throw new UsageException("give --target QUANTITY=VALUE, e.g. zz:qa:qb=0");
+        var document = CommandGuard.Load(path, allowLarge);
+        var setup = SweepSetup.Create(document, point, at, vary, links, null, maxAxes: 1, defaultCount: DefaultScan);
+        var axis = setup.Axes[0];
+        if (axis.Count < 2) throw new UsageException($"--vary: a root search needs at least 2 scan points (got {axis.Count})");
+        var solver = new DeviceSolver();
+        var (planLevels, _) = SweepExecution.Levels(setup, levels, solver);
+        var available = DerivedQuantities.From(solver.Solve(setup.Resolve([axis.Start]), planLevels)).Named().Keys.ToArray();
+        var (quantity, value) = TargetArguments.Parse(target, available);
+        var options = new SweepOptions { Solver = solver };
+        var roots = SweepExecution.WithCancel(token =>
+            TargetSolver.FindAllAsync(setup.Resolve, axis, quantity, value, options, planLevels, ToleranceFor(axis), token));
+        Console.Write(json ? TargetReport.Json(document, axis, quantity, value, roots) : TargetReport.Table(document, axis, quantity, value, roots));
+        if (!roots.Any(r => r.Refined)) Console.Error.WriteLine($"no root of {quantity} = target between {axis.Start:G6} and {axis.Stop:G6}");
+        return ExitCodes.Ok;
+    });
+
+    /// <summary>Brent's bias tolerance: 1e-12 of the range, so control units of any size (A, Φ0, GHz) get the same relative precision.</summary>
+    public static double ToleranceFor(Core.DeviceFiles.SweepAxis axis) => Math.Max(1e-12 * Math.Abs(axis.Stop - axis.Start), 1e-300);
+}

@@ -1,0 +1,24 @@
+using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Units;
+
+namespace LevelDesign.Commands;
+
+/// <summary>
+/// Reads --target QUANTITY=VALUE: QUANTITY is a derived quantity name ("qa.f01", "qa.anharmonicity",
+/// "chi2:qa:ra", "zz:qa:qb", "purcell:qa:ra"; every one is a frequency), VALUE a frequency in the file's unit
+/// syntax ("5.25 GHz", "5250MHz", "-120kHz"; a bare number is GHz).
+/// </summary>
+public static class TargetArguments
+{
+    public static (string Quantity, double ValueGHz) Parse(string text, IReadOnlyCollection<string> available, string option = "--target")
+    {
+        int eq = text.IndexOf('=');
+        if (eq <= 0) throw new UsageException($"{option} {text}: write QUANTITY=VALUE, e.g. qa.f01=5.25GHz or zz:qa:qb=0");
+        string quantity = text[..eq].Trim();
+        if (!available.Contains(quantity))
+            throw new UsageException($"{option} {text}: no quantity '{quantity}'{EditDistance.Suggestion(quantity, available)} (quantities of this device: {string.Join(", ", available.OrderBy(x => x, StringComparer.Ordinal))})");
+        if (!QuantityParser.TryParse(text[(eq + 1)..], UnitKind.Frequency, out double value, out string error))
+            throw new UsageException($"{option} {text}: {error}");
+        return (quantity, value);
+    }
+}

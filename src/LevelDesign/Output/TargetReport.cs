@@ -1,0 +1,64 @@
+using System.Globalization;
+using System.Text;
+using System.Text.Json.Nodes;
+using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Sweeps;
+using LevelDesign.Core.Units;
+
+namespace LevelDesign.Output;
+
+/// <summary>Every bias where a quantity meets its target, with the sign changes that are jumps rather than roots marked.</summary>
+public static class TargetReport
+{
+    private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
+
+    public const string JumpNote = "the quantity changes sign here by a jump (e.g. a label moving to another state), not through a root";
+
+    public static string Table(DeviceDocument document, SweepAxis axis, string quantity, double target, IReadOnlyList<TargetRoot> roots)
+    {
+        string unit = AxisUnitText.Of(document, axis.Path);
+        var (path, _) = AxisUnitText.Parameter(document, axis.Path, 0);
+        var b = new StringBuilder();
+        b.AppendLine($"device {document.Device.Name}: {quantity} = {QuantityFormatter.Format(target, UnitKind.Frequency)} along {axis.Path} from {axis.Start.ToString("G6", Inv)} to {axis.Stop.ToString("G6", Inv)} {unit} ({axis.Count} scan points)");
+        int real = roots.Count(r => r.Refined);
+        b.AppendLine(real == 0 ? "no root in this range" : $"{real} root(s)");
+        foreach (var r in roots)
+        {
+            var (_, parameter) = AxisUnitText.Parameter(document, axis.Path, r.Bias);
+            b.AppendLine(r.Refined
+                ? string.Create(Inv, $"  {axis.Path} = {r.Bias:G10} {unit}   ({path} = {parameter:G10})   {quantity} = {Hz(r.Value)}, residual {Hz(r.Residual)}")
+                : string.Create(Inv, $"  {axis.Path} ≈ {r.Bias:G10} {unit}   ({path} = {parameter:G10})   not a root: {JumpNote}"));
+        }
+        return b.ToString();
+    }
+
+    public static string Json(DeviceDocument document, SweepAxis axis, string quantity, double target, IReadOnlyList<TargetRoot> roots)
+    {
+        var list = new JsonArray();
+        foreach (var r in roots)
+        {
+            var (path, parameter) = AxisUnitText.Parameter(document, axis.Path, r.Bias);
+            var o = new JsonObject
+            {
+                ["bias"] = JsonValues.Number(r.Bias),
+                ["parameter"] = new JsonObject { [path] = JsonValues.Number(parameter) },
+                ["value_ghz"] = JsonValues.Number(r.Value),
+                ["residual_ghz"] = JsonValues.Number(r.Residual),
+                ["root"] = r.Refined,
+            };
+            if (!r.Refined) o["note"] = JumpNote;
+            list.Add(o);
+        }
+        return JsonValues.Write(new JsonObject
+        {
+            ["device"] = document.Device.Name,
+            ["quantity"] = quantity,
+            ["target_ghz"] = JsonValues.Number(target),
+            ["axis"] = AxisUnitText.Describe(document, axis),
+            ["roots"] = list,
+            ["conventions"] = SpectrumFormatter.Conventions(),
+        }) + Environment.NewLine;
+    }
+
+    private static string Hz(double ghz) => double.IsFinite(ghz) ? QuantityFormatter.Format(ghz, UnitKind.Frequency) : "—";
+}
