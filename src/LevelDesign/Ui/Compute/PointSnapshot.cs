@@ -11,8 +11,6 @@ public sealed record PointSnapshot(
     DateTime ComputedAt,
     TimeSpan Elapsed)
 {
-    /// <summary>"converged", "N flagged", or "not checked".</summary>
-    public string ConvergenceText => Convergence is null
-        ? "not checked"
-        : Convergence.Count(c => c.Flagged) is int n and > 0 ? $"✗ {n} unconverged" : "✓ converged";
+    /// <summary>Convergence of the key values only (see <see cref="ConvergenceSummary"/>), or "not checked".</summary>
+    public string ConvergenceText => ConvergenceSummary.StatusText(Convergence, Spectrum.Device);
 }

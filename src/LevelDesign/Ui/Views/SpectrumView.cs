@@ -18,7 +18,7 @@ public sealed class SpectrumView : View
     /// <summary>Only the narrowest crossings are marked, so the marks stay readable; all are listed on the crossings page.</summary>
     public const int MarkedCrossings = 8;
     private SpectrumSeries? _series;
-    private IReadOnlyList<NearApproach> _crossings = [];
+    private IReadOnlyList<CrossingMark> _crossings = [];
     private double? _low, _high;
 
     public SpectrumView()
@@ -56,7 +56,7 @@ public sealed class SpectrumView : View
 
     public event Action<int>? CursorMoved;
 
-    public void Show(SpectrumSeries? series, IReadOnlyList<NearApproach> crossings)
+    public void Show(SpectrumSeries? series, IReadOnlyList<CrossingMark> crossings)
     {
         _series = series;
         _crossings = crossings;
@@ -152,9 +152,9 @@ public sealed class SpectrumView : View
 
         int cursorColumn = Math.Clamp(DotX(series.Axis[CursorIndex]) / 2, 0, plotColumns - 1);
         var marks = new HashSet<(int, int)>();
-        foreach (var c in _crossings.Take(MarkedCrossings))
+        foreach (var c in _crossings.OrderBy(c => c.Crossing.GapGHz).Take(MarkedCrossings))
         {
-            int cx = DotX(c.AxisValue) / 2, cy = DotY(c.FrequencyGHz) / 4;
+            int cx = DotX(c.Crossing.Bias) / 2, cy = DotY(c.FrequencyGHz) / 4;
             if (cx >= 0 && cx < plotColumns && cy >= 0 && cy < plotRows) marks.Add((cx, cy));
         }
 
