@@ -20,10 +20,10 @@ public static class FieldUnits
     public const int DisplayDigits = 6;
 
     /// <summary>A value for reading: rounded to <see cref="DisplayDigits"/> significant digits.</summary>
-    public static string Display(double value, UnitKind kind)
+    public static string Display(double value, UnitKind kind, int digits = DisplayDigits)
     {
         if (!double.IsFinite(value) || value == 0) return Format(value, kind);
-        double scale = Math.Pow(10, DisplayDigits - 1 - (int)Math.Floor(Math.Log10(Math.Abs(value))));
+        double scale = Math.Pow(10, digits - 1 - (int)Math.Floor(Math.Log10(Math.Abs(value))));
         return Format(Math.Round(value * scale) / scale, kind);
     }
 

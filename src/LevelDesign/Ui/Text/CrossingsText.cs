@@ -20,16 +20,16 @@ public static class CrossingsText
         bool ranked = marks.Any(m => m.Crossing.DistanceToOperatingPoint is not null);
         var lines = new List<TextLine>
         {
-            new(ranked ? "nearest to the file's operating points first; Enter puts the cursor there" : "in bias order (the file names no operating point on this axis); Enter goes there", Heading: true),
-            new($"     {"crossing",-22} {"gap MHz",9}  {axisName} at{(ranked ? "   (from point)" : "")}"),
+            new(ranked ? "nearest to the file's operating points first" : "in bias order (no operating point on this axis)", Heading: true),
+            new($"   {"crossing",-18}{"gap MHz",8}  {axisName}{(ranked ? "  (from point)" : "")}"),
         };
         for (int i = 0; i < marks.Count; i++)
         {
             var c = marks[i].Crossing;
-            string labels = $"{marks[i].LabelA} ↔ {marks[i].LabelB}";
-            string distance = c.DistanceToOperatingPoint is double d ? $"   ({formatBias(d)})" : "";
-            string unrefined = c.Refined ? "" : "  edge of bracket";
-            lines.Add(new TextLine($"{i + 1,3}. {labels,-22} {Numbers.MHz(c.GapGHz, 3),9}  {formatBias(c.Bias)}{distance}{unrefined}"));
+            string labels = $"{marks[i].LabelA}↔{marks[i].LabelB}";
+            string distance = c.DistanceToOperatingPoint is double d ? $"  ({formatBias(d)})" : "";
+            string unrefined = c.Refined ? "" : " edge";
+            lines.Add(new TextLine($"{i + 1,2} {labels,-18}{Numbers.MHz(c.GapGHz, 1),8}  {formatBias(c.Bias)}{unrefined}{distance}"));
         }
         return lines;
     }

@@ -45,9 +45,11 @@ public static class ShiftsText
     private static IEnumerable<TextLine> Convergence(IReadOnlyList<ConvergenceEntry> entries, Device device)
     {
         yield return new TextLine("");
-        yield return new TextLine($"Truncation (at the file's biases): change when every cutoff is raised; ✗ above {TruncationConvergence.DefaultToleranceGHz * 1e6:0.#} kHz", Heading: true);
+        yield return new TextLine("Truncation check at the file's biases", Heading: true);
+        yield return new TextLine($"Δ = change when every cutoff is raised; ✗ when |Δ| > {TruncationConvergence.DefaultToleranceGHz * 1e6:0.#} kHz");
+        yield return new TextLine($"    {"key value",-17}{"MHz",11}{"Δ kHz",10}");
         foreach (var e in ConvergenceSummary.Key(entries, device))
-            yield return new TextLine($"  {(e.Flagged ? "✗" : "✓")} {e.Quantity,-22} {Numbers.MHz(e.Value, 4),12} MHz  change {Kilohertz(e.Change),10} kHz", Warning: e.Flagged);
+            yield return new TextLine($"  {(e.Flagged ? "✗" : "✓")} {e.Quantity,-17}{Numbers.MHz(e.Value, 4),11}{Kilohertz(e.Change),10}", Warning: e.Flagged);
         var others = entries.Where(e => e.Flagged && !ConvergenceSummary.IsKey(e.Quantity, device)).ToList();
         if (others.Count > 0)
             yield return new TextLine("  not counted (margin levels): " + string.Join(", ", others.Select(e => $"{e.Quantity} {Kilohertz(e.Change)} kHz")));

@@ -112,12 +112,7 @@ public sealed partial class MainWindow
                 if (result.Completed && request.Axes.Count == 1)
                 {
                     // Crossings are refined by extra solves between sweep points, so they follow the sweep.
-                    var crossingOptions = new CrossingOptions
-                    {
-                        OperatingPoints = OperatingPointsOn(document, request.Axes[0].Path),
-                        BiasTolerance = 1e-6 * Math.Max(Math.Abs(request.Axes[0].Stop - request.Axes[0].Start), 1e-12),
-                    };
-                    var crossings = CrossingFinder.Find(result, x => document.Resolve(request.Axes, [x]), crossingOptions, options.Solver, token);
+                    var crossings = CrossingFinder.Find(result, x => document.Resolve(request.Axes, [x]), CrossingOptionsFor(document, result), options.Solver, token);
                     _scheduler.Post(() => ApplyCrossings(generation, result, crossings));
                 }
             }
@@ -133,6 +128,37 @@ public sealed partial class MainWindow
                 });
             }
         }, CancellationToken.None);
+    }
+
+    /// <summary>Crossings are located to this fraction of the sweep span (each refinement step is a full solve; a sweep step is ~1/60).</summary>
+    public const double CrossingToleranceOfSpan = 1e-3;
+
+    /// <summary>At most this many of the lowest states are paired in the crossing search (pairs grow as its square).</summary>
+    public const int MaxCrossingLevels = 12;
+
+    /// <summary>How the screen searches a finished one-axis sweep for crossings.</summary>
+    public static CrossingOptions CrossingOptionsFor(DeviceDocument document, SweepResult sweep)
+    {
+        var axis = sweep.Plan.Axes[0];
+        return new CrossingOptions
+        {
+            OperatingPoints = OperatingPointsOn(document, axis.Path),
+            Levels = CrossingLevels(sweep),
+            BiasTolerance = CrossingToleranceOfSpan * Math.Max(Math.Abs(axis.Stop - axis.Start), 1e-12),
+        };
+    }
+
+    /// <summary>
+    /// The lowest states at the first point up to the last one with at most two excitations (the states the
+    /// spectrum shows by default), capped at <see cref="MaxCrossingLevels"/>.
+    /// </summary>
+    private static int CrossingLevels(SweepResult sweep)
+    {
+        var first = sweep.Points[0].Spectrum;
+        int last = 0;
+        for (int k = 0; k < first.Count; k++)
+            if (first.LabelLevels(k).Sum() <= 2) last = k;
+        return Math.Clamp(last + 1, 2, MaxCrossingLevels);
     }
 
     /// <summary>
@@ -188,6 +214,8 @@ public sealed partial class MainWindow
     {
         if (_sweep is null || _sweep.Points.Count == 0) { _series = null; _crossings = []; _spectrum.Show(null, []); return; }
         _series = SpectrumSeries.From(_sweep, _manifold);
+        string axisPath = _series.AxisName;
+        _spectrum.FormatBias = v => AxisText(axisPath, v);
         _spectrum.ManifoldText = _manifold.Describe();
         _spectrum.Show(_series, _crossings);
         RefreshPage();
@@ -213,11 +241,15 @@ public sealed partial class MainWindow
         if (_cursorSnapshot is not null && _sweep is not null && _spectrum.CursorIndex < _sweep.Points.Count)
         {
             var p = _sweep.Points[_spectrum.CursorIndex];
-            string axes = string.Join(", ", _sweep.Plan.Axes.Select((a, i) => $"{a.Path} = {Numbers.Plain(p.AxisValues[i])}"));
+            string axes = string.Join(", ", _sweep.Plan.Axes.Select((a, i) => $"{a.Path} = {AxisText(a.Path, p.AxisValues[i])}"));
             return $"{axes} (point {p.Index + 1}/{_sweep.Points.Count}{(_sweepStale ? ", stale" : "")})";
         }
         return "the biases in the file";
     }
+
+    /// <summary>A bias in its control unit; plain axes as before (4 decimals), so "0.1000" reads as a flux.</summary>
+    private string AxisText(string path, double value) =>
+        _session.Document?.Bias(path) is { ControlKind: not LevelDesign.Core.Units.UnitKind.Dimensionless } ? BiasText.Format(_session.Document, path, value) : Numbers.Plain(value);
 
     private PointSnapshot? Shown => _cursorSnapshot ?? _snapshot;
 
@@ -253,7 +285,7 @@ public sealed partial class MainWindow
                 break;
             case Page.Crossings:
                 _crossingList.SetLines(CrossingsText.Build(_crossings, _sweep, _series?.AxisName, _crossingsPending,
-                    v => BiasText.Format(_session.Document, _series?.AxisName ?? "", v)));
+                    v => BiasText.Format(_session.Document, _series?.AxisName ?? "", v, digits: 4)));
                 break;
         }
         SetNeedsDraw();

@@ -250,7 +250,7 @@ public sealed partial class MainWindow : Window
             return true;
         }
         if (_pageShown == Page.Help) { ShowPage(_pageBeforeHelp); return true; }
-        return false;
+        return true;   // Esc never quits (the framework's default quit key is Esc); Ctrl+Q does, through the guard
     }
 
     // ---- board and form -------------------------------------------------------------------------

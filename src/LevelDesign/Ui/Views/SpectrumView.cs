@@ -51,6 +51,9 @@ public sealed class SpectrumView : View
 
     public int CursorIndex { get; private set; }
     public string ManifoldText { get; set; } = "";
+
+    /// <summary>Writes a bias value for the header and axis ends (e.g. "0.75 mA" for a coil current); plain numbers by default.</summary>
+    public Func<double, string> FormatBias { get; set; } = v => Numbers.Plain(v);
     public string Status { get; set; } = "no sweep yet: F5 starts one";
     public SpectrumSeries? Series => _series;
 
@@ -117,7 +120,7 @@ public sealed class SpectrumView : View
         var series = _series;
         string header = series is null || series.Axis.Length == 0
             ? $"Spectrum — {Status}"
-            : $"cursor {series.AxisName} = {Numbers.Plain(series.Axis[CursorIndex])} │ {ManifoldText} │ {Status}";
+            : $"cursor {series.AxisName} = {FormatBias(series.Axis[CursorIndex])} │ {ManifoldText} │ {Status}";
         Move(0, 0);
         AddStr(RowList.Pad(header, width));
         int labelWidth = width >= 60 ? 12 : width >= 45 ? 8 : 0;
@@ -194,7 +197,7 @@ public sealed class SpectrumView : View
 
         Move(0, height - 2);
         AddStr(new string(' ', AxisWidth - 1) + "└" + new string('─', plotColumns));
-        string left = Numbers.Plain(xMin, 3), right = Numbers.Plain(xMax, 3);
+        string left = FormatBias(xMin), right = FormatBias(xMax);
         string axisLine = new string(' ', AxisWidth) + left;
         int rightAt = AxisWidth + plotColumns - right.Length;
         axisLine = axisLine.PadRight(Math.Max(axisLine.Length, rightAt)) [..Math.Max(axisLine.Length, rightAt)] + right;
