@@ -415,4 +415,26 @@ public class MainWindowTests
         ui.Press(Key.Z.WithCtrl);
         Assert.True(ui.Session.Document!.Device.IndexOf("qx") >= 0);
     }
+
+    [Fact]
+    public void Saving_does_not_rerun_the_sweep_and_Esc_with_nothing_to_cancel_does_not_quit()
+    {
+        using var ui = new UiHarness();
+        ui.WaitIdle();
+        ui.Press(Key.F5, Key.Enter);
+        ui.WaitFor(() => ui.Window.LastSweep is { Completed: true }, "the sweep");
+        ui.Session.SetValue("elements.r.frequency", "7 GHz");
+        ui.Scheduler.Advance(TimeSpan.FromSeconds(1));
+        ui.WaitFor(() => ui.Window.LastSweep!.Points[0].Spectrum.Device.GetParameter("r.frequency") == 7.0 && !ui.Window.IsComputing, "the re-run");
+        var sweep = ui.Window.LastSweep;
+        ui.Press(Key.S.WithCtrl);
+        ui.Scheduler.Advance(TimeSpan.FromSeconds(1));
+        Assert.False(ui.Window.IsComputing);
+        Assert.Same(sweep, ui.Window.LastSweep);
+        // with unsaved changes a quit would open the guard's question; Esc must not start one
+        ui.Session.SetValue("elements.r.frequency", "7.1 GHz");
+        ui.Press(Key.Esc);
+        Assert.False(ui.Window.Prompt.IsOpen);
+        Assert.False(ui.Window.QuitAllowed);
+    }
 }

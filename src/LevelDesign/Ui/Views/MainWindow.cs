@@ -108,6 +108,7 @@ public sealed partial class MainWindow : Window
 
     private readonly RowList _crossingList;
     private string? _formItemId;
+    private Core.DeviceFiles.DeviceDocument? _computedDocument;
     private BoardNodeKind _formItemKind;
 
     /// <summary>The question bar, for tests and for the app to answer start-up offers.</summary>
@@ -277,8 +278,13 @@ public sealed partial class MainWindow : Window
             Heading: n.Kind is BoardNodeKind.Group or BoardNodeKind.Device)).ToList(), select);
         ShowFields();
         if (_pageShown == Page.Errors) ShowPage(Page.States);
-        StartPointCompute(document.Device);
-        if (_lastSweep is not null) ScheduleResweep();
+        // Saving changes only the unsaved mark: the same document needs no new computation.
+        if (!ReferenceEquals(document, _computedDocument))
+        {
+            _computedDocument = document;
+            StartPointCompute(document.Device);
+            if (_lastSweep is not null) ScheduleResweep();
+        }
         UpdateStatus();
     }
 
