@@ -11,6 +11,11 @@ public sealed record PointSnapshot(
     DateTime ComputedAt,
     TimeSpan Elapsed)
 {
+    /// <summary>Why the truncation check could not run (e.g. a level list cannot grow), or null.</summary>
+    public string? ConvergenceProblem { get; init; }
+
     /// <summary>Convergence of the key values only (see <see cref="ConvergenceSummary"/>), or "not checked".</summary>
-    public string ConvergenceText => ConvergenceSummary.StatusText(Convergence, Spectrum.Device);
+    public string ConvergenceText => ConvergenceProblem is not null
+        ? "not checked (F3 shifts says why)"
+        : ConvergenceSummary.StatusText(Convergence, Spectrum.Device);
 }

@@ -8,7 +8,8 @@ namespace LevelDesign.Ui.Text;
 /// <summary>The 2χ matrix (qubit rows × resonator columns), the ZZ matrix and per-element transitions, in MHz.</summary>
 public static class ShiftsText
 {
-    public static IReadOnlyList<TextLine> Build(DerivedQuantities q, string where, IReadOnlyList<ConvergenceEntry>? convergence = null, Device? device = null)
+    public static IReadOnlyList<TextLine> Build(DerivedQuantities q, string where, IReadOnlyList<ConvergenceEntry>? convergence = null, Device? device = null,
+        string? convergenceProblem = null)
     {
         var lines = new List<TextLine> { new($"At {where}; all in MHz", Heading: true) };
 
@@ -38,6 +39,12 @@ public static class ShiftsText
                 lines.Add(new TextLine($"  {p.Qubit} via {p.Resonator}: γ = {Numbers.MHz(p.RateGHz, 6)} MHz"));
         }
         if (convergence is not null && device is not null) lines.AddRange(Convergence(convergence, device));
+        if (convergenceProblem is not null)
+        {
+            lines.Add(new TextLine(""));
+            lines.Add(new TextLine("Truncation check at the file's biases", Heading: true));
+            lines.Add(new TextLine("  not run: " + convergenceProblem, Warning: true));
+        }
         return lines;
     }
 

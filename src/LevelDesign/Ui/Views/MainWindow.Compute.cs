@@ -274,14 +274,14 @@ public sealed partial class MainWindow
                 _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")] : StatesTableText.Build(shown.Spectrum, Where()));
                 break;
             case Page.Shifts:
-                _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")] : ShiftsText.Build(shown.Quantities, Where(), _snapshot?.Convergence, _snapshot?.Spectrum.Device));
+                _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")] : ShiftsText.Build(shown.Quantities, Where(), _snapshot?.Convergence, _snapshot?.Spectrum.Device, _snapshot?.ConvergenceProblem));
                 break;
             case Page.Help:
                 int width = Math.Max(40, Frame.Width - (_boardFrame.Visible ? LeftWidth : 0) - 4);
                 _page.SetLines(_showLimits ? HelpText.Limits(width) : HelpText.Keys(width));
                 break;
             case Page.Errors:
-                _page.SetLines(LoadErrorText.Build(_session.LoadErrors, _session.LoadedText));
+                _page.SetLines(LoadErrorText.Build(_session.LoadErrors, _session.LoadedText, Math.Max(40, Frame.Width - (_boardFrame.Visible ? LeftWidth : 0) - 6)));
                 break;
             case Page.Crossings:
                 _crossingList.SetLines(CrossingsText.Build(_crossings, _sweep, _series?.AxisName, _crossingsPending,

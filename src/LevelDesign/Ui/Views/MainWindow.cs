@@ -85,6 +85,9 @@ public sealed partial class MainWindow : Window
         _status = new StatusLine { X = 0, Y = Pos.AnchorEnd(3), Width = Dim.Fill() };
         _prompt = new PromptBar { X = 0, Y = Pos.AnchorEnd(6), Width = Dim.Fill() };
 
+        // Titles carry file names and ids with '_', which the framework would take as a hotkey marker.
+        foreach (View titled in new View[] { this, _boardFrame, _formFrame, _pageFrame, _plotFrame })
+            titled.HotKeySpecifier = (System.Text.Rune)0xFFFF;
         Add(_boardFrame, _formFrame, _pageFrame, _plotFrame, _status, _prompt, BuildKeyBar());
         BindBoardKeys();
         BindWindowKeys();
