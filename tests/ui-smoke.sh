@@ -13,12 +13,8 @@ WORK=$(mktemp -d)
 SESSION="ld-smoke-$$"
 trap 'tmux kill-session -t "$SESSION" 2>/dev/null || true; rm -rf "$WORK"' EXIT
 
-# The device: the example file when the device-file layer reads it, else an empty development edit log.
-if [[ -f devices/pair.toml ]] && ! grep -q "NotImplementedException" src/LevelDesign.Core/DeviceFiles/DeviceDocument.cs; then
-  cp devices/pair.toml "$WORK/pair.toml"
-else
-  echo "# development edit log" > "$WORK/pair.toml"
-fi
+# The device: a copy of the example file, so saves and autosaves stay in the temporary folder.
+cp devices/pair.toml "$WORK/pair.toml"
 export NO_COLOR=1 TERM=xterm-256color
 
 fail=0
@@ -54,6 +50,7 @@ has_braille
 keys Right Right Right
 wait_for "cursor " 5
 capture > "$WORK/80x24.txt"
+grep -q 'elements.qa.ec' "$WORK/pair.toml.autosave" 2>/dev/null || grep -q '210 MHz' "$WORK/pair.toml.autosave" || { echo "FAIL: the autosave is not the edited TOML"; fail=1; }
 
 echo "== kill -9 mid-edit, then the next start offers recovery"
 pid=$(tmux list-panes -t "$SESSION" -F '#{pane_pid}')

@@ -12,7 +12,7 @@ namespace LevelDesign.Core.DeviceFiles;
 /// Edits replace only the characters of the edited value in the original text and re-read the whole file, so
 /// a new value is checked exactly as loading would check it. See docs/device-format.md.
 /// </summary>
-public sealed class DeviceDocument
+public sealed partial class DeviceDocument
 {
     /// <summary>Name of the embedded copy of devices/pair.toml.</summary>
     public const string DemoResourceName = "LevelDesign.Core.DeviceFiles.pair.toml";

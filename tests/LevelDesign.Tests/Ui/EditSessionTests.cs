@@ -3,16 +3,20 @@ using LevelDesign.Ui.Session;
 
 namespace LevelDesign.Tests.Ui;
 
-public class EditSessionTests
+public sealed class EditSessionTests : IDisposable
 {
+    private readonly string _folder = Directory.CreateTempSubdirectory("ld-session-").FullName;
+
+    public void Dispose() => Directory.Delete(_folder, recursive: true);
+
     [Fact]
     public void Every_edit_is_undoable_and_a_new_edit_clears_redo()
     {
-        var session = new EditSession(new EditLogDocumentStore());
-        session.OpenDemo();
+        var session = new EditSession();
+        session.OpenFile(UiHarness.CopyDevice("pair.toml", _folder));
         var original = session.Document;
         Assert.True(session.SetValue("elements.qa.ec", "200 MHz").Accepted);
-        Assert.True(session.SetValue("couplers.g_qa_ra.g", "95 MHz").Accepted);
+        Assert.True(session.SetValue("couplers.qa_ra.g", "95 MHz").Accepted);
         Assert.Equal(2, session.UndoDepth);
         session.Undo();
         Assert.True(session.CanRedo);
@@ -27,8 +31,8 @@ public class EditSessionTests
     [Fact]
     public void A_refused_edit_leaves_the_document_and_history_alone()
     {
-        var session = new EditSession(new EditLogDocumentStore());
-        session.OpenDemo();
+        var session = new EditSession();
+        session.OpenFile(UiHarness.CopyDevice("pair.toml", _folder));
         var before = session.Document;
         var outcome = session.SetValue("elements.qa.ec", "-5 GHz");
         Assert.False(outcome.Accepted);
@@ -38,15 +42,44 @@ public class EditSessionTests
     }
 
     [Fact]
+    public void Structural_edits_are_undoable_like_values()
+    {
+        var session = new EditSession();
+        session.OpenFile(UiHarness.CopyDevice("pair.toml", _folder));
+        string text = session.Document!.ToText();
+        var removed = session.Remove("qa");
+        Assert.True(removed.Accepted);
+        Assert.Contains("coupler qa_ra", removed.Message);
+        Assert.True(session.Rename("qb", "q2").Accepted);
+        session.Undo();
+        session.Undo();
+        Assert.Equal(text, session.Document!.ToText());
+        Assert.Equal(0, session.UndoDepth);
+        Assert.True(session.CanRedo);
+        Assert.False(session.Rename("qz", "q3").Accepted);   // refused: history untouched
+        Assert.True(session.CanRedo);
+    }
+
+    [Fact]
+    public void The_demo_has_no_file_so_save_asks_for_one()
+    {
+        var session = new EditSession();
+        session.OpenDemo();
+        Assert.Null(session.Path);
+        Assert.True(session.SetValue("elements.qa.ec", "200 MHz").Accepted);
+        var outcome = session.Save();
+        Assert.False(outcome.Accepted);
+        Assert.Contains("save as", outcome.Message);
+    }
+
+    [Fact]
     public void Changed_on_disk_is_noticed()
     {
-        string folder = Directory.CreateTempSubdirectory("ld-ui-").FullName;
-        string path = Path.Combine(folder, "d.log");
-        File.WriteAllText(path, "# v1\n");
-        var session = new EditSession(new EditLogDocumentStore());
+        string path = UiHarness.CopyDevice("single.toml", _folder);
+        var session = new EditSession();
         session.OpenFile(path);
         Assert.False(session.ChangedOnDisk);
-        File.WriteAllText(path, "# v2, written by someone else\nset elements.qa.ec = 230 MHz\n");
+        File.AppendAllText(path, "# written by someone else\n");
         File.SetLastWriteTimeUtc(path, DateTime.UtcNow.AddMinutes(1));
         Assert.True(session.ChangedOnDisk);
     }

@@ -1,15 +1,19 @@
 using System.Globalization;
+using LevelDesign.Core.Analysis;
 using LevelDesign.Core.Composite;
+using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Sweeps;
-using LevelDesign.Ui.Compute;
+using LevelDesign.Tests.Support;
+using LevelDesign.Ui.Export;
 using LevelDesign.Ui.Views;
 using Terminal.Gui.Input;
 
 namespace LevelDesign.Tests.Ui;
 
 /// <summary>
-/// Screen tests: keys go in through the headless ANSI driver, assertions read the driver's text, as a user
-/// at an 80×24 terminal would see it. Numbers shown are checked against Core's solver run independently.
+/// Screen tests on copies of the example devices: keys go in through the headless ANSI driver, assertions read
+/// the driver's text, as a user at an 80×24 terminal would see it. Numbers shown are checked against Core's
+/// solver run independently.
 /// </summary>
 [Collection("terminal ui")]
 public class MainWindowTests
@@ -17,27 +21,49 @@ public class MainWindowTests
     private static void Shows(string screen, string text) => Assert.True(screen.Contains(text), $"expected '{text}' on screen:\n{screen}");
     private static void Lacks(string screen, string text) => Assert.False(screen.Contains(text), $"did not expect '{text}' on screen:\n{screen}");
 
+    /// <summary>Selects the board row of an element, coupler or bias id.</summary>
+    private static void SelectOnBoard(UiHarness ui, string id)
+    {
+        ui.Press(Key.Home);
+        for (int i = 0; i < 30 && !ui.Screen.Contains($"Parameters: {id}") && !ui.Screen.Contains($"Bias: {id}") && !ui.Screen.Contains($"Coupler: {id}"); i++)
+            ui.Press(Key.CursorDown);
+        Shows(ui.Screen, id);
+    }
+
+    /// <summary>From the board, opens the form and the edit box of the named field.</summary>
+    private static void EditField(UiHarness ui, string element, string field)
+    {
+        SelectOnBoard(ui, element);
+        ui.Press(Key.Enter);   // board → form
+        for (int i = 0; i < 12; i++)
+        {
+            ui.Press(Key.Enter);
+            if (ui.Window.Prompt.IsOpen && ui.Window.Prompt.Question.Contains($".{field} =")) return;
+            if (ui.Window.Prompt.IsOpen) ui.Press(Key.Esc);
+            ui.Press(Key.CursorDown);
+        }
+        throw new InvalidOperationException($"no field {field} on the form:\n{ui.Screen}");
+    }
+
     [Fact]
     public void Opens_at_80x24_with_board_form_states_status_and_keys()
     {
         using var ui = new UiHarness();
         ui.WaitIdle();
         string screen = ui.Screen;
-        Shows(screen, "qa  tunable_transmon");
-        Shows(screen, "g_qa_ra  qa–ra");
-        Shows(screen, "Parameters: qa");
-        Shows(screen, "220 MHz");
+        Shows(screen, "q  tunable_transmon");
+        Shows(screen, "q_r  q–r");
+        Shows(screen, "Parameters: q");
         Shows(screen, "States at cursor");
         Shows(screen, "eigen ");
         Shows(screen, "trunc ");
+        Shows(screen, "key values");
         Shows(screen, "F1");
-        Shows(screen, "Help");
         Shows(screen, "Sweep");
-        // The states table shows the dressed qa1 frequency computed by Core (independent solve here).
+        // The states table shows the dressed q1 frequency computed by Core (independent solve here).
         var spectrum = new DeviceSolver().Solve(ui.Session.Document!.Device);
-        int k = spectrum.DressedIndexOf([1, 0, 0]);
-        Shows(screen, "qa1");
-        Shows(screen, spectrum.Energies[k].ToString("F4", CultureInfo.InvariantCulture));
+        Shows(screen, "q1");
+        Shows(screen, spectrum.EnergyOf([1, 0]).ToString("F4", CultureInfo.InvariantCulture));
     }
 
     [Fact]
@@ -45,23 +71,22 @@ public class MainWindowTests
     {
         using var ui = new UiHarness();
         ui.WaitIdle();
-        ui.Press(Key.Enter);            // board → parameter form
-        ui.Press(Key.Enter);            // edit "ec"
-        Shows(ui.Screen, "elements.qa.ec =");
-        ui.Replace("210 MHz");
+        EditField(ui, "r", "frequency");
+        ui.Replace("7 GHz");
         ui.Press(Key.Enter);
-        ui.WaitForScreen("210 MHz");
-        Assert.Equal(0.21, ui.Session.Document!.Device.GetParameter("qa.ec"), 12);
+        ui.WaitForScreen("7 GHz");
+        Assert.Equal(7.0, ui.Session.Document!.Device.GetParameter("r.frequency"), 12);
+        Assert.Contains("frequency = \"7 GHz\"", File.ReadAllText(ui.FilePath + ".autosave"));
         Shows(ui.Screen, "● unsaved");
 
         ui.Press(Key.Z.WithCtrl);
-        ui.WaitForScreen("220 MHz");
-        Assert.Equal(0.22, ui.Session.Document!.Device.GetParameter("qa.ec"), 12);
+        ui.WaitForScreen("6.9 GHz");
+        Assert.Equal(6.9, ui.Session.Document!.Device.GetParameter("r.frequency"), 12);
         Lacks(ui.Screen, "● unsaved");
 
         ui.Press(Key.Y.WithCtrl);
-        ui.WaitForScreen("210 MHz");
-        Assert.Equal(0.21, ui.Session.Document!.Device.GetParameter("qa.ec"), 12);
+        ui.WaitForScreen("7 GHz");
+        Assert.Equal(7.0, ui.Session.Document!.Device.GetParameter("r.frequency"), 12);
     }
 
     [Fact]
@@ -69,17 +94,34 @@ public class MainWindowTests
     {
         using var ui = new UiHarness();
         ui.WaitIdle();
-        ui.Press(Key.Enter, Key.Enter);
+        EditField(ui, "r", "frequency");
         ui.Replace("210 fF");
         ui.Press(Key.Enter);
         string screen = ui.Screen;
         Shows(screen, "✗");
-        Shows(screen, "ec stays 220 MHz");
-        Assert.Equal(0.22, ui.Session.Document!.Device.GetParameter("qa.ec"), 12);
+        Shows(screen, "frequency stays 6.9 GHz");
+        Assert.Equal(6.9, ui.Session.Document!.Device.GetParameter("r.frequency"), 12);
         ui.Press(Key.Esc);
         Assert.False(ui.Window.Prompt.IsOpen);
-        Shows(ui.Screen, "220 MHz");
         Assert.False(ui.Session.IsDirty);
+    }
+
+    [Fact]
+    public void A_value_set_by_a_bias_says_so_and_its_edit_goes_to_the_bias()
+    {
+        using var ui = new UiHarness(120, 40);
+        ui.WaitIdle();
+        SelectOnBoard(ui, "q");
+        Shows(ui.Screen, "flux        0.1 Φ0 ← bias q_flux");
+        EditField(ui, "q", "value");
+        Shows(ui.Screen, "biases.q_flux.value =");
+        ui.Replace("0.2");
+        ui.Press(Key.Enter);
+        ui.WaitIdle();
+        Assert.Equal(0.2, ui.Session.Document!.Bias("q_flux")!.Value, 12);
+        Assert.Equal(0.2, ui.Session.Document!.Device.GetParameter("q.flux"), 12);
+        Assert.Contains("value = 0.2\n", ui.Session.Document!.ToText());
+        Assert.Contains("flux = 0.1 ", ui.Session.Document!.ToText());   // the element's own value is not the one edited
     }
 
     [Fact]
@@ -88,29 +130,25 @@ public class MainWindowTests
         using var ui = new UiHarness();
         ui.WaitIdle();
         ui.Press(Key.F5);
-        Shows(ui.Screen, "qa_flux 0 0.5 61");
+        Shows(ui.Screen, "flux_scan");   // the file's own sweep is offered first
         ui.Press(Key.Enter);
         ui.WaitFor(() => ui.Window.LastSweep is { Completed: true }, "the sweep");
         string screen = ui.Screen;
-        Shows(screen, "│ ≤2 excitations │");
         Assert.Contains(screen, c => c >= '\u2801' && c <= '\u28FF');   // braille dots drawn
-        Shows(screen, "cursor qa_flux = 0.0000");
+        Shows(screen, "cursor q_flux = 0.0000");
 
-        for (int i = 0; i < 12; i++) ui.Press(Key.CursorRight);
-        Assert.Equal(12, ui.Window.Spectrum.CursorIndex);
-        Shows(ui.Screen, "qa_flux = 0.1000");
+        for (int i = 0; i < 10; i++) ui.Press(Key.CursorRight);
+        Assert.Equal(10, ui.Window.Spectrum.CursorIndex);
+        Shows(ui.Screen, "q_flux = 0.1000");
 
-        ui.Press(Key.F3, Key.F3, Key.F3);   // spectrum → crossings → states → shifts? (cycle) back to states
         while (ui.Window.CurrentPage != Page.States) ui.Press(Key.F3);
         screen = ui.Screen;
-        Shows(screen, "qa_flux = 0.1000 (point 13/61)");
-        // The table row for qa1 equals the sweep point's own dressed energy.
-        var point = ui.Window.LastSweep!.Points[12];
-        int k = point.Spectrum.DressedIndexOf([1, 0, 0]);
-        Shows(screen, point.Spectrum.Energies[k].ToString("F4", CultureInfo.InvariantCulture));
-        // and agrees with an independent solve at qa.flux = 0.1.
-        var direct = new DeviceSolver().Solve(ui.Session.Document!.Device.WithParameter("qa.flux", 0.1));
-        Assert.Equal(direct.EnergyOf([1, 0, 0]), point.Spectrum.Energies[k], 9);
+        Shows(screen, "q_flux = 0.1000 (point 11/51)");
+        var point = ui.Window.LastSweep!.Points[10];
+        Shows(screen, point.Spectrum.EnergyOf([1, 0]).ToString("F4", CultureInfo.InvariantCulture));
+        // and agrees with an independent solve with the bias at 0.1 (target q.flux = 0.1 through the bias)
+        var direct = new DeviceSolver().Solve(ui.Session.Document!.Device.WithParameter("q.flux", 0.1));
+        Assert.Equal(direct.EnergyOf([1, 0]), point.Spectrum.EnergyOf([1, 0]), 9);
     }
 
     [Fact]
@@ -122,16 +160,13 @@ public class MainWindowTests
         ui.WaitFor(() => ui.Window.LastSweep is { Completed: true }, "the first sweep");
         var first = ui.Window.LastSweep!;
 
-        ui.Press(Key.Tab);
         ui.Window.ShowPage(Page.States);
-        // edit qa.ej_sum through the form
-        ui.Session.SetValue("elements.qa.ej_sum", "22 GHz");
+        ui.Session.SetValue("elements.r.frequency", "7.1 GHz");
         Assert.Contains("stale", ui.Window.Spectrum.Status);
         Assert.Same(first, ui.Window.LastSweep);     // nothing re-run before the pause
         ui.Scheduler.Advance(TimeSpan.FromSeconds(1));
         ui.WaitFor(() => !ReferenceEquals(first, ui.Window.LastSweep) && ui.Window.LastSweep!.Completed, "the re-run");
-        double ejInSweep = ui.Window.LastSweep!.Points[0].Spectrum.Device.GetParameter("qa.ej_sum");
-        Assert.Equal(22.0, ejInSweep, 12);
+        Assert.Equal(7.1, ui.Window.LastSweep!.Points[0].Spectrum.Device.GetParameter("r.frequency"), 12);
     }
 
     [Fact]
@@ -140,7 +175,7 @@ public class MainWindowTests
         using var ui = new UiHarness();
         ui.WaitIdle();
         ui.Press(Key.F5);
-        ui.Replace("qa_flux 0 0.5 2001");
+        ui.Replace("q_flux 0 0.5 2001");
         ui.Press(Key.Enter);
         Assert.True(ui.Window.IsComputing);
         ui.Press(Key.Esc);
@@ -151,25 +186,24 @@ public class MainWindowTests
     }
 
     [Fact]
-    public void Save_writes_the_file_with_a_backup_and_clears_the_unsaved_mark()
+    public void Save_writes_the_toml_file_with_a_backup_and_clears_the_unsaved_mark()
     {
-        string folder = Directory.CreateTempSubdirectory("ld-ui-").FullName;
-        string path = Path.Combine(folder, "pair.log");
-        File.WriteAllText(path, "# first version\n");
-        using var ui = new UiHarness(open: s => s.OpenFile(path));
+        using var ui = new UiHarness();
+        string original = File.ReadAllText(ui.FilePath!);
         ui.WaitIdle();
-        ui.Press(Key.Enter, Key.Enter);
-        ui.Replace("230 MHz");
+        EditField(ui, "r", "frequency");
+        ui.Replace("7 GHz");
         ui.Press(Key.Enter);
         ui.WaitForScreen("● unsaved");
-        Assert.True(File.Exists(path + ".autosave"));
+        Assert.True(File.Exists(ui.FilePath + ".autosave"));
         ui.Press(Key.S.WithCtrl);
         string screen = ui.Screen;
         Lacks(screen, "● unsaved");
         Shows(screen, "saved");
-        Assert.Contains("set elements.qa.ec = 230 MHz", File.ReadAllText(path));
-        Assert.Equal("# first version\n", File.ReadAllText(path + ".bak"));
-        Assert.False(File.Exists(path + ".autosave"));
+        Assert.Equal(original.Replace("frequency = \"6.9 GHz\"", "frequency = \"7 GHz\""), File.ReadAllText(ui.FilePath!));
+        Assert.Equal(original, File.ReadAllText(ui.FilePath + ".bak"));
+        Assert.False(File.Exists(ui.FilePath + ".autosave"));
+        Assert.True(DeviceDocument.Load(ui.FilePath!).Ok);
     }
 
     [Fact]
@@ -177,7 +211,7 @@ public class MainWindowTests
     {
         using var ui = new UiHarness();
         ui.WaitIdle();
-        ui.Session.SetValue("elements.qa.ec", "200 MHz");
+        ui.Session.SetValue("elements.r.frequency", "7 GHz");
         ui.Press(Key.Q.WithCtrl);
         Shows(ui.Screen, "unsaved changes");
         Assert.False(ui.Window.QuitAllowed);
@@ -203,35 +237,34 @@ public class MainWindowTests
     public void A_session_that_ended_without_saving_is_offered_for_recovery_on_the_next_start()
     {
         string folder = Directory.CreateTempSubdirectory("ld-ui-").FullName;
-        string path = Path.Combine(folder, "pair.log");
-        File.WriteAllText(path, "# saved\n");
+        string path = UiHarness.CopyDevice("single.toml", folder);
         using (var first = new UiHarness(open: s => s.OpenFile(path)))
         {
             first.WaitIdle();
-            first.Session.SetValue("elements.qb.ec", "205 MHz");
+            first.Session.SetValue("elements.r.frequency", "7.05 GHz");
             // no save, no quit: the process "dies" here
         }
         Assert.True(File.Exists(path + ".autosave"));
         using var second = new UiHarness(open: s => s.OpenFile(path));
         Shows(second.Screen, "found edits not saved");
-        Assert.Equal(0.21, second.Session.Document!.Device.GetParameter("qb.ec"), 12);   // offered, not forced
+        Assert.Equal(6.9, second.Session.Document!.Device.GetParameter("r.frequency"), 12);   // offered, not forced
         second.Press(new Key('r'));
         second.WaitIdle();
-        Assert.Equal(0.205, second.Session.Document!.Device.GetParameter("qb.ec"), 12);
+        Assert.Equal(7.05, second.Session.Document!.Device.GetParameter("r.frequency"), 12);
         Shows(second.Screen, "● unsaved");
     }
 
     [Fact]
     public void A_bad_file_opens_with_its_errors_and_the_offending_lines()
     {
-        string folder = Directory.CreateTempSubdirectory("ld-ui-").FullName;
-        string path = Path.Combine(folder, "bad.log");
-        File.WriteAllText(path, "# device\nset elements.qa.ec = 12 nH\n");
+        string path = Path.Combine(RepositoryPaths.Malformed, "wrong_unit_ec.toml");
+        var expected = DeviceDocument.Load(path).Errors[0];
         using var ui = new UiHarness(open: s => s.OpenFile(path));
         string screen = ui.Screen;
         Assert.Equal(Page.Errors, ui.Window.CurrentPage);
-        Shows(screen, "bad.log:2:1");
-        Shows(screen, "2 │ set elements.qa.ec = 12 nH");
+        Shows(screen, $"wrong_unit_ec.toml:{expected.Line}:{expected.Column}");
+        string offending = File.ReadAllLines(path)[expected.Line - 1];
+        Shows(screen, $"{expected.Line} │ {offending[..Math.Min(offending.Length, 20)]}");
     }
 
     [Fact]
@@ -268,35 +301,86 @@ public class MainWindowTests
     }
 
     [Fact]
-    public void Shifts_page_shows_chi_and_zz_with_units_and_conventions()
+    public void Shifts_page_shows_chi_and_the_truncation_check_of_the_key_values_in_kHz()
     {
-        using var ui = new UiHarness(120, 40);
+        using var ui = new UiHarness(100, 60);
         ui.WaitIdle();
         ui.Press(Key.F3);
         string screen = ui.Screen;
         Shows(screen, "Shifts at cursor");
-        Shows(screen, "MHz");
         Shows(screen, "2χ");
-        Shows(screen, "ZZ");
-        Shows(screen, "ζ = E11 − E10 − E01 + E00");
+        Shows(screen, "Truncation");
+        Shows(screen, "kHz");
+        // the rows are the key values of an independent convergence check, with the same verdicts
+        var device = ui.Session.Document!.Device;
+        var entries = TruncationConvergence.Check(new DeviceSolver(), device);
+        foreach (var name in new[] { "q.f01", "q.anharmonicity", "chi2:q:r" })
+        {
+            var entry = entries.Single(e => e.Quantity == name);
+            Shows(screen, $"{(entry.Flagged ? "✗" : "✓")} {name}");
+        }
+        Lacks(screen, "✓ r.f12");   // resonator levels are not key values
     }
 
     [Fact]
-    public void Enter_on_a_crossing_moves_the_cursor_there()
+    public void Crossings_come_from_core_ranked_by_distance_to_the_operating_point_and_Enter_goes_there()
     {
         using var ui = new UiHarness();
         ui.WaitIdle();
         ui.Press(Key.F5, Key.Enter);
         ui.WaitFor(() => ui.Window.LastSweep is { Completed: true }, "the sweep");
         while (ui.Window.CurrentPage != Page.Crossings) ui.Press(Key.F3);
-        string screen = ui.Screen;
-        Shows(screen, "gap");
-        Shows(screen, "↔");
-        var series = SpectrumSeries.From(ui.Window.LastSweep!, Manifold.UpToTwo);
-        var first = NearApproachFinder.Find(series)[0];
+        ui.WaitForScreen("↔", 120000);
+        Shows(ui.Screen, "nearest to the file's operating points first");
+        var sweep = ui.Window.LastSweep!;
+        // an independent run of the finder on the same sweep: the first row is its nearest crossing to sweet_spot (q_flux = 0)
+        var document = ui.Session.Document!;
+        var options = MainWindow.CrossingOptionsFor(document, sweep);
+        Assert.Equal([0.0], options.OperatingPoints);   // sweet_spot sets q_flux = 0
+        var found = CrossingFinder.Find(sweep, x => document.Resolve(sweep.Plan.Axes, [x]), options);
+        Assert.NotEmpty(found);
+        var distances = found.Select(c => c.DistanceToOperatingPoint!.Value).ToList();
+        Assert.Equal(distances.Order(), distances);
         ui.Press(Key.Enter);
         Assert.Equal(Page.Spectrum, ui.Window.CurrentPage);
-        Assert.Equal(first.PointIndex, ui.Window.Spectrum.CursorIndex);
+        int nearest = Enumerable.Range(0, sweep.Points.Count).MinBy(i => Math.Abs(sweep.Points[i].AxisValues[0] - found[0].Bias));
+        Assert.Equal(nearest, ui.Window.Spectrum.CursorIndex);
+    }
+
+    [Fact]
+    public void A_target_lists_its_roots_and_a_digit_applies_one_as_an_undoable_bias_edit()
+    {
+        using var ui = new UiHarness();
+        ui.WaitIdle();
+        ui.Press(Key.F9);
+        ui.Replace("q.f01 = 5.5 GHz by q_flux 0 to 0.5");
+        ui.Press(Key.Enter);
+        ui.WaitForScreen("digit applies", 120000);
+        ui.Press(new Key('1'));
+        ui.WaitIdle();
+        double flux = ui.Session.Document!.Bias("q_flux")!.Value;
+        Assert.InRange(flux, 0.0, 0.5);
+        // solving the device at the applied bias gives the target frequency
+        var quantities = DerivedQuantities.From(new DeviceSolver().Solve(ui.Session.Document!.Device)).Named();
+        Assert.Equal(5.5, quantities["q.f01"], 6);
+        ui.Press(Key.Z.WithCtrl);
+        Assert.Equal(0.1, ui.Session.Document!.Bias("q_flux")!.Value, 12);
+    }
+
+    [Fact]
+    public void A_sweep_exports_as_an_svg_plot()
+    {
+        using var ui = new UiHarness(plots: new SpectrumPlotExporter());
+        ui.WaitIdle();
+        ui.Press(Key.F5, Key.Enter);
+        ui.WaitFor(() => ui.Window.LastSweep is { Completed: true }, "the sweep");
+        string svg = Path.Combine(Path.GetDirectoryName(ui.FilePath)!, "spectrum.svg");
+        ui.Press(Key.F8);
+        ui.Replace(svg);
+        ui.Press(Key.Enter);
+        ui.WaitFor(() => File.Exists(svg), "the plot file");   // the status line may already show the crossings message
+        Assert.False(ui.Window.Prompt.IsOpen);
+        Assert.Contains("<svg", File.ReadAllText(svg));
     }
 
     [Fact]
@@ -307,23 +391,60 @@ public class MainWindowTests
         ui.Press(Key.InsertChar);
         Shows(ui.Screen, "add: t transmon");
         ui.Press(new Key('t'));
-        ui.Type("qc");
+        ui.Type("q2");
         ui.Press(Key.Enter);
-        ui.WaitForScreen("qc  transmon");
-        Assert.Equal(4, ui.Session.Document!.Device.Elements.Count);
+        ui.WaitForScreen("q2  transmon");
+        Assert.Equal(3, ui.Session.Document!.Device.Elements.Count);
+        Assert.Contains("# default values for a new transmon", ui.Session.Document!.ToText());
 
-        // rename qa → qx: its couplers follow
-        ui.Press(Key.Home);
-        while (!ui.Screen.Contains("›    qa ") && !ui.Screen.Contains("›    qa  ")) ui.Press(Key.CursorDown);
+        // rename q → qx: its coupler and bias follow
+        SelectOnBoard(ui, "q");
         ui.Press(Key.F6);
         ui.Replace("qx");
         ui.Press(Key.Enter);
         ui.WaitForScreen("qx  tunable_transmon");
-        Assert.Contains(ui.Session.Document!.Device.Couplers, c => c.Id == "g_qa_ra" && c.ElementA == "qx");
+        Assert.Contains(ui.Session.Document!.Device.Couplers, c => c.Id == "q_r" && c.ElementA == "qx");
+        Assert.Equal("qx.flux", ui.Session.Document!.Bias("q_flux")!.Target);
 
         ui.Press(Key.Delete);
+        Shows(ui.Screen, "with coupler q_r, bias q_flux");
         ui.Press(new Key('y'));
         ui.WaitFor(() => ui.Session.Document!.Device.IndexOf("qx") < 0, "qx removed");
-        Assert.DoesNotContain(ui.Session.Document!.Device.Couplers, c => c.ElementA == "qx" || c.ElementB == "qx");
+        Assert.Empty(ui.Session.Document!.Device.Couplers);
+        Assert.Empty(ui.Session.Document!.Biases);
+        ui.Press(Key.Z.WithCtrl);
+        Assert.True(ui.Session.Document!.Device.IndexOf("qx") >= 0);
+    }
+
+    [Fact]
+    public void Saving_does_not_rerun_the_sweep()
+    {
+        using var ui = new UiHarness();
+        ui.WaitIdle();
+        ui.Press(Key.F5, Key.Enter);
+        ui.WaitFor(() => ui.Window.LastSweep is { Completed: true }, "the sweep");
+        ui.Session.SetValue("elements.r.frequency", "7 GHz");
+        ui.Scheduler.Advance(TimeSpan.FromSeconds(1));
+        ui.WaitFor(() => ui.Window.LastSweep!.Points[0].Spectrum.Device.GetParameter("r.frequency") == 7.0 && !ui.Window.IsComputing, "the re-run");
+        var sweep = ui.Window.LastSweep;
+        ui.Press(Key.S.WithCtrl);
+        ui.Scheduler.Advance(TimeSpan.FromSeconds(1));
+        Assert.False(ui.Window.IsComputing);
+        Assert.Same(sweep, ui.Window.LastSweep);
+    }
+
+    [Fact]
+    public void A_device_whose_truncation_cannot_be_raised_still_shows_its_states_and_says_why_it_is_not_checked()
+    {
+        using var ui = new UiHarness(100, 70, device: "defect.toml");
+        ui.WaitIdle();
+        // the check raises every cutoff, which a two-state level list cannot follow
+        var device = ui.Session.Document!.Device;
+        var problem = Assert.ThrowsAny<ArgumentException>(() => TruncationConvergence.Check(new DeviceSolver(), device));
+        string screen = ui.Screen;
+        Shows(screen, "not checked");
+        Shows(screen, new DeviceSolver().Solve(device).EnergyOf([1, 0, 0]).ToString("F4", CultureInfo.InvariantCulture));
+        ui.Press(Key.F3);
+        Shows(ui.Screen, "not run: " + problem.Message[..20]);
     }
 }

@@ -1,6 +1,8 @@
 using System.Diagnostics;
 using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Tests.Support;
 using LevelDesign.Ui.Compute;
+using LevelDesign.Ui.Export;
 using LevelDesign.Ui.Session;
 using LevelDesign.Ui.Views;
 using Terminal.Gui.App;
@@ -12,25 +14,45 @@ namespace LevelDesign.Tests.Ui;
 
 /// <summary>
 /// Drives the real main window headlessly: ANSI driver, fixed screen size, injected keys, and assertions on
-/// the driver's text. Background results arrive through <see cref="ManualScheduler"/>, pumped by <see cref="WaitFor"/>.
+/// the driver's text. The device is a copy of an example file (devices/*.toml) in a temporary folder.
+/// Background results arrive through <see cref="ManualScheduler"/>, pumped by <see cref="WaitFor"/>.
 /// </summary>
 public sealed class UiHarness : IDisposable
 {
+    private readonly string? _folder;
+
     public IApplication App { get; }
     public ManualScheduler Scheduler { get; } = new();
     public EditSession Session { get; }
     public MainWindow Window { get; }
 
-    public UiHarness(int width = 80, int height = 24, Action<EditSession>? open = null, ITargetSolver? targets = null)
+    /// <summary>The copied device file (null when <paramref name="open"/> chose what to open).</summary>
+    public string? FilePath { get; }
+
+    public UiHarness(int width = 80, int height = 24, Action<EditSession>? open = null, string device = "single.toml", IPlotExporter? plots = null)
     {
         App = Application.Create();
         App.Init(DriverRegistry.Names.ANSI);
         App.Driver!.SetScreenSize(width, height);
-        Session = new EditSession(new EditLogDocumentStore());
-        if (open is null) Session.OpenDemo(); else open(Session);
-        Window = new MainWindow(Session, Scheduler, new SweepService(), targets);
+        Session = new EditSession();
+        if (open is null)
+        {
+            _folder = Directory.CreateTempSubdirectory("ld-ui-").FullName;
+            FilePath = CopyDevice(device, _folder);
+            Session.OpenFile(FilePath);
+        }
+        else open(Session);
+        Window = new MainWindow(Session, Scheduler, new SweepService(), new TargetSearch(), plots);
         App.Begin(Window);
         Draw();
+    }
+
+    /// <summary>Copies devices/NAME into a folder and returns the copy's path.</summary>
+    public static string CopyDevice(string name, string folder)
+    {
+        string path = Path.Combine(folder, name);
+        File.Copy(Path.Combine(RepositoryPaths.Devices, name), path, overwrite: true);
+        return path;
     }
 
     public void Draw() => App.LayoutAndDraw();
@@ -89,5 +111,6 @@ public sealed class UiHarness : IDisposable
     {
         Window.Dispose();
         App.Dispose();
+        if (_folder is not null) try { Directory.Delete(_folder, recursive: true); } catch (IOException) { }
     }
 }

@@ -1,9 +1,10 @@
-using LevelDesign.Core.Model;
+using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Sweeps;
 
 namespace LevelDesign.Ui.Compute;
 
-/// <summary>Hook for the sweep engine's root finder: solve a target for one bias.</summary>
+/// <summary>Solves a target for one bias: every bias in the range where the named quantity equals the goal.</summary>
 public interface ITargetSolver
 {
-    Task<TargetAnswer> SolveAsync(Func<double, Device> resolve, TargetRequest request, CancellationToken cancellation);
+    Task<IReadOnlyList<TargetRoot>> FindAllAsync(DeviceDocument document, TargetRequest request, CancellationToken cancellation);
 }

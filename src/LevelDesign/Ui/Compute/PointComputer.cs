@@ -16,12 +16,15 @@ public static class PointComputer
         cancellation.ThrowIfCancellationRequested();
         var quantities = DerivedQuantities.From(spectrum);
         IReadOnlyList<ConvergenceEntry>? convergence = null;
+        string? convergenceProblem = null;
         if (checkConvergence)
         {
             cancellation.ThrowIfCancellationRequested();
-            convergence = TruncationConvergence.Check(solver, device);
+            // The check raises every cutoff; an element that cannot grow (a short level list) must not cost the point.
+            try { convergence = TruncationConvergence.Check(solver, device); }
+            catch (Exception e) when (e is ArgumentException or InvalidOperationException) { convergenceProblem = e.Message; }
         }
-        return new PointSnapshot(spectrum, quantities, convergence, DateTime.Now, clock.Elapsed);
+        return new PointSnapshot(spectrum, quantities, convergence, DateTime.Now, clock.Elapsed) { ConvergenceProblem = convergenceProblem };
     }
 
     /// <summary>A snapshot of an already computed spectrum (a sweep point), without convergence.</summary>

@@ -11,8 +11,11 @@ public sealed record PointSnapshot(
     DateTime ComputedAt,
     TimeSpan Elapsed)
 {
-    /// <summary>"converged", "N flagged", or "not checked".</summary>
-    public string ConvergenceText => Convergence is null
-        ? "not checked"
-        : Convergence.Count(c => c.Flagged) is int n and > 0 ? $"✗ {n} unconverged" : "✓ converged";
+    /// <summary>Why the truncation check could not run (e.g. a level list cannot grow), or null.</summary>
+    public string? ConvergenceProblem { get; init; }
+
+    /// <summary>Convergence of the key values only (see <see cref="ConvergenceSummary"/>), or "not checked".</summary>
+    public string ConvergenceText => ConvergenceProblem is not null
+        ? "not checked (F3 shifts says why)"
+        : ConvergenceSummary.StatusText(Convergence, Spectrum.Device);
 }

@@ -1,10 +1,10 @@
-using LevelDesign.Ui.Compute;
+using LevelDesign.Core.Sweeps;
 
 namespace LevelDesign.Ui.Export;
 
-/// <summary>Hook for SVG/PNG export through src/LevelDesign.Plots once it is merged.</summary>
+/// <summary>SVG/PNG export of a sweep's spectrum with its crossings (src/LevelDesign.Plots does the drawing).</summary>
 public interface IPlotExporter
 {
     bool Supports(string extension);
-    void Export(SpectrumSeries series, string title, string path);
+    void Export(SweepResult sweep, IReadOnlyList<Crossing> crossings, string title, string path);
 }

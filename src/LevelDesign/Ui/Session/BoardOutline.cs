@@ -24,6 +24,27 @@ public static class BoardOutline
         return nodes;
     }
 
+    /// <summary>Alternatives in the file from which a model parameter is computed, e.g. ec from capacitance.</summary>
+    private static readonly Dictionary<string, string[]> Alternatives = new()
+    {
+        ["ec"] = ["capacitance"],
+        ["ej"] = ["ic", "rn"],
+        ["ej_sum"] = ["ej1", "ej2", "ic1", "ic2", "rn1", "rn2"],
+        ["asymmetry"] = ["ej1", "ej2", "ic1", "ic2", "rn1", "rn2"],
+        ["el"] = ["inductance"],
+    };
+
+    private static string? DerivedFrom(DeviceDocument document, string id, string name)
+    {
+        foreach (var key in Alternatives.GetValueOrDefault(name, []))
+            if (document.ValueTextOf($"elements.{id}.{key}") is not null) return "from " + key;
+        if (name == "ec" && document.ValueTextOf("capacitance_matrix.nodes") is not null) return "from [capacitance_matrix]";
+        return null;
+    }
+
+    private static string ControlUnitHint(BiasDefinition bias) =>
+        bias.ControlKind == UnitKind.Dimensionless ? ", a plain number" : $", {bias.ControlKind.WithArticle()} such as {bias.ControlKind.ExampleText()}";
+
     public static IReadOnlyList<FieldRow> Fields(DeviceDocument document, BoardNode node)
     {
         var device = document.Device;
@@ -33,11 +54,30 @@ public static class BoardOutline
             {
                 var element = device.Element(node.Id);
                 var rows = new List<FieldRow> { new("kind", ElementKinds.Key(element.Kind), null, "") };
+                var fileKeys = ElementKeys.For(element.Kind);
                 foreach (var (name, value) in element.Parameters)
                 {
                     var kind = FieldUnits.Of(name);
-                    rows.Add(new FieldRow(name, FieldUnits.Format(value, kind), $"elements.{element.Id}.{name}", kind.ExampleText()));
+                    string path = $"elements.{element.Id}.{name}";
+                    string shown = FieldUnits.Display(value, kind);
+                    // The file's biases override element values: show where the value comes from and edit the bias.
+                    if (document.Biases.FirstOrDefault(b => b.Target == $"{element.Id}.{name}") is { } bias)
+                        rows.Add(new FieldRow(name, $"{shown} ← bias {bias.Name}", $"biases.{bias.Name}.value",
+                            $"sets {bias.Target} through bias {bias.Name}; control value{ControlUnitHint(bias)}",
+                            QuantityFormatter.Format(bias.Value, bias.ControlKind)));
+                    else if (document.ValueTextOf(path) is string written)
+                        rows.Add(new FieldRow(name, shown, path, kind.ExampleText(), written));
+                    else if (DerivedFrom(document, element.Id, name) is string source)
+                        rows.Add(new FieldRow(name, $"{shown} ({source})", null, ""));
+                    else if (fileKeys.Contains(name))
+                        rows.Add(new FieldRow(name, shown, path, kind.ExampleText() + " (not in the file yet: the edit adds it)"));
+                    else
+                        rows.Add(new FieldRow(name, shown, null, ""));
                 }
+                // Values the file gives in circuit form (capacitance, junction currents or resistances, inductance).
+                foreach (var key in fileKeys.Where(k => k is not ("kind" or "levels") && !element.Parameters.ContainsKey(k)))
+                    if (document.ValueTextOf($"elements.{element.Id}.{key}") is string text && !text.StartsWith('['))
+                        rows.Add(new FieldRow(key, text, $"elements.{element.Id}.{key}", FieldUnits.Of(key).ExampleText()));
                 rows.Add(new FieldRow("levels kept", device.Truncation.LevelsOf(element.Id).ToString(), null, ""));
                 rows.Add(new FieldRow("operators", string.Join(" ", element.OperatorNames), null, ""));
                 return rows;
@@ -58,7 +98,10 @@ public static class BoardOutline
                     CouplingStrength.Capacitance f => ("capacitance", f.Farad, UnitKind.Capacitance),
                     _ => ("strength", double.NaN, UnitKind.Dimensionless),
                 };
-                rows.Add(new FieldRow(name, FieldUnits.Format(value, unit), $"couplers.{c.Id}.{name}", unit.ExampleText()));
+                string strengthPath = $"couplers.{c.Id}.{name}";
+                rows.Add(document.ValueTextOf(strengthPath) is string written
+                    ? new FieldRow(name, FieldUnits.Display(value, unit), strengthPath, unit.ExampleText(), written)
+                    : new FieldRow(name, $"{FieldUnits.Display(value, unit)} (from [capacitance_matrix])", null, ""));
                 return rows;
             }
             case BoardNodeKind.Bias:
@@ -67,9 +110,10 @@ public static class BoardOutline
                 return
                 [
                     new("target", b.Target, null, ""),
-                    new("value", FieldUnits.Format(b.Value, UnitKind.Dimensionless), $"biases.{b.Name}.value", "control value, e.g. \"0.25\""),
-                    new("period", FieldUnits.Format(b.Period, UnitKind.Dimensionless), $"biases.{b.Name}.period", "control units per Φ0"),
-                    new("offset", FieldUnits.Format(b.Offset, UnitKind.Dimensionless), $"biases.{b.Name}.offset", "control value at zero"),
+                    new("value", QuantityFormatter.Format(b.Value, b.ControlKind), $"biases.{b.Name}.value", "control value" + ControlUnitHint(b)),
+                    new("period", QuantityFormatter.Format(b.Period, b.ControlKind), $"biases.{b.Name}.period", "control per unit of the target"),
+                    new("offset", QuantityFormatter.Format(b.Offset, b.ControlKind), $"biases.{b.Name}.offset", "control value at target zero"),
+                    new("sets", $"{b.Target} = {FieldUnits.Format(b.ToParameter(b.Value), FieldUnits.Of(b.Target[(b.Target.LastIndexOf('.') + 1)..]))}", null, ""),
                 ];
             }
             case BoardNodeKind.Device:

@@ -1,4 +1,6 @@
+using LevelDesign.Core.Couplers;
 using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Elements;
 
 namespace LevelDesign.Ui.Session;
 
@@ -9,16 +11,12 @@ namespace LevelDesign.Ui.Session;
 /// </summary>
 public sealed class EditSession
 {
-    private readonly IDocumentStore _store;
     private readonly Stack<DeviceDocument> _undo = new();
     private readonly Stack<DeviceDocument> _redo = new();
     private DeviceDocument? _saved;
     private AutosaveSidecar? _autosave;
     private DiskStamp? _stamp;
 
-    public EditSession(IDocumentStore store) => _store = store;
-
-    public IDocumentStore Store => _store;
     public DeviceDocument? Document { get; private set; }
 
     /// <summary>The file this session writes to; null for the demo until "save as".</summary>
@@ -53,7 +51,7 @@ public sealed class EditSession
     {
         Reset(path);
         DeviceLoadResult result;
-        try { result = _store.Load(path); }
+        try { result = DeviceDocument.Load(path); }
         catch (Exception e) when (e is not OutOfMemoryException)
         {
             result = new DeviceLoadResult(null, [new DeviceFileError(path, 0, 0, "", e.Message)]);
@@ -68,7 +66,7 @@ public sealed class EditSession
     public void OpenDemo()
     {
         Reset(null);
-        Document = _saved = _store.Demo();
+        Document = _saved = DeviceDocument.Demo();
         Changed?.Invoke();
     }
 
@@ -95,7 +93,7 @@ public sealed class EditSession
     public EditOutcome AcceptRecovery()
     {
         if (RecoveryText is null || Path is null) return EditOutcome.Refused("nothing to recover");
-        var result = _store.Parse(RecoveryText, Path);
+        var result = DeviceDocument.Parse(RecoveryText, Path);
         if (!result.Ok) return EditOutcome.Refused("the autosave does not parse: " + string.Join("; ", result.Errors));
         RecoveryText = null;
         if (Document is not null) _undo.Push(Document);
@@ -112,28 +110,33 @@ public sealed class EditSession
     }
 
     public EditOutcome SetValue(string fieldPath, string text) =>
-        Apply(d => _store.WithValue(d, fieldPath, text.Trim(), out var e) is { } n ? (n, null) : (null, e), $"{fieldPath} = {text.Trim()}");
+        Apply(d => (d.WithValue(fieldPath, text.Trim(), out var e), e), $"{fieldPath} = {text.Trim()}");
 
-    public EditOutcome AddElement(string kindKey, string id) =>
-        Apply(d => _store.AddElement(d, kindKey, id, out var e) is { } n ? (n, null) : (null, e), $"added {kindKey} '{id}'");
+    public EditOutcome AddElement(ElementKind kind, string id) =>
+        Apply(d => (d.WithElement(id, kind, out var e), e), $"added {ElementKinds.Key(kind)} '{id}' with default values");
 
-    public EditOutcome AddCoupler(string kindKey, string id, string a, string b, string strength) =>
-        Apply(d => _store.AddCoupler(d, kindKey, id, a, b, strength, out var e) is { } n ? (n, null) : (null, e), $"added {kindKey} coupler '{id}'");
+    public EditOutcome AddCoupler(CouplerKind kind, string id, string a, string b, string? strength) =>
+        Apply(d => (d.WithCoupler(id, kind, a, b, out var e, strength), e), $"added {kind.ToString().ToLowerInvariant()} coupler '{id}'");
 
-    public EditOutcome Remove(string id) =>
-        Apply(d => _store.Remove(d, id, out var e) is { } n ? (n, null) : (null, e), $"removed '{id}'");
+    /// <summary>Removes by id with what depends on it (see DeviceDocument.Without); the message lists what went.</summary>
+    public EditOutcome Remove(string id)
+    {
+        var also = Document?.AlsoRemoved(id) ?? [];
+        return Apply(d => (d.Without(id, out var e), e), $"removed '{id}'" + (also.Count > 0 ? " with " + string.Join(", ", also) : ""));
+    }
 
     public EditOutcome Rename(string oldId, string newId) =>
-        Apply(d => _store.Rename(d, oldId, newId, out var e) is { } n ? (n, null) : (null, e), $"renamed '{oldId}' to '{newId}'");
+        Apply(d => (d.Renamed(oldId, newId, out var e), e), $"renamed '{oldId}' to '{newId}' and every reference to it");
 
-    private EditOutcome Apply(Func<DeviceDocument, (DeviceDocument? Next, string? Error)> edit, string done)
+    /// <summary>Runs one document edit; the document methods return themselves and an error when they refuse.</summary>
+    private EditOutcome Apply(Func<DeviceDocument, (DeviceDocument Next, DeviceFileError? Error)> edit, string done)
     {
         if (Document is null) return EditOutcome.Refused("no device is open");
-        (DeviceDocument? Next, string? Error) result;
+        (DeviceDocument Next, DeviceFileError? Error) result;
         try { result = edit(Document); }
-        catch (NotImplementedException) { return EditOutcome.Refused("editing needs the device file layer, which is not built in this version"); }
         catch (Exception e) when (e is ArgumentException or InvalidOperationException or FormatException) { return EditOutcome.Refused(e.Message); }
-        if (result.Next is null) return EditOutcome.Refused(result.Error ?? "refused");
+        if (result.Error is not null) return EditOutcome.Refused(result.Error.Message);
+        if (ReferenceEquals(result.Next, Document)) return EditOutcome.Refused("nothing changed");
         _undo.Push(Document);
         _redo.Clear();
         Document = result.Next;
@@ -170,8 +173,8 @@ public sealed class EditSession
         if (Document is null) return EditOutcome.Refused("no device is open");
         string? target = asPath ?? Path;
         if (string.IsNullOrWhiteSpace(target)) return EditOutcome.Refused("this device has no file yet; use save as (Ctrl+W)");
-        try { _store.Save(Document, target); }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotImplementedException or ArgumentException)
+        try { Document.Save(target); }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException)
         {
             return EditOutcome.Refused($"could not save {target}: {e.Message}");
         }
@@ -196,10 +199,10 @@ public sealed class EditSession
         if (_autosave is null || Document is null) return;
         try
         {
-            if (IsDirty) _autosave.Write(_store.ToText(Document));
+            if (IsDirty) _autosave.Write(Document.ToText());
             else _autosave.Delete();
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotImplementedException)
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
             // Autosave is a safety net; a failure must not block editing.
         }

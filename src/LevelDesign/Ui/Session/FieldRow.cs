@@ -2,9 +2,11 @@ namespace LevelDesign.Ui.Session;
 
 /// <summary>
 /// One row of the parameter form: the name, the value as text with its unit, and the field path used for
-/// editing (null for read-only rows such as the kind).
+/// editing (null for read-only rows such as the kind). <see cref="EditText"/> is what the edit box starts with
+/// when it differs from the shown text (a value set by a bias shows the parameter but edits the bias's control value).
 /// </summary>
-public sealed record FieldRow(string Name, string ValueText, string? FieldPath, string Hint)
+public sealed record FieldRow(string Name, string ValueText, string? FieldPath, string Hint, string? EditText = null)
 {
     public bool Editable => FieldPath is not null;
+    public string StartText => EditText ?? ValueText;
 }

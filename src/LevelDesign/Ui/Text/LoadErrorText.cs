@@ -5,7 +5,8 @@ namespace LevelDesign.Ui.Text;
 /// <summary>A bad file's errors, each with the offending line and a caret under the column.</summary>
 public static class LoadErrorText
 {
-    public static IReadOnlyList<TextLine> Build(IReadOnlyList<DeviceFileError> errors, string? fileText)
+    /// <param name="width">Columns available; long messages wrap so no reason is cut off.</param>
+    public static IReadOnlyList<TextLine> Build(IReadOnlyList<DeviceFileError> errors, string? fileText, int width = 100)
     {
         var fileLines = fileText?.Split('\n') ?? [];
         var lines = new List<TextLine>
@@ -17,7 +18,9 @@ public static class LoadErrorText
         foreach (var e in errors)
         {
             string field = string.IsNullOrEmpty(e.Field) ? "" : $" [{e.Field}]";
-            lines.Add(new TextLine($"✗ {Path.GetFileName(e.File)}:{e.Line}:{e.Column}{field}: {e.Message}", Warning: true));
+            var wrapped = HelpText.Wrap($"✗ {Path.GetFileName(e.File)}:{e.Line}:{e.Column}{field}: {e.Message}", Math.Max(20, width)).ToList();
+            lines.Add(new TextLine(wrapped[0], Warning: true));
+            lines.AddRange(wrapped.Skip(1).Select(w => new TextLine("  " + w, Warning: true)));
             if (e.Line >= 1 && e.Line <= fileLines.Length)
             {
                 string source = fileLines[e.Line - 1].TrimEnd('\r').Replace('\t', ' ');

@@ -1,11 +1,15 @@
+using System.Globalization;
 using LevelDesign.Core.Analysis;
+using LevelDesign.Core.Model;
+using LevelDesign.Ui.Compute;
 
 namespace LevelDesign.Ui.Text;
 
 /// <summary>The 2χ matrix (qubit rows × resonator columns), the ZZ matrix and per-element transitions, in MHz.</summary>
 public static class ShiftsText
 {
-    public static IReadOnlyList<TextLine> Build(DerivedQuantities q, string where)
+    public static IReadOnlyList<TextLine> Build(DerivedQuantities q, string where, IReadOnlyList<ConvergenceEntry>? convergence = null, Device? device = null,
+        string? convergenceProblem = null)
     {
         var lines = new List<TextLine> { new($"At {where}; all in MHz", Heading: true) };
 
@@ -34,7 +38,28 @@ public static class ShiftsText
             foreach (var p in q.Purcell)
                 lines.Add(new TextLine($"  {p.Qubit} via {p.Resonator}: γ = {Numbers.MHz(p.RateGHz, 6)} MHz"));
         }
+        if (convergence is not null && device is not null) lines.AddRange(Convergence(convergence, device));
+        if (convergenceProblem is not null)
+        {
+            lines.Add(new TextLine(""));
+            lines.Add(new TextLine("Truncation check at the file's biases", Heading: true));
+            lines.Add(new TextLine("  not run: " + convergenceProblem, Warning: true));
+        }
         return lines;
+    }
+
+    /// <summary>Each key value's change when every cutoff is raised, in kHz; the other flagged values on one line.</summary>
+    private static IEnumerable<TextLine> Convergence(IReadOnlyList<ConvergenceEntry> entries, Device device)
+    {
+        yield return new TextLine("");
+        yield return new TextLine("Truncation check at the file's biases", Heading: true);
+        yield return new TextLine($"Δ = change when every cutoff is raised; ✗ when |Δ| > {TruncationConvergence.DefaultToleranceGHz * 1e6:0.#} kHz");
+        yield return new TextLine($"    {"key value",-17}{"MHz",11}{"Δ kHz",10}");
+        foreach (var e in ConvergenceSummary.Key(entries, device))
+            yield return new TextLine($"  {(e.Flagged ? "✗" : "✓")} {e.Quantity,-17}{Numbers.MHz(e.Value, 4),11}{Kilohertz(e.Change),10}", Warning: e.Flagged);
+        var others = entries.Where(e => e.Flagged && !ConvergenceSummary.IsKey(e.Quantity, device)).ToList();
+        if (others.Count > 0)
+            yield return new TextLine("  not counted (margin levels): " + string.Join(", ", others.Select(e => $"{e.Quantity} {Kilohertz(e.Change)} kHz")));
     }
 
     private static IEnumerable<TextLine> Matrix(IReadOnlyList<string> rows, IReadOnlyList<string> columns, IReadOnlyList<PairValue> values, bool symmetric)
@@ -56,6 +81,9 @@ public static class ShiftsText
             yield return new TextLine($"  {Cut(r),-8}" + string.Concat(cells));
         }
     }
+
+    private static string Kilohertz(double ghz) =>
+        double.IsFinite(ghz) ? (ghz * 1e6).ToString("+0.0;−0.0;0.0", CultureInfo.InvariantCulture) : "n/a";
 
     private static string Cut(string id) => id.Length <= 8 ? id : id[..7] + "…";
 }

@@ -1,4 +1,6 @@
 using System.Diagnostics;
+using LevelDesign.Core.Composite;
+using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Model;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Ui.Compute;
@@ -83,9 +85,9 @@ public sealed partial class MainWindow
     {
         var document = _session.Document;
         if (document is null) return;
-        var store = _session.Store;
         var (generation, token) = _sweepJobs.Begin();
         _sweeping = true;
+        _crossingsPending = false;
         int total = request.Axes.Aggregate(1, (n, a) => n * Math.Max(1, a.Count));
         _progressText = $"sweeping 0/{total}";
         _spectrum.Status = "⟳ " + _progressText;
@@ -100,12 +102,19 @@ public sealed partial class MainWindow
             UpdateStatus();
         });
         var clock = Stopwatch.StartNew();
+        var options = new SweepOptions { Solver = new DeviceSolver() };
         Task.Run(async () =>
         {
             try
             {
-                var result = await _sweeps.RunAsync(values => store.At(document, request.ValuesAt(values)), plan, progress, token).ConfigureAwait(false);
+                var result = await _sweeps.RunAsync(values => document.Resolve(request.Axes, values), plan, options, progress, token).ConfigureAwait(false);
                 _scheduler.Post(() => ApplySweep(generation, result, clock.Elapsed));
+                if (result.Completed && request.Axes.Count == 1)
+                {
+                    // Crossings are refined by extra solves between sweep points, so they follow the sweep.
+                    var crossings = CrossingFinder.Find(result, x => document.Resolve(request.Axes, [x]), CrossingOptionsFor(document, result), options.Solver, token);
+                    _scheduler.Post(() => ApplyCrossings(generation, result, crossings));
+                }
             }
             catch (OperationCanceledException) { }
             catch (Exception e) when (e is not OutOfMemoryException)
@@ -113,12 +122,69 @@ public sealed partial class MainWindow
                 _scheduler.Post(() =>
                 {
                     if (!_sweepJobs.IsCurrent(generation)) return;
-                    _sweeping = false;
+                    _sweeping = _crossingsPending = false;
                     _spectrum.Status = "sweep failed";
                     Say("✗ sweep failed: " + DescribeProblem(e), warning: true);
                 });
             }
         }, CancellationToken.None);
+    }
+
+    /// <summary>Crossings are located to this fraction of the sweep span (each refinement step is a full solve; a sweep step is ~1/60).</summary>
+    public const double CrossingToleranceOfSpan = 1e-3;
+
+    /// <summary>At most this many of the lowest states are paired in the crossing search (pairs grow as its square).</summary>
+    public const int MaxCrossingLevels = 12;
+
+    /// <summary>How the screen searches a finished one-axis sweep for crossings.</summary>
+    public static CrossingOptions CrossingOptionsFor(DeviceDocument document, SweepResult sweep)
+    {
+        var axis = sweep.Plan.Axes[0];
+        return new CrossingOptions
+        {
+            OperatingPoints = OperatingPointsOn(document, axis.Path),
+            Levels = CrossingLevels(sweep),
+            BiasTolerance = CrossingToleranceOfSpan * Math.Max(Math.Abs(axis.Stop - axis.Start), 1e-12),
+        };
+    }
+
+    /// <summary>
+    /// The lowest states at the first point up to the last one with at most two excitations (the states the
+    /// spectrum shows by default), capped at <see cref="MaxCrossingLevels"/>.
+    /// </summary>
+    private static int CrossingLevels(SweepResult sweep)
+    {
+        var first = sweep.Points[0].Spectrum;
+        int last = 0;
+        for (int k = 0; k < first.Count; k++)
+            if (first.LabelLevels(k).Sum() <= 2) last = k;
+        return Math.Clamp(last + 1, 2, MaxCrossingLevels);
+    }
+
+    /// <summary>
+    /// The file's named operating points as values of the swept axis: a point setting the swept bias directly,
+    /// or (when the axis is a parameter path such as qa.flux) the bias that targets that path.
+    /// </summary>
+    public static IReadOnlyList<double> OperatingPointsOn(DeviceDocument document, string axisPath)
+    {
+        var values = new List<double>();
+        foreach (var point in document.Points)
+            foreach (var (name, control) in point.BiasValues)
+            {
+                if (name == axisPath) values.Add(control);
+                else if (document.Bias(name) is { } bias && bias.Target == axisPath) values.Add(bias.ToParameter(control));
+            }
+        return values;
+    }
+
+    private void ApplyCrossings(int generation, SweepResult sweep, IReadOnlyList<Crossing> crossings)
+    {
+        if (!_sweepJobs.IsCurrent(generation) || !ReferenceEquals(sweep, _sweep)) return;
+        _crossingsPending = false;
+        _crossings = CrossingMark.From(crossings, sweep);
+        _spectrum.Show(_series, _crossings);
+        Say($"{crossings.Count} crossing{(crossings.Count == 1 ? "" : "s")} found" + (_crossings.Count > 0 ? " (F3 → Crossings; Enter goes to one)" : ""));
+        RefreshPage();
     }
 
     private static string Bar(int done, int total)
@@ -133,6 +199,8 @@ public sealed partial class MainWindow
         _sweeping = false;
         _sweepStale = false;
         _sweep = result;
+        _crossings = [];
+        _crossingsPending = result.Completed && result.Plan.Axes.Count == 1;
         RebuildSeries();
         int total = result.Plan.Axes.Aggregate(1, (n, a) => n * Math.Max(1, a.Count));
         _spectrum.Status = result.Completed ? "" : $"cancelled: {result.Points.Count}/{total} points";
@@ -146,7 +214,8 @@ public sealed partial class MainWindow
     {
         if (_sweep is null || _sweep.Points.Count == 0) { _series = null; _crossings = []; _spectrum.Show(null, []); return; }
         _series = SpectrumSeries.From(_sweep, _manifold);
-        _crossings = NearApproachFinder.Find(_series);
+        string axisPath = _series.AxisName;
+        _spectrum.FormatBias = v => AxisText(axisPath, v);
         _spectrum.ManifoldText = _manifold.Describe();
         _spectrum.Show(_series, _crossings);
         RefreshPage();
@@ -172,11 +241,15 @@ public sealed partial class MainWindow
         if (_cursorSnapshot is not null && _sweep is not null && _spectrum.CursorIndex < _sweep.Points.Count)
         {
             var p = _sweep.Points[_spectrum.CursorIndex];
-            string axes = string.Join(", ", _sweep.Plan.Axes.Select((a, i) => $"{a.Path} = {Numbers.Plain(p.AxisValues[i])}"));
+            string axes = string.Join(", ", _sweep.Plan.Axes.Select((a, i) => $"{a.Path} = {AxisText(a.Path, p.AxisValues[i])}"));
             return $"{axes} (point {p.Index + 1}/{_sweep.Points.Count}{(_sweepStale ? ", stale" : "")})";
         }
         return "the biases in the file";
     }
+
+    /// <summary>A bias in its control unit; plain axes as before (4 decimals), so "0.1000" reads as a flux.</summary>
+    private string AxisText(string path, double value) =>
+        _session.Document?.Bias(path) is { ControlKind: not LevelDesign.Core.Units.UnitKind.Dimensionless } ? BiasText.Format(_session.Document, path, value) : Numbers.Plain(value);
 
     private PointSnapshot? Shown => _cursorSnapshot ?? _snapshot;
 
@@ -201,20 +274,18 @@ public sealed partial class MainWindow
                 _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")] : StatesTableText.Build(shown.Spectrum, Where()));
                 break;
             case Page.Shifts:
-                _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")] : ShiftsText.Build(shown.Quantities, Where()));
+                _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")] : ShiftsText.Build(shown.Quantities, Where(), _snapshot?.Convergence, _snapshot?.Spectrum.Device, _snapshot?.ConvergenceProblem));
                 break;
             case Page.Help:
                 int width = Math.Max(40, Frame.Width - (_boardFrame.Visible ? LeftWidth : 0) - 4);
                 _page.SetLines(_showLimits ? HelpText.Limits(width) : HelpText.Keys(width));
                 break;
             case Page.Errors:
-                _page.SetLines(LoadErrorText.Build(_session.LoadErrors, _session.LoadedText));
+                _page.SetLines(LoadErrorText.Build(_session.LoadErrors, _session.LoadedText, Math.Max(40, Frame.Width - (_boardFrame.Visible ? LeftWidth : 0) - 6)));
                 break;
             case Page.Crossings:
-                _crossingList.SetLines(_crossings.Count == 0
-                    ? [new TextLine(_sweep is null ? "no sweep yet: F5 starts one" : "no near approaches inside the sweep")]
-                    : _crossings.Select((c, i) => new TextLine(
-                        $"{i + 1,2}. {c.LabelA} ↔ {c.LabelB}  gap {Numbers.MHz(c.GapGHz, 2)} MHz at {_series?.AxisName} = {Numbers.Plain(c.AxisValue)}")).ToList());
+                _crossingList.SetLines(CrossingsText.Build(_crossings, _sweep, _series?.AxisName, _crossingsPending,
+                    v => BiasText.Format(_session.Document, _series?.AxisName ?? "", v, digits: 4)));
                 break;
         }
         SetNeedsDraw();
@@ -222,9 +293,11 @@ public sealed partial class MainWindow
 
     private void JumpToCrossing(int index)
     {
-        if (index >= _crossings.Count) return;
-        _spectrum.SetCursor(_crossings[index].PointIndex);
+        int at = index - CrossingsText.HeaderLines;
+        if (at < 0 || at >= _crossings.Count) return;
+        var mark = _crossings[at];
+        _spectrum.SetCursor(mark.PointIndex);
         ShowPage(Page.Spectrum);
-        Say($"cursor at the crossing {_crossings[index].LabelA} ↔ {_crossings[index].LabelB}");
+        Say($"cursor at the sweep point nearest the crossing {mark.LabelA} ↔ {mark.LabelB} ({_series?.AxisName} = {BiasText.Format(_session.Document, _series?.AxisName ?? "", mark.Crossing.Bias)})");
     }
 }

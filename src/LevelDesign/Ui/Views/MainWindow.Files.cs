@@ -136,19 +136,19 @@ public sealed partial class MainWindow
                         TableExport.States(Shown!.Spectrum, Where(), path);
                         break;
                     case ".svg" or ".png":
-                        if (_series is null) return "run a sweep first (F5); the plot is the spectrum";
-                        if (_plots is null || !_plots.Supports(extension)) return "plot export needs src/LevelDesign.Plots, which is not in this build; use .csv or .json";
-                        _plots.Export(_series, $"{_session.Document?.Device.Name}: {_manifold.Describe()}", path);
+                        if (_sweep is null || _sweep.Plan.Axes.Count != 1) return "run a one-axis sweep first (F5); the plot is its spectrum";
+                        if (_plots is null || !_plots.Supports(extension)) return "plot export is not available in this build; use .csv or .json";
+                        _plots.Export(_sweep, _crossings.Select(c => c.Crossing).ToList(), $"{_session.Document?.Device.Name}: spectrum along {_sweep.Plan.Axes[0].Path}", path);
                         break;
                     default:
                         return "end the name with .csv, .json, .svg or .png";
                 }
             }
-            catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException or InvalidOperationException)
             {
                 return "could not write: " + e.Message;
             }
-            Say("exported " + path);
+            Say("exported " + path + (extension is ".svg" or ".png" && _crossingsPending ? " (crossings were still being searched, so none are marked)" : ""));
             return null;
         });
     }
@@ -157,52 +157,56 @@ public sealed partial class MainWindow
     {
         var document = _session.Document;
         if (document is null) { Say("no device is open", warning: true); return; }
-        string bias = document.Biases.FirstOrDefault()?.Name ?? "qa.flux";
+        var bias = document.Biases.FirstOrDefault();
+        string range = bias is null ? "qa.flux 0 to 0.5"
+            : $"{bias.Name} {BiasText.Format(document, bias.Name, bias.Offset)} to {BiasText.Format(document, bias.Name, bias.Offset + bias.Period / 2)}";
         string quantity = _snapshot?.Quantities.Named().Keys.FirstOrDefault() ?? "qa.f01";
-        _prompt.Ask("target: QUANTITY = VALUE by BIAS LOW HIGH", $"{quantity} = 5 GHz by {bias} 0 0.5", text =>
+        _prompt.Ask("target: QUANTITY = VALUE by BIAS LOW to HIGH", $"{quantity} = 5 GHz by {range}", text =>
         {
-            var request = ParseTarget(text, out string? error);
+            var request = TargetRequestParser.Parse(text, document, _snapshot?.Quantities.Named().Keys, out string? error);
             if (request is null) return error;
-            var store = _session.Store;
-            var at = document;
-            Say($"⟳ solving {request.Quantity} = {Numbers.GHz(request.GoalGHz)} GHz by {request.Bias}…");
+            Say($"⟳ solving {request.Quantity} = {Numbers.GHz(request.GoalGHz)} GHz by {request.Bias} ({TargetSearch.ScanPoints}-point scan, then Brent)…");
             Task.Run(async () =>
             {
-                TargetAnswer answer;
-                try { answer = await _targets.SolveAsync(v => store.At(at, new Dictionary<string, double> { [request.Bias] = v }), request, CancellationToken.None).ConfigureAwait(false); }
-                catch (Exception e) when (e is not OutOfMemoryException) { answer = new TargetAnswer(false, double.NaN, DescribeProblem(e)); }
-                _scheduler.Post(() => OfferTarget(request, answer));
+                try
+                {
+                    var roots = await _targets.FindAllAsync(document, request, CancellationToken.None).ConfigureAwait(false);
+                    _scheduler.Post(() => OfferRoots(document, request, roots));
+                }
+                catch (Exception e) when (e is not OutOfMemoryException)
+                {
+                    _scheduler.Post(() => Say("✗ target not solved: " + DescribeProblem(e), warning: true));
+                }
             });
             return null;
         });
     }
 
-    private void OfferTarget(TargetRequest request, TargetAnswer answer)
+    /// <summary>Lists every root; a digit applies that one to the device (an ordinary, undoable edit of the bias value).</summary>
+    private void OfferRoots(Core.DeviceFiles.DeviceDocument solvedOn, TargetRequest request, IReadOnlyList<Core.Sweeps.TargetRoot> roots)
     {
-        if (!answer.Found) { Say("✗ target not solved: " + answer.Message, warning: true); return; }
-        string field = _session.Document!.Biases.Any(b => b.Name == request.Bias)
-            ? $"biases.{request.Bias}.value"
-            : "elements." + request.Bias;
-        _prompt.Choose($"{request.Bias} = {Numbers.Plain(answer.BiasValue, 6)} gives {request.Quantity} = {Numbers.GHz(request.GoalGHz)} GHz.  a apply · Esc leave",
-            new Dictionary<char, Action>
-            {
-                ['a'] = () => Report(_session.SetValue(field, answer.BiasValue.ToString("R", System.Globalization.CultureInfo.InvariantCulture))),
-            });
+        string goal = $"{request.Quantity} = {Numbers.GHz(request.GoalGHz)} GHz";
+        if (roots.Count == 0) { Say($"✗ {goal} is not reached for {request.Bias} in the range (no sign change on the scan)", warning: true); return; }
+        if (!ReferenceEquals(solvedOn, _session.Document)) Say("the device changed while solving; the roots are for the device as it was");
+        var offers = new Dictionary<char, Action>();
+        var parts = new List<string>();
+        for (int i = 0; i < roots.Count && i < 9; i++)
+        {
+            var root = roots[i];
+            string at = BiasText.Format(solvedOn, request.Bias, root.Bias);
+            parts.Add($"{i + 1} {at}{(root.Refined ? "" : " (jump, not a root)")}");
+            offers[(char)('1' + i)] = () => ApplyRoot(request.Bias, root.Bias);
+        }
+        string more = roots.Count > 9 ? $" (+{roots.Count - 9} more)" : "";
+        _prompt.Choose($"{goal} at {request.Bias} = {string.Join(" · ", parts)}{more}.  digit applies · Esc leave", offers);
     }
 
-    private static TargetRequest? ParseTarget(string text, out string? error)
+    private void ApplyRoot(string biasOrPath, double value)
     {
-        error = "write QUANTITY = VALUE by BIAS LOW HIGH, e.g. qa.f01 = 5.2 GHz by qa_flux 0 0.5";
-        int equals = text.IndexOf('='), by = text.IndexOf(" by ", StringComparison.Ordinal);
-        if (equals < 0 || by < equals) return null;
-        string quantity = text[..equals].Trim();
-        if (!QuantityParser.TryParse(text[(equals + 1)..by].Trim(), UnitKind.Frequency, out double goal, out string unitError)) { error = unitError; return null; }
-        var rest = text[(by + 4)..].Split(' ', StringSplitOptions.RemoveEmptyEntries);
-        if (rest.Length != 3
-            || !double.TryParse(rest[1], System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out double low)
-            || !double.TryParse(rest[2], System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out double high))
-            return null;
-        error = null;
-        return new TargetRequest(quantity, goal, rest[0], low, high);
+        var document = _session.Document;
+        if (document is null) return;
+        var edit = TargetRequestParser.FieldFor(document, biasOrPath, value);
+        if (edit is null) { Say($"✗ {biasOrPath} is not a value written in the file", warning: true); return; }
+        Report(_session.SetValue(edit.Value.Field, edit.Value.Text));
     }
 }

@@ -1,4 +1,6 @@
+using LevelDesign.Core.Couplers;
 using LevelDesign.Core.Eigen;
+using LevelDesign.Core.Elements;
 using LevelDesign.Core.Model;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Ui.Compute;
@@ -19,7 +21,7 @@ namespace LevelDesign.Ui.Views;
 /// </summary>
 public sealed partial class MainWindow : Window
 {
-    private const int LeftWidth = 30;
+    private int LeftWidth => Frame.Width >= 110 ? 40 : 30;
     private static readonly TimeSpan ResweepPause = TimeSpan.FromMilliseconds(600);
 
     private readonly EditSession _session;
@@ -44,7 +46,8 @@ public sealed partial class MainWindow : Window
     private SweepRequest? _lastSweep;
     private SweepResult? _sweep;
     private SpectrumSeries? _series;
-    private IReadOnlyList<NearApproach> _crossings = [];
+    private IReadOnlyList<CrossingMark> _crossings = [];
+    private bool _crossingsPending;
     private Manifold _manifold = Manifold.UpToTwo;
     private object? _resweepTimer;
     private string _progressText = "";
@@ -54,7 +57,7 @@ public sealed partial class MainWindow : Window
         _session = session;
         _scheduler = scheduler;
         _sweeps = sweeps ?? new SweepService();
-        _targets = targets ?? new PendingTargetSolver();
+        _targets = targets ?? new TargetSearch();
         _plots = plots;
         if (Palette.Monochrome) SetScheme(Palette.MonochromeScheme());
 
@@ -76,11 +79,15 @@ public sealed partial class MainWindow : Window
         _plotFrame.Add(_spectrum);
 
         _crossingList = new RowList { Width = Dim.Fill(), Height = Dim.Fill(), Visible = false };
+        _crossingList.CanSelect = i => i >= CrossingsText.HeaderLines && i - CrossingsText.HeaderLines < _crossings.Count;
         _pageFrame.Add(_crossingList);
 
         _status = new StatusLine { X = 0, Y = Pos.AnchorEnd(3), Width = Dim.Fill() };
         _prompt = new PromptBar { X = 0, Y = Pos.AnchorEnd(6), Width = Dim.Fill() };
 
+        // Titles carry file names and ids with '_', which the framework would take as a hotkey marker.
+        foreach (View titled in new View[] { this, _boardFrame, _formFrame, _pageFrame, _plotFrame })
+            titled.HotKeySpecifier = (System.Text.Rune)0xFFFF;
         Add(_boardFrame, _formFrame, _pageFrame, _plotFrame, _status, _prompt, BuildKeyBar());
         BindBoardKeys();
         BindWindowKeys();
@@ -103,6 +110,9 @@ public sealed partial class MainWindow : Window
     }
 
     private readonly RowList _crossingList;
+    private string? _formItemId;
+    private Core.DeviceFiles.DeviceDocument? _computedDocument;
+    private BoardNodeKind _formItemKind;
 
     /// <summary>The question bar, for tests and for the app to answer start-up offers.</summary>
     public PromptBar Prompt => _prompt;
@@ -161,9 +171,10 @@ public sealed partial class MainWindow : Window
 
     private void ApplyLayout()
     {
-        // At small sizes help and errors take the whole width, so no line is cut.
-        bool left = !_wideOff && !(_pageShown is Page.Help or Page.Errors && Frame.Width < 120);
+        // Help and errors take the whole width, so no line is cut and long lists wrap less.
+        bool left = !_wideOff && _pageShown is not (Page.Help or Page.Errors);
         _boardFrame.Visible = _formFrame.Visible = left;
+        _boardFrame.Width = _formFrame.Width = LeftWidth;
         int x = left ? LeftWidth : 0;
         bool plotPage = _pageShown == Page.Spectrum;
         if (Wide && _pageShown is not (Page.Help or Page.Errors))
@@ -243,7 +254,7 @@ public sealed partial class MainWindow : Window
             return true;
         }
         if (_pageShown == Page.Help) { ShowPage(_pageBeforeHelp); return true; }
-        return false;
+        return true;   // Esc never quits (the framework's default quit key is Esc); Ctrl+Q does, through the guard
     }
 
     // ---- board and form -------------------------------------------------------------------------
@@ -270,8 +281,13 @@ public sealed partial class MainWindow : Window
             Heading: n.Kind is BoardNodeKind.Group or BoardNodeKind.Device)).ToList(), select);
         ShowFields();
         if (_pageShown == Page.Errors) ShowPage(Page.States);
-        StartPointCompute(document.Device);
-        if (_lastSweep is not null) ScheduleResweep();
+        // Saving changes only the unsaved mark: the same document needs no new computation.
+        if (!ReferenceEquals(document, _computedDocument))
+        {
+            _computedDocument = document;
+            StartPointCompute(document.Device);
+            if (_lastSweep is not null) ScheduleResweep();
+        }
         UpdateStatus();
     }
 
@@ -289,8 +305,11 @@ public sealed partial class MainWindow : Window
             _ => "Device",
         };
         int nameWidth = Math.Max(6, _fields.Select(f => f.Name.Length).DefaultIfEmpty(6).Max());
-        _form.SetLines(_fields.Select(f => new TextLine($"{f.Name.PadRight(nameWidth)} {(f.Editable ? "" : "·")}{f.ValueText}")).ToList(),
-            _fields.ToList().FindIndex(f => f.Editable) is int first and >= 0 ? Math.Max(first, Math.Min(_form.SelectedIndex, _fields.Count - 1)) : 0);
+        // Another item starts at its first editable row; the same item (after an edit) keeps the row.
+        int first = Math.Max(0, _fields.ToList().FindIndex(f => f.Editable));
+        int select = node.Id == _formItemId && node.Kind == _formItemKind ? Math.Min(_form.SelectedIndex, _fields.Count - 1) : first;
+        (_formItemId, _formItemKind) = (node.Id, node.Kind);
+        _form.SetLines(_fields.Select(f => new TextLine($"{f.Name.PadRight(nameWidth)} {(f.Editable ? "" : "·")}{f.ValueText}")).ToList(), Math.Max(0, select));
     }
 
     private void EditField()
@@ -299,10 +318,10 @@ public sealed partial class MainWindow : Window
         if (_form.SelectedIndex >= _fields.Count) return;
         var field = _fields[_form.SelectedIndex];
         if (!field.Editable) { Say($"{field.Name} is shown for reference; it is not edited here (· marks read-only rows)"); return; }
-        _prompt.Ask($"{field.FieldPath} =   ({field.Hint})", field.ValueText, text =>
+        _prompt.Ask($"{field.FieldPath} =   ({field.Hint})", field.StartText, text =>
         {
             var outcome = _session.SetValue(field.FieldPath!, text);
-            if (!outcome.Accepted) return $"{field.Name} stays {field.ValueText}: {outcome.Message}";
+            if (!outcome.Accepted) return $"{field.Name} stays {field.StartText}: {outcome.Message}";
             Say(outcome.Message + (_lastSweep is null ? "" : "; the sweep re-runs shortly"));
             return null;
         });
@@ -313,30 +332,34 @@ public sealed partial class MainWindow : Window
 
     private void AskAdd()
     {
-        var kinds = new Dictionary<char, (string Kind, bool Coupler)>
+        var kinds = new Dictionary<char, Action>
         {
-            ['t'] = ("transmon", false), ['u'] = ("tunable_transmon", false), ['f'] = ("fluxonium", false),
-            ['k'] = ("kerr", false), ['r'] = ("resonator", false),
-            ['c'] = ("capacitive", true), ['i'] = ("inductive", true), ['x'] = ("exchange", true),
+            ['t'] = () => AskNewElement(ElementKind.Transmon), ['u'] = () => AskNewElement(ElementKind.TunableTransmon),
+            ['f'] = () => AskNewElement(ElementKind.Fluxonium), ['k'] = () => AskNewElement(ElementKind.KerrOscillator),
+            ['r'] = () => AskNewElement(ElementKind.Resonator),
+            ['c'] = () => AskNewCoupler(CouplerKind.Capacitive), ['i'] = () => AskNewCoupler(CouplerKind.Inductive),
+            ['x'] = () => AskNewCoupler(CouplerKind.Exchange),
         };
-        _prompt.Choose("add: t transmon · u tunable transmon · f fluxonium · k kerr · r resonator │ couplers: c capacitive · i inductive · x exchange",
-            kinds.ToDictionary(k => k.Key, k => (Action)(() => AskNewId(k.Value.Kind, k.Value.Coupler))));
+        _prompt.Choose("add: t transmon · u tunable transmon · f fluxonium · k kerr · r resonator │ couplers: c capacitive · i inductive · x exchange", kinds);
     }
 
-    private void AskNewId(string kind, bool coupler)
-    {
-        if (!coupler)
+    private void AskNewElement(ElementKind kind) =>
+        _prompt.Ask($"id of the new {ElementKinds.Key(kind)} (default values, marked in the file)", "", id =>
         {
-            _prompt.Ask($"id of the new {kind}", "", id => Report(_session.AddElement(kind, id.Trim())) ? null : _prompt.Message);
-            return;
-        }
+            var outcome = _session.AddElement(kind, id.Trim());
+            Report(outcome);
+            return outcome.Accepted ? null : outcome.Message;
+        });
+
+    private void AskNewCoupler(CouplerKind kind)
+    {
         var ids = _session.Document?.Device.Elements.Select(e => e.Id).ToList() ?? [];
-        string suggestion = ids.Count >= 2 ? $"g_{ids[0]}_{ids[1]} {ids[0]} {ids[1]} 10 MHz" : "";
-        _prompt.Ask($"new {kind} coupler: ID ELEMENT_A ELEMENT_B STRENGTH", suggestion, text =>
+        string suggestion = ids.Count >= 2 ? $"{ids[0]}_{ids[1]} {ids[0]} {ids[1]} 10 MHz" : "";
+        _prompt.Ask($"new {kind.ToString().ToLowerInvariant()} coupler: ID ELEMENT_A ELEMENT_B g", suggestion, text =>
         {
             var w = text.Split(' ', 4, StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
-            if (w.Length < 4) return "write ID ELEMENT_A ELEMENT_B STRENGTH, e.g. g_qa_qb qa qb 10 MHz";
-            var outcome = _session.AddCoupler(kind, w[0], w[1], w[2], w[3]);
+            if (w.Length < 3) return "write ID ELEMENT_A ELEMENT_B g, e.g. qa_qb qa qb 10 MHz (g may be left out: 10 MHz, marked as a default)";
+            var outcome = _session.AddCoupler(kind, w[0], w[1], w[2], w.Length > 3 ? w[3] : null);
             Report(outcome);
             return outcome.Accepted ? null : outcome.Message;
         });
@@ -344,17 +367,19 @@ public sealed partial class MainWindow : Window
 
     private void AskRemove()
     {
-        string? id = SelectedItemId(BoardNodeKind.Element, BoardNodeKind.Coupler);
-        if (id is null) { Say("select an element or coupler to remove"); return; }
-        _prompt.Choose($"remove '{id}' (couplers linked to it go too)?  y remove · Esc keep",
+        string? id = SelectedItemId(BoardNodeKind.Element, BoardNodeKind.Coupler, BoardNodeKind.Bias);
+        if (id is null) { Say("select an element, coupler or bias to remove"); return; }
+        var also = _session.Document?.AlsoRemoved(id) ?? [];
+        string with = also.Count == 0 ? "" : $" with {string.Join(", ", also)}";
+        _prompt.Choose($"remove '{id}'{with}?  y remove · Esc keep",
             new Dictionary<char, Action> { ['y'] = () => Report(_session.Remove(id)) });
     }
 
     private void AskRename()
     {
-        string? id = SelectedItemId(BoardNodeKind.Element, BoardNodeKind.Coupler);
-        if (id is null) { Say("select an element or coupler to rename"); return; }
-        _prompt.Ask($"rename '{id}' to (couplers follow)", id, text =>
+        string? id = SelectedItemId(BoardNodeKind.Element, BoardNodeKind.Coupler, BoardNodeKind.Bias);
+        if (id is null) { Say("select an element, coupler or bias to rename"); return; }
+        _prompt.Ask($"rename '{id}' to (every reference follows)", id, text =>
         {
             var outcome = _session.Rename(id, text.Trim());
             Report(outcome);
@@ -399,7 +424,6 @@ public sealed partial class MainWindow : Window
     {
         InvalidDeviceException invalid => "the device is not valid: " + string.Join("; ", invalid.Problems),
         AggregateException { InnerException: { } inner } => DescribeProblem(inner),
-        NotImplementedException => "this needs a part of LevelDesign that is not built yet",
         _ => e.Message,
     };
 }

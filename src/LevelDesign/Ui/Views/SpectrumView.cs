@@ -18,7 +18,7 @@ public sealed class SpectrumView : View
     /// <summary>Only the narrowest crossings are marked, so the marks stay readable; all are listed on the crossings page.</summary>
     public const int MarkedCrossings = 8;
     private SpectrumSeries? _series;
-    private IReadOnlyList<NearApproach> _crossings = [];
+    private IReadOnlyList<CrossingMark> _crossings = [];
     private double? _low, _high;
 
     public SpectrumView()
@@ -51,12 +51,15 @@ public sealed class SpectrumView : View
 
     public int CursorIndex { get; private set; }
     public string ManifoldText { get; set; } = "";
+
+    /// <summary>Writes a bias value for the header and axis ends (e.g. "0.75 mA" for a coil current); plain numbers by default.</summary>
+    public Func<double, string> FormatBias { get; set; } = v => Numbers.Plain(v);
     public string Status { get; set; } = "no sweep yet: F5 starts one";
     public SpectrumSeries? Series => _series;
 
     public event Action<int>? CursorMoved;
 
-    public void Show(SpectrumSeries? series, IReadOnlyList<NearApproach> crossings)
+    public void Show(SpectrumSeries? series, IReadOnlyList<CrossingMark> crossings)
     {
         _series = series;
         _crossings = crossings;
@@ -117,7 +120,7 @@ public sealed class SpectrumView : View
         var series = _series;
         string header = series is null || series.Axis.Length == 0
             ? $"Spectrum — {Status}"
-            : $"cursor {series.AxisName} = {Numbers.Plain(series.Axis[CursorIndex])} │ {ManifoldText} │ {Status}";
+            : $"cursor {series.AxisName} = {FormatBias(series.Axis[CursorIndex])} │ {ManifoldText} │ {Status}";
         Move(0, 0);
         AddStr(RowList.Pad(header, width));
         int labelWidth = width >= 60 ? 12 : width >= 45 ? 8 : 0;
@@ -152,9 +155,9 @@ public sealed class SpectrumView : View
 
         int cursorColumn = Math.Clamp(DotX(series.Axis[CursorIndex]) / 2, 0, plotColumns - 1);
         var marks = new HashSet<(int, int)>();
-        foreach (var c in _crossings.Take(MarkedCrossings))
+        foreach (var c in _crossings.OrderBy(c => c.Crossing.GapGHz).Take(MarkedCrossings))
         {
-            int cx = DotX(c.AxisValue) / 2, cy = DotY(c.FrequencyGHz) / 4;
+            int cx = DotX(c.Crossing.Bias) / 2, cy = DotY(c.FrequencyGHz) / 4;
             if (cx >= 0 && cx < plotColumns && cy >= 0 && cy < plotRows) marks.Add((cx, cy));
         }
 
@@ -194,7 +197,7 @@ public sealed class SpectrumView : View
 
         Move(0, height - 2);
         AddStr(new string(' ', AxisWidth - 1) + "└" + new string('─', plotColumns));
-        string left = Numbers.Plain(xMin, 3), right = Numbers.Plain(xMax, 3);
+        string left = FormatBias(xMin), right = FormatBias(xMax);
         string axisLine = new string(' ', AxisWidth) + left;
         int rightAt = AxisWidth + plotColumns - right.Length;
         axisLine = axisLine.PadRight(Math.Max(axisLine.Length, rightAt)) [..Math.Max(axisLine.Length, rightAt)] + right;

@@ -1,0 +1,18 @@
+using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Sweeps;
+
+namespace LevelDesign.Ui.Compute;
+
+/// <summary>Core's <see cref="TargetSolver"/>: a labelled scan of the range, then Brent on every sign change.</summary>
+public sealed class TargetSearch : ITargetSolver
+{
+    /// <summary>Scan points over the range; two roots closer than one step apart can be missed.</summary>
+    public const int ScanPoints = 41;
+
+    public Task<IReadOnlyList<TargetRoot>> FindAllAsync(DeviceDocument document, TargetRequest request, CancellationToken cancellation)
+    {
+        var axis = new SweepAxis(request.Bias, request.Low, request.High, ScanPoints, []);
+        return TargetSolver.FindAllAsync(values => document.Resolve([axis], values), axis, request.Quantity, request.GoalGHz,
+            new SweepOptions(), cancellation: cancellation);
+    }
+}
