@@ -27,20 +27,20 @@ public static class CrossingFinder
         var x = points.Select(p => p.AxisValues[0]).ToArray();
         var energies = states.Select(s => points.Select(p => p.Spectrum.EnergyOf(s)).ToArray()).ToArray();
 
-        var candidates = new List<(int A, int B, double Lower, double Upper)>();
+        var candidates = new List<(int A, int B, double Lower, double Upper, bool SignChange)>();
         for (int a = 0; a < states.Length; a++)
             for (int b = a + 1; b < states.Length; b++)
             {
                 var d = energies[a].Zip(energies[b], (ea, eb) => ea - eb).ToArray();
                 for (int i = 0; i + 1 < d.Length; i++)
                     if (double.IsFinite(d[i]) && double.IsFinite(d[i + 1]) && Math.Sign(d[i]) != Math.Sign(d[i + 1]))
-                        candidates.Add((a, b, x[Math.Max(i - 1, 0)], x[Math.Min(i + 2, d.Length - 1)]));
+                        candidates.Add((a, b, x[Math.Max(i - 1, 0)], x[Math.Min(i + 2, d.Length - 1)], true));
                 for (int i = 1; i + 1 < d.Length; i++)
                 {
                     double g = Math.Abs(d[i]);
                     if (!(g < options.MaxGapGHz) || !(g <= Math.Abs(d[i - 1])) || !(g <= Math.Abs(d[i + 1]))) continue;
                     if (Math.Sign(d[i - 1]) != Math.Sign(d[i]) || Math.Sign(d[i + 1]) != Math.Sign(d[i])) continue;   // a sign change covers it
-                    candidates.Add((a, b, x[i - 1], x[i + 1]));
+                    candidates.Add((a, b, x[i - 1], x[i + 1], false));
                 }
             }
 
@@ -50,13 +50,17 @@ public static class CrossingFinder
         var parallel = new ParallelOptions { CancellationToken = cancellation, MaxDegreeOfParallelism = Environment.ProcessorCount };
         Parallel.For(0, candidates.Count, parallel, c =>
         {
-            var (a, b, lower, upper) = candidates[c];
-            found[c] = Refine(solver, resolve, states[a], states[b], lower, upper, count, options.BiasTolerance);
+            var (a, b, lower, upper, signChange) = candidates[c];
+            var crossing = Refine(solver, resolve, states[a], states[b], lower, upper, count, options.BiasTolerance);
+            // a dip in the separation of two states that stay pure is a level repulsion seen from afar, not a crossing
+            found[c] = signChange || crossing is null || crossing.Purity <= options.MaximumPurityOfNearApproach ? crossing : null;
         });
 
         double step = x.Length > 1 ? Math.Abs(x[1] - x[0]) : 0;
         var distinct = new List<Crossing>();
-        foreach (var crossing in found.OfType<Crossing>().OrderBy(c => c.GapGHz))
+        var kept = found.OfType<Crossing>()
+            .Where(c => (c.Refined || options.IncludeUnrefined) && !(c.PairWeight < options.MinimumPairWeight));
+        foreach (var crossing in kept.OrderBy(c => c.GapGHz))
             if (!distinct.Any(d => d.LabelA == crossing.LabelA && d.LabelB == crossing.LabelB && Math.Abs(d.Bias - crossing.Bias) <= 1.5 * step))
                 distinct.Add(crossing);
         return Rank(distinct, options.OperatingPoints);
@@ -74,18 +78,17 @@ public static class CrossingFinder
     private static Crossing? Refine(DeviceSolver solver, Func<double, Device> resolve, int[] stateA, int[] stateB,
         double lower, double upper, int count, double tolerance)
     {
-        (double Gap, double Purity) Separation(double bias)
+        (double Gap, double Purity, double PairWeight) Separation(double bias)
         {
             var s = solver.Solve(resolve(bias), count);
             int ia = s.Basis.IndexOf(stateA), ib = s.Basis.IndexOf(stateB);
-            if (ia < 0 || ib < 0) return (double.NaN, double.NaN);
+            if (ia < 0 || ib < 0) return (double.NaN, double.NaN, double.NaN);
             // the two dressed states holding most of the A/B character span the pair's subspace
-            var pair = Enumerable.Range(0, s.Count)
-                .OrderByDescending(k => s.Weights[k * s.Dimension + ia] + s.Weights[k * s.Dimension + ib])
-                .Take(2).ToArray();
-            if (pair.Length < 2) return (double.NaN, double.NaN);
+            double PairShare(int k) => s.Weights[k * s.Dimension + ia] + s.Weights[k * s.Dimension + ib];
+            var pair = Enumerable.Range(0, s.Count).OrderByDescending(PairShare).Take(2).ToArray();
+            if (pair.Length < 2) return (double.NaN, double.NaN, double.NaN);
             double purity = pair.Min(k => Math.Max(s.Weights[k * s.Dimension + ia], s.Weights[k * s.Dimension + ib]));
-            return (Math.Abs(s.Energies[pair[0]] - s.Energies[pair[1]]), purity);
+            return (Math.Abs(s.Energies[pair[0]] - s.Energies[pair[1]]), purity, pair.Min(PairShare));
         }
 
         // the squared gap of two coupled levels is a parabola in the bias near its minimum, so Brent's parabolic
@@ -94,9 +97,9 @@ public static class CrossingFinder
             lower, upper, tolerance);
         if (squared == double.MaxValue) return null;
         double gap = Math.Sqrt(squared);
-        var (_, purity) = Separation(bias);
+        var (_, purity, pairWeight) = Separation(bias);
         string label(int[] s) => "|" + string.Join(",", s) + "⟩";
         bool interior = bias > Math.Min(lower, upper) + 10 * tolerance && bias < Math.Max(lower, upper) - 10 * tolerance;
-        return new Crossing(label(stateA), label(stateB), stateA, stateB, bias, gap, purity, interior);
+        return new Crossing(label(stateA), label(stateB), stateA, stateB, bias, gap, purity, interior, PairWeight: pairWeight);
     }
 }

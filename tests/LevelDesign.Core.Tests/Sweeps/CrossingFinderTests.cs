@@ -45,4 +45,33 @@ public class CrossingFinderTests
             new CrossingOptions { Levels = 5, OperatingPoints = [4.9, 5.2] });
         Assert.All(crossings, c => Assert.Equal(0.1, c.DistanceToOperatingPoint!.Value, 1e-4));
     }
+
+    /// <summary>
+    /// A coupler level C swept through two fixed qubit levels A (5.0 GHz) and B (5.4 GHz), each exchange-coupled to C
+    /// with g = 0.02 GHz and not to each other. Each crossing with C is a two-level avoided crossing of gap 2g
+    /// (Jaynes–Cummings-type 2×2 secular problem; the other qubit, 0.4 GHz away, shifts it by about g²/0.4 GHz, so we
+    /// allow 3%); every reported crossing must be such a clean two-level one (pair weight ≥ 0.8).
+    /// </summary>
+    [Fact]
+    public async Task Crossings_through_a_sweeping_coupler_are_clean_two_level_gaps()
+    {
+        double g = 0.02;
+        var device = new LevelDesign.Core.Model.Device("abc",
+            [new LevelDesign.Core.Elements.KerrOscillator("a", 5.0, -0.3), new LevelDesign.Core.Elements.KerrOscillator("b", 5.4, -0.3),
+             new LevelDesign.Core.Elements.KerrOscillator("c", 4.6, -0.3)],
+            [LevelDesign.Core.Couplers.Coupler.Create("ac", LevelDesign.Core.Couplers.CouplerKind.Exchange, "a", "c", new LevelDesign.Core.Couplers.CouplingStrength.Coefficient(g)),
+             LevelDesign.Core.Couplers.Coupler.Create("bc", LevelDesign.Core.Couplers.CouplerKind.Exchange, "b", "c", new LevelDesign.Core.Couplers.CouplingStrength.Coefficient(g))],
+            new LevelDesign.Core.Model.Truncation { DefaultLevels = 2 });
+        var axis = new SweepAxis("c.frequency", 4.6, 5.8, 49, []);
+        var resolve = ParameterResolver.ForPaths(device, [axis]);
+        var sweep = await SweepRunner.RunAsync(resolve, new SweepPlan([axis], LabelMode.ByCharacter));
+        var crossings = CrossingFinder.Find(sweep, ParameterResolver.OneAxis(resolve), new CrossingOptions { Levels = 4 });
+        Assert.All(crossings, c => Assert.True(c.PairWeight >= 0.8, $"{c.LabelA}↔{c.LabelB} pair weight {c.PairWeight}"));
+        var withA = Assert.Single(crossings, c => c.StateA.Sum() == 1 && c.StateB.Sum() == 1 && (c.StateA[0] == 1 || c.StateB[0] == 1));
+        var withB = Assert.Single(crossings, c => c.StateA.Sum() == 1 && c.StateB.Sum() == 1 && (c.StateA[1] == 1 || c.StateB[1] == 1));
+        Assert.InRange(withA.GapGHz / (2 * g), 0.97, 1.03);
+        Assert.InRange(withB.GapGHz / (2 * g), 0.97, 1.03);
+        Assert.InRange(withA.Bias, 4.95, 5.05);
+        Assert.InRange(withB.Bias, 5.35, 5.45);
+    }
 }
