@@ -26,11 +26,18 @@ var plan = new SweepPlan([axis]);
         Console.WriteLine($"  {name} = {baseQ[name] * 1e6:F3} kHz; change when raised to 8 levels / 7 excitations: {(raisedQ[name] - baseQ[name]) * 1e6:F4} kHz");
 }
 
+// median of three runs: single runs on a 2-core machine vary by tens of percent
 double Seconds(Action action)
 {
-    var sw = Stopwatch.StartNew();
-    action();
-    return sw.Elapsed.TotalSeconds;
+    var times = new double[3];
+    for (int r = 0; r < times.Length; r++)
+    {
+        var sw = Stopwatch.StartNew();
+        action();
+        times[r] = sw.Elapsed.TotalSeconds;
+    }
+    Array.Sort(times);
+    return times[1];
 }
 
 SweepResult Sweep(SweepOptions options) => SweepRunner.RunAsync(resolve, plan, options).GetAwaiter().GetResult();
@@ -54,16 +61,16 @@ double sweep2 = Seconds(() => Sweep(new SweepOptions { Parallelism = 2 }));
     double solvedAt = 0;
     var progress = new TimedProgress(clock, t => solvedAt = t, axis.Count);
     SweepRunner.RunAsync(resolve, plan, new SweepOptions { Parallelism = 2 }, progress).GetAwaiter().GetResult();
-    Console.WriteLine($"  (2 chunks: points solved after {solvedAt:F3} s, labelled and finished at {clock.Elapsed.TotalSeconds:F3} s)");
+    Console.WriteLine($"  (2 workers: points solved after {solvedAt:F3} s, labelled and finished at {clock.Elapsed.TotalSeconds:F3} s)");
 }
 double sweep1 = Seconds(() => Sweep(new SweepOptions { Parallelism = 1 }));
 double sweepManaged2 = Seconds(() => Sweep(new SweepOptions { Parallelism = 2, Solver = new DeviceSolver(EigenSolvers.Managed) }));
 double peakAfterSweeps = Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0;
 double sweepDense2 = Seconds(() => Sweep(new SweepOptions { Parallelism = 2, Iterative = false }));
 Console.WriteLine("sweep, 201 points, labels + derived quantities, iterative (projected solves managed):");
-Console.WriteLine($"  2 chunks: {sweep2:F3} s   1 chunk: {sweep1:F3} s   parallel speed-up {sweep1 / sweep2:F2}x");
-Console.WriteLine($"  2 chunks, no native LAPACK anywhere (managed dense fallback): {sweepManaged2:F3} s");
-Console.WriteLine($"  2 chunks, same pipeline with dense {EigenSolvers.Active.Name} instead of iterative: {sweepDense2:F3} s");
+Console.WriteLine($"  2 workers: {sweep2:F3} s   1 worker: {sweep1:F3} s   parallel speed-up {sweep1 / sweep2:F2}x");
+Console.WriteLine($"  2 workers, no native LAPACK anywhere (managed dense fallback): {sweepManaged2:F3} s");
+Console.WriteLine($"  2 workers, same pipeline with dense {EigenSolvers.Active.Name} instead of iterative: {sweepDense2:F3} s");
 Console.WriteLine($"  peak working set after the sweeps: {peakAfterSweeps:F0} MB");
 
 // --- the same matrices, dense
@@ -85,7 +92,7 @@ double denseNative = EigenSolvers.Native is IEigenSolver native ? EigenOnly(nati
 const int managedSample = 10;   // the plain managed solve is slow: time a sample and scale to 201
 double denseManaged = EigenOnly(EigenSolvers.Managed, problems.Where((_, i) => i % 20 == 0).Take(managedSample)) * axis.Count / managedSample;
 Console.WriteLine($"same 201 matrices, lowest {k} of {n}, eigen solve only, serial:");
-Console.WriteLine($"  dense native LAPACK: {denseNative:F3} s ({denseNative / axis.Count * 1e3:F1} ms/point)   ratio to iterative sweep (2 chunks): {denseNative / sweep2:F1}x");
+Console.WriteLine($"  dense native LAPACK: {denseNative:F3} s ({denseNative / axis.Count * 1e3:F1} ms/point)   ratio to iterative sweep (2 workers): {denseNative / sweep2:F1}x");
 Console.WriteLine($"  dense managed (MathNet), scaled from {managedSample}: {denseManaged:F3} s   ratio: {denseManaged / sweep2:F1}x");
 Console.WriteLine($"  preparing the 201 problems alone (bare solves cached, basis, assembly): {prepare:F3} s");
 

@@ -12,7 +12,7 @@ public sealed record SweepOptions
     /// <summary>Shared solver (and bare-spectrum cache); null makes one with the active eigensolver.</summary>
     public DeviceSolver? Solver { get; init; }
 
-    /// <summary>Contiguous chunks computed at once; default all cores.</summary>
+    /// <summary>Points computed at once (workers walking contiguous stretches); default all cores.</summary>
     public int Parallelism { get; init; } = Environment.ProcessorCount;
 
     /// <summary>Use the warm-started iterative eigensolver on real matrices (dense fallback when it does not converge).</summary>

@@ -6,8 +6,8 @@ namespace LevelDesign.Core.Sweeps;
 
 /// <summary>
 /// Runs a sweep in parallel on all cores, cancellable; points computed before cancellation are kept.
-/// The sweep is split into contiguous chunks, one per core, each solved in order so every point is
-/// warm-started from its neighbour; one <see cref="DeviceSolver"/> (and bare-spectrum cache) is shared.
+/// Workers walk contiguous stretches (two per stretch, from both ends) so every point is warm-started from its
+/// neighbour; one <see cref="DeviceSolver"/> (and bare-spectrum cache) is shared.
 /// Labels are then carried point to point (see <see cref="LabelTracker"/>) and derived quantities computed.
 /// </summary>
 public static class SweepRunner
@@ -26,23 +26,32 @@ public static class SweepRunner
         int total = axisValues.Length;
         var solver = options.CreateSolver();
         var solved = new SolvedPoint?[total];
-        int chunks = Math.Clamp(options.Parallelism, 1, total);
+        int workers = Math.Clamp(options.Parallelism, 1, total);
         int done = 0;
 
-        var tasks = new Task[chunks];
-        for (int c = 0; c < chunks; c++)
+        // Workers come in pairs on contiguous segments: one walks forward from the segment's start, the other
+        // backward from its end, each warm-started by the point it solved last, and they stop where they meet.
+        // Cost varies a lot along a sweep (crossings need more iterations), so fixed halves would leave one core
+        // idle; meeting wherever the work balances keeps both busy with only one cold start per worker.
+        int segments = (workers + 1) / 2;
+        var tasks = new List<Task>();
+        for (int g = 0; g < segments; g++)
         {
-            int start = (int)((long)c * total / chunks), end = (int)((long)(c + 1) * total / chunks);
-            tasks[c] = Task.Run(() =>
+            int start = (int)((long)g * total / segments), end = (int)((long)(g + 1) * total / segments);
+            var segment = new SegmentCursor(start, end - 1);
+            bool paired = 2 * g + 1 < workers;
+            tasks.Add(Task.Run(() => Walk(segment, forward: true)));
+            if (paired) tasks.Add(Task.Run(() => Walk(segment, forward: false)));
+        }
+
+        void Walk(SegmentCursor segment, bool forward)
+        {
+            var pointSolver = new PointSolver(solver, options);
+            while (!cancellation.IsCancellationRequested && segment.TryTake(forward, out int i))
             {
-                var pointSolver = new PointSolver(solver, options);
-                for (int i = start; i < end; i++)
-                {
-                    if (cancellation.IsCancellationRequested) return;
-                    solved[i] = pointSolver.Solve(resolve(axisValues[i]), plan.Levels);
-                    progress?.Report(new SweepProgress(Interlocked.Increment(ref done), total));
-                }
-            });
+                solved[i] = pointSolver.Solve(resolve(axisValues[i]), plan.Levels);
+                progress?.Report(new SweepProgress(Interlocked.Increment(ref done), total));
+            }
         }
         await Task.WhenAll(tasks).ConfigureAwait(false);
 
