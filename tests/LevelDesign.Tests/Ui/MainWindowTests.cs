@@ -277,6 +277,7 @@ public class MainWindowTests
         Shows(screen, "Keys");
         Shows(screen, "Ctrl+S");
         Shows(screen, "Ctrl+Z / Ctrl+Y");
+        Shows(screen, "F9 fit");
         ui.Press(new Key('l'));
         Shows(ui.Screen, "Limits of the model");
         ui.Press(Key.F1);

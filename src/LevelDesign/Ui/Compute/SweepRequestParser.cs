@@ -1,16 +1,17 @@
 using System.Globalization;
 using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Units;
 
 namespace LevelDesign.Ui.Compute;
 
 /// <summary>
 /// Reads what the user typed in the sweep prompt: either the name of a sweep kept in the file, or
-/// "BIAS START STOP POINTS" optionally followed by "link PATH SCALE SHIFT" (repeatable) for a linked set.
+/// "BIAS START STOP POINTS" (START and STOP with units as the file writes them, e.g. "0.3 mA", or plain numbers in SI base units) optionally followed by "link PATH SCALE SHIFT" (repeatable) for a linked set.
 /// BIAS is a bias name or a parameter path such as qa.flux.
 /// </summary>
 public static class SweepRequestParser
 {
-    public const string Syntax = "BIAS START STOP POINTS [link PATH SCALE SHIFT]…  or a sweep name from the file";
+    public const string Syntax = "BIAS START STOP POINTS (e.g. qc_flux 0.3 mA 0.6 mA 41) [link PATH SCALE SHIFT]…  or a sweep name from the file";
 
     public static SweepRequest? Parse(string text, DeviceDocument document, out string? error)
     {
@@ -24,14 +25,18 @@ public static class SweepRequestParser
             return new SweepRequest(text.Trim(), named.Axes);
         }
         if (words.Length < 4) { error = "type " + Syntax; return null; }
+        // START and STOP may carry units as the file writes them ("0.3 mA" or "0.3mA"); a plain number is in SI base units
         string path = words[0];
         bool known = document.Biases.Any(b => b.Name == path) || IsParameterPath(document, path);
         if (!known) { error = $"'{path}' is neither a bias ({string.Join(", ", document.Biases.Select(b => b.Name))}) nor a parameter path like qa.flux"; return null; }
-        if (!Number(words[1], out double start) || !Number(words[2], out double stop)) { error = "START and STOP must be numbers"; return null; }
-        if (!int.TryParse(words[3], NumberStyles.Integer, CultureInfo.InvariantCulture, out int count) || count < 2 || count > 2001)
+        int next = 1;
+        if (!Value(document, path, words, ref next, out double start, out error)) { error = "START: " + error; return null; }
+        if (!Value(document, path, words, ref next, out double stop, out error)) { error = "STOP: " + error; return null; }
+        error = null;
+        if (next >= words.Length || !int.TryParse(words[next], NumberStyles.Integer, CultureInfo.InvariantCulture, out int count) || count < 2 || count > 2001)
         { error = "POINTS must be a whole number from 2 to 2001"; return null; }
         var links = new List<LinkedPath>();
-        for (int i = 4; i < words.Length; i += 4)
+        for (int i = next + 1; i < words.Length; i += 4)
         {
             if (words[i] != "link" || i + 3 >= words.Length || !Number(words[i + 2], out double scale) || !Number(words[i + 3], out double shift))
             { error = "a linked path is written: link PATH SCALE SHIFT"; return null; }
@@ -58,6 +63,26 @@ public static class SweepRequestParser
         try { document.Device.GetParameter(path); return true; }
         catch (ArgumentException) { return false; }
     }
+
+    /// <summary>
+    /// One START or STOP at words[next] (with the following word when that is a unit): a plain number as it is,
+    /// otherwise read in the bias's control unit kind, or the parameter's kind for a path such as qa.flux.
+    /// </summary>
+    private static bool Value(DeviceDocument document, string path, string[] words, ref int next, out double value, out string error)
+    {
+        value = 0;
+        error = "missing value";
+        if (next >= words.Length) return false;
+        string text = words[next++];
+        if (next < words.Length && IsUnitWord(words[next])) text += " " + words[next++];
+        if (Number(text, out value)) { error = ""; return true; }
+        bool ok = document.Bias(path) is { } bias
+            ? bias.TryParseControl(text, out value, out error)
+            : QuantityParser.TryParse(text, ParameterKinds.Of(path[(path.LastIndexOf('.') + 1)..]), out value, out error);
+        return ok;
+    }
+
+    private static bool IsUnitWord(string word) => word != "link" && !(char.IsAsciiDigit(word[0]) || word[0] is '+' or '-' or '.');
 
     private static bool Number(string text, out double value) =>
         double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out value) && double.IsFinite(value);

@@ -112,6 +112,19 @@ public sealed class EditSession
     public EditOutcome SetValue(string fieldPath, string text) =>
         Apply(d => (d.WithValue(fieldPath, text.Trim(), out var e), e), $"{fieldPath} = {text.Trim()}");
 
+    /// <summary>Several values as ONE edit (one undo step), e.g. the fitted parameters; refused whole if any value is.</summary>
+    public EditOutcome SetValues(IReadOnlyList<(string Field, string Text)> values, string done) =>
+        Apply(d =>
+        {
+            var next = d;
+            foreach (var (field, text) in values)
+            {
+                next = next.WithValue(field, text.Trim(), out var e);
+                if (e is not null) return (d, e);
+            }
+            return (next, null);
+        }, done);
+
     public EditOutcome AddElement(ElementKind kind, string id) =>
         Apply(d => (d.WithElement(id, kind, out var e), e), $"added {ElementKinds.Key(kind)} '{id}' with default values");
 

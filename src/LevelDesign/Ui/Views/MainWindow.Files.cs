@@ -161,8 +161,9 @@ public sealed partial class MainWindow
         string range = bias is null ? "qa.flux 0 to 0.5"
             : $"{bias.Name} {BiasText.Format(document, bias.Name, bias.Offset)} to {BiasText.Format(document, bias.Name, bias.Offset + bias.Period / 2)}";
         string quantity = _snapshot?.Quantities.Named().Keys.FirstOrDefault() ?? "qa.f01";
-        _prompt.Ask("target: QUANTITY = VALUE by BIAS LOW to HIGH", $"{quantity} = 5 GHz by {range}", text =>
+        _prompt.Ask("target: QUANTITY = VALUE by BIAS LOW to HIGH  ·  or " + FitRequestParser.Syntax, $"{quantity} = 5 GHz by {range}", text =>
         {
+            if (FitRequestParser.IsFit(text)) return StartFit(text, document);
             var request = TargetRequestParser.Parse(text, document, _snapshot?.Quantities.Named().Keys, out string? error);
             if (request is null) return error;
             Say($"⟳ solving {request.Quantity} = {Numbers.GHz(request.GoalGHz)} GHz by {request.Bias} ({TargetSearch.ScanPoints}-point scan, then Brent)…");
@@ -199,6 +200,41 @@ public sealed partial class MainWindow
         }
         string more = roots.Count > 9 ? $" (+{roots.Count - 9} more)" : "";
         _prompt.Choose($"{goal} at {request.Bias} = {string.Join(" · ", parts)}{more}.  digit applies · Esc leave", offers);
+    }
+
+    private string? StartFit(string text, Core.DeviceFiles.DeviceDocument document)
+    {
+        if (_snapshot is null) return "wait until the device has been computed once (the quantity names come from it)";
+        var request = FitRequestParser.Parse(text, document, _snapshot.Quantities.Named().Keys.ToArray(), out string? error);
+        if (request is null) return error;
+        Say($"⟳ fitting {string.Join(", ", request.Parameters.Select(p => p.Path))} to {request.Targets.Count} target(s) (least squares, full solves)…");
+        Task.Run(() =>
+        {
+            try
+            {
+                var result = Core.Sweeps.ParameterFit.Fit(document.Device, request.Parameters, request.Targets);
+                _scheduler.Post(() => OfferFit(document, request, result));
+            }
+            catch (Exception e) when (e is not OutOfMemoryException)
+            {
+                _scheduler.Post(() => Say("✗ fit failed: " + DescribeProblem(e), warning: true));
+            }
+        });
+        return null;
+    }
+
+    /// <summary>Fitted values in the file's units and each target's residual; 'a' writes all values as one undoable edit.</summary>
+    private void OfferFit(Core.DeviceFiles.DeviceDocument fittedOn, FitRequest request, Core.Sweeps.FitResult result)
+    {
+        if (!ReferenceEquals(fittedOn, _session.Document)) Say("the device changed while fitting; the values are for the device as it was");
+        string values = string.Join(" · ", request.Fields.Select(f => $"{f.DevicePath} = {f.Display(result.Values[f.DevicePath])}"));
+        string residuals = string.Join(" · ", result.Residuals.Select(r =>
+            $"{r.Target.Quantity} off by {QuantityFormatter.Format(r.Residual, UnitKind.Frequency)}"));
+        string bounds = result.AtBounds.Count > 0 ? $" · at a bound: {string.Join(", ", result.AtBounds)}" : "";
+        string how = result.Converged ? $"fit ({result.Iterations} steps)" : $"fit NOT converged ({result.Message})";
+        var edits = request.Fields.Select(f => (f.FieldPath!, f.Format(result.Values[f.DevicePath]))).ToList();
+        _prompt.Choose($"{how}: {values}; {residuals}{bounds}.  a applies · Esc leave",
+            new Dictionary<char, Action> { ['a'] = () => Report(_session.SetValues(edits, "fit applied: " + string.Join(", ", edits.Select(e => $"{e.Item1} = {e.Item2}")))) });
     }
 
     private void ApplyRoot(string biasOrPath, double value)
