@@ -59,7 +59,9 @@ public static class PlotCommand
         int shown = levels ?? (manifold is null ? Math.Min(judged, 12) : judged);
         var plot = SpectrumPlot.Build(result, PlotManifold.Crossings(crossings, manifold), shown,
             title: $"{document.Device.Name}: spectrum along {setup.Axes[0].Path} ({AxisUnitText.Of(document, setup.Axes[0].Path)}), labels by {(mode == LabelMode.ByCharacter ? "character" : "order")}"
-                   + (manifold is int m ? $", {m}-excitation manifold" : ""));
+                   + (manifold is int m ? $", {m}-excitation manifold" : "")
+                   // the legend writes states as level tuples; say which element each position is
+                   + $"; states |{string.Join(",", document.Device.Elements.Select(e => e.Id))}⟩");
         PlotManifold.Apply(plot, manifold);
         // the caption from the axis name alone cannot know a bias's control unit; say it, and what the bias moves
         plot.XLabel(XCaption(document, setup.Axes[0]));
