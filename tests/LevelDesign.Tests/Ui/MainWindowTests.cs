@@ -268,6 +268,46 @@ public class MainWindowTests
     }
 
     [Fact]
+    public void A_bad_value_is_fixed_in_place_and_the_fix_saved()
+    {
+        string folder = Directory.CreateTempSubdirectory("ld-fix-").FullName;
+        try
+        {
+            string path = Path.Combine(folder, "wrong_unit_ec.toml");
+            File.Copy(Path.Combine(RepositoryPaths.Malformed, "wrong_unit_ec.toml"), path);
+            string original = File.ReadAllText(path);
+            using var ui = new UiHarness(open: s => s.OpenFile(path));
+            Assert.Equal(Page.Errors, ui.Window.CurrentPage);
+            Shows(ui.Screen, "F2 fixes");
+            ui.Press(Key.F2);
+            Shows(ui.Screen, "fix line 7 [elements.qa.ec]");
+            ui.Replace("fF");            // still a capacitance: refused, the errors stay listed
+            ui.Press(Key.Enter);
+            Assert.Null(ui.Session.Document);
+            Assert.Equal(original, File.ReadAllText(path));
+            ui.Press(Key.Esc);
+            ui.Press(Key.F2);
+            ui.Replace("230 MHz");
+            ui.Press(Key.Enter);
+            ui.WaitIdle();
+            Assert.NotNull(ui.Session.Document);
+            Assert.Equal(0.23, ui.Session.Document!.Device.GetParameter("qa.ec"), 12);
+            Shows(ui.Screen, "● unsaved");
+            Assert.Equal(original, File.ReadAllText(path));   // nothing written before a save
+            ui.Press(Key.S.WithCtrl);
+            ui.WaitIdle();
+            var before = original.Split('\n');
+            var after = File.ReadAllText(path).Split('\n');
+            Assert.Equal(before.Length, after.Length);
+            var changed = Enumerable.Range(0, before.Length).Where(i => before[i] != after[i]).ToArray();
+            Assert.Equal([6], changed);
+            Assert.Equal("ec = \"230 MHz\"", after[6].Trim());
+            Assert.Equal(original, File.ReadAllText(path + ".bak"));
+        }
+        finally { Directory.Delete(folder, recursive: true); }
+    }
+
+    [Fact]
     public void Help_lists_keys_and_reaches_the_limits_of_the_model()
     {
         using var ui = new UiHarness(120, 40);

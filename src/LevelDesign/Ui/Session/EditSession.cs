@@ -63,6 +63,34 @@ public sealed class EditSession
         Changed?.Invoke();
     }
 
+    /// <summary>The first load error that points at a value in the file, which can be fixed in place.</summary>
+    public DeviceFileError? FixableError =>
+        LoadedText is null ? null : LoadErrors.FirstOrDefault(e => e.Line > 0 && e.Column > 0 && RawValueFix.ValueAt(LoadedText, e.Line, e.Column) is not null);
+
+    /// <summary>
+    /// Fixes a file that did not load: replaces the value at the error's place in its text and reads it again. On
+    /// success the device opens with the fix unsaved (Ctrl+S writes it, keeping the broken file as .bak); otherwise
+    /// the remaining errors are listed against the fixed text. The file on disk is never touched here.
+    /// </summary>
+    public EditOutcome FixLoadError(DeviceFileError error, string value)
+    {
+        if (LoadedText is null || Path is null) return EditOutcome.Refused("no file text to fix");
+        string? text = RawValueFix.Replace(LoadedText, error.Line, error.Column, value, out string? problem);
+        if (text is null) return EditOutcome.Refused(problem!);
+        var result = DeviceDocument.Parse(text, Path);
+        LoadedText = text;
+        if (!result.Ok)
+        {
+            LoadErrors = result.Errors;
+            Changed?.Invoke();
+            return EditOutcome.Refused($"{result.Errors.Count} error(s) remain");
+        }
+        LoadErrors = [];
+        Document = result.Document;   // _saved stays unset: the fix is an unsaved change
+        Changed?.Invoke();
+        return EditOutcome.Ok($"the file now loads; Ctrl+S saves the fix ({System.IO.Path.GetFileName(Path)}.bak keeps the old text)");
+    }
+
     public void OpenDemo()
     {
         Reset(null);

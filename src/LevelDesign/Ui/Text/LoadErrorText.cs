@@ -12,7 +12,7 @@ public static class LoadErrorText
         var lines = new List<TextLine>
         {
             new($"⚠ The device file has {errors.Count} error(s); nothing was computed.", Warning: true, Heading: true),
-            new("Fix the file and press Ctrl+L to reload, or Ctrl+Q to quit."),
+            new("F2 fixes the first value listed here (until the file loads); or fix the file and press Ctrl+L; Ctrl+Q quits."),
             new(""),
         };
         foreach (var e in errors)

@@ -1,3 +1,4 @@
+using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Couplers;
 using LevelDesign.Core.Eigen;
 using LevelDesign.Core.Elements;
@@ -314,6 +315,7 @@ public sealed partial class MainWindow : Window
 
     private void EditField()
     {
+        if (_session.Document is null && _session.FixableError is DeviceFileError error) { AskFix(error); return; }
         if (_session.Document is null) { Say("no device is open", warning: true); return; }
         if (_form.SelectedIndex >= _fields.Count) return;
         var field = _fields[_form.SelectedIndex];
@@ -323,6 +325,19 @@ public sealed partial class MainWindow : Window
             var outcome = _session.SetValue(field.FieldPath!, text);
             if (!outcome.Accepted) return $"{field.Name} stays {field.StartText}: {outcome.Message}";
             Say(outcome.Message + (_lastSweep is null ? "" : "; the sweep re-runs shortly"));
+            return null;
+        });
+    }
+
+    /// <summary>A file that did not load: offer the first error's value for fixing, then the next, until it loads.</summary>
+    private void AskFix(DeviceFileError error)
+    {
+        string current = RawValueFix.ValueAt(_session.LoadedText!, error.Line, error.Column) ?? "";
+        _prompt.Ask($"fix line {error.Line} [{error.Field}]: {error.Message}", current, text =>
+        {
+            var outcome = _session.FixLoadError(error, text);
+            Say(outcome.Message, warning: !outcome.Accepted);
+            if (!outcome.Accepted && _session.FixableError is DeviceFileError next) _scheduler.Post(() => AskFix(next));
             return null;
         });
     }
