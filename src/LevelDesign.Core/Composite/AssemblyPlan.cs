@@ -28,19 +28,22 @@ internal sealed class AssemblyPlan
     public HermitianPattern Pattern { get; }
 
     /// <summary>The operators a coupler multiplies: X (op_A, or op_A† for exchange), Y = op_B, and whether h.c. is added.</summary>
-    public static (OperatorMatrix X, OperatorMatrix Y, bool AddConjugate) Operators(ResolvedCoupler coupler)
+    public static CouplerTerm[] Operators(IReadOnlyList<ResolvedCoupler> couplers) => couplers.Select(Operators).ToArray();
+
+    private static CouplerTerm Operators(ResolvedCoupler coupler)
     {
-        if (coupler.Form == CouplerForm.Exchange) return (coupler.OperatorA.Adjoint(), coupler.OperatorB, true);
-        return (coupler.OperatorA, coupler.OperatorB, !(coupler.OperatorA.IsHermitian() && coupler.OperatorB.IsHermitian()));
+        if (coupler.Form == CouplerForm.Exchange) return new(coupler.OperatorA.Adjoint(), coupler.OperatorB, true);
+        return new(coupler.OperatorA, coupler.OperatorB, !(coupler.OperatorA.IsHermitian() && coupler.OperatorB.IsHermitian()));
     }
 
     /// <summary>A key that is equal exactly when two points can share a plan on the same basis structure.</summary>
-    public static string ShapeKey(IReadOnlyList<ResolvedCoupler> couplers)
+    public static string ShapeKey(IReadOnlyList<ResolvedCoupler> couplers, CouplerTerm[] terms)
     {
         var key = new StringBuilder();
-        foreach (var coupler in couplers)
+        for (int c = 0; c < couplers.Count; c++)
         {
-            var (x, y, conjugate) = Operators(coupler);
+            var coupler = couplers[c];
+            var (x, y, conjugate) = terms[c];
             key.Append(coupler.IndexA).Append(',').Append(coupler.IndexB).Append(conjugate ? 'c' : 'h');
             AppendMask(key, x);
             AppendMask(key, y);
@@ -67,7 +70,7 @@ internal sealed class AssemblyPlan
         key.Append('|');
     }
 
-    public static AssemblyPlan Build(BasisStructure basis, IReadOnlyList<ResolvedCoupler> couplers)
+    public static AssemblyPlan Build(BasisStructure basis, IReadOnlyList<ResolvedCoupler> couplers, CouplerTerm[] terms)
     {
         int n = basis.Dimension;
         var slotOf = new Dictionary<long, int>();
@@ -90,7 +93,7 @@ internal sealed class AssemblyPlan
         for (int c = 0; c < couplers.Count; c++)
         {
             var coupler = couplers[c];
-            var (x, y, addConjugate) = Operators(coupler);
+            var (x, y, addConjugate) = terms[c];
             double xScale = x.MaxAbs(), yScale = y.MaxAbs();
             var slots = new List<int>();
             var ia = new List<short>(); var la = new List<short>(); var ib = new List<short>(); var lb = new List<short>();
@@ -130,13 +133,13 @@ internal sealed class AssemblyPlan
     }
 
     /// <summary>Fills in one point's values: bare energies on the diagonal plus every coupler term.</summary>
-    public SparseHermitian Evaluate(double[] bareEnergies, IReadOnlyList<ResolvedCoupler> couplers)
+    public SparseHermitian Evaluate(double[] bareEnergies, IReadOnlyList<ResolvedCoupler> couplers, CouplerTerm[] terms)
     {
         var values = new Complex[Pattern.SlotCount];
         for (int s = 0; s < bareEnergies.Length; s++) values[s] = bareEnergies[s];
         for (int c = 0; c < couplers.Count; c++)
         {
-            var (x, y, _) = Operators(couplers[c]);
+            var (x, y, _) = terms[c];
             double k = couplers[c].CoefficientGHz;
             var t = _terms[c];
             for (int p = 0; p < t.Slot.Length; p++)

@@ -9,12 +9,12 @@ internal sealed class AssemblyPlanCache
 {
     private readonly ConditionalWeakTable<BasisStructure, ConcurrentDictionary<string, AssemblyPlan>> _plans = new();
 
-    public AssemblyPlan Get(BasisStructure structure, IReadOnlyList<ResolvedCoupler> couplers)
+    public AssemblyPlan Get(BasisStructure structure, IReadOnlyList<ResolvedCoupler> couplers, CouplerTerm[] terms)
     {
         var perStructure = _plans.GetOrCreateValue(structure);
-        string key = AssemblyPlan.ShapeKey(couplers);
+        string key = AssemblyPlan.ShapeKey(couplers, terms);
         if (perStructure.TryGetValue(key, out var plan)) return plan;
-        plan = AssemblyPlan.Build(structure, couplers);
+        plan = AssemblyPlan.Build(structure, couplers, terms);
         if (perStructure.Count >= 64) perStructure.Clear();
         perStructure[key] = plan;
         return plan;

@@ -10,9 +10,15 @@ namespace LevelDesign.Core.Composite;
 /// </summary>
 public static class HamiltonianAssembler
 {
-    public static SparseHermitian Assemble(CompositeBasis basis, IReadOnlyList<ResolvedCoupler> couplers) =>
-        AssemblyPlan.Build(basis.Structure, couplers).Evaluate(basis.BareEnergies, couplers);
+    public static SparseHermitian Assemble(CompositeBasis basis, IReadOnlyList<ResolvedCoupler> couplers)
+    {
+        var terms = AssemblyPlan.Operators(couplers);
+        return AssemblyPlan.Build(basis.Structure, couplers, terms).Evaluate(basis.BareEnergies, couplers, terms);
+    }
 
-    internal static SparseHermitian Assemble(CompositeBasis basis, IReadOnlyList<ResolvedCoupler> couplers, AssemblyPlanCache cache) =>
-        cache.Get(basis.Structure, couplers).Evaluate(basis.BareEnergies, couplers);
+    internal static SparseHermitian Assemble(CompositeBasis basis, IReadOnlyList<ResolvedCoupler> couplers, AssemblyPlanCache cache)
+    {
+        var terms = AssemblyPlan.Operators(couplers);   // once per point: the plan key and the values both use them
+        return cache.Get(basis.Structure, couplers, terms).Evaluate(basis.BareEnergies, couplers, terms);
+    }
 }

@@ -34,6 +34,17 @@ internal static class EigenInput
             }
     }
 
+    /// <summary>The argument checks of a generalized problem H c = E S c, shared by every backend.</summary>
+    public static void CheckGeneralized(double[] h, double[] s, int n, int count)
+    {
+        ArgumentNullException.ThrowIfNull(h);
+        ArgumentNullException.ThrowIfNull(s);
+        Check(h.Length, n, count, nameof(h));
+        Check(s.Length, n, count, nameof(s));
+        CheckFiniteLower(h, n, nameof(h));
+        CheckFiniteLower(s, n, nameof(s));
+    }
+
     /// <summary>Full symmetric copy built from the lower triangle.</summary>
     public static double[] SymmetricFromLower(double[] m, int n)
     {

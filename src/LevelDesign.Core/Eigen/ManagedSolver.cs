@@ -51,12 +51,7 @@ public sealed class ManagedSolver : IEigenSolver
 
     public RealEigenResult LowestGeneralizedReal(double[] h, double[] s, int n, int count)
     {
-        ArgumentNullException.ThrowIfNull(h);
-        ArgumentNullException.ThrowIfNull(s);
-        EigenInput.Check(h.Length, n, count, nameof(h));
-        EigenInput.Check(s.Length, n, count, nameof(s));
-        EigenInput.CheckFiniteLower(h, n, nameof(h));
-        EigenInput.CheckFiniteLower(s, n, nameof(s));
+        EigenInput.CheckGeneralized(h, s, n, count);
 
         // Built from the lower triangle, so S is symmetric by construction (same contract as the native path).
         var sMatrix = Matrix<double>.Build.DenseOfColumnMajor(n, n, EigenInput.SymmetricFromLower(s, n));

@@ -100,12 +100,7 @@ public sealed unsafe class NativeLapackSolver : IEigenSolver
 
     public RealEigenResult LowestGeneralizedReal(double[] h, double[] s, int n, int count)
     {
-        ArgumentNullException.ThrowIfNull(h);
-        ArgumentNullException.ThrowIfNull(s);
-        EigenInput.Check(h.Length, n, count, nameof(h));
-        EigenInput.Check(s.Length, n, count, nameof(s));
-        EigenInput.CheckFiniteLower(h, n, nameof(h));
-        EigenInput.CheckFiniteLower(s, n, nameof(s));
+        EigenInput.CheckGeneralized(h, s, n, count);
 
         double[] a = (double[])h.Clone();
         double[] b = (double[])s.Clone();

@@ -56,8 +56,7 @@ public sealed record LevelList(
         {
             var result = EigenSolvers.Managed.LowestGeneralizedReal(ColumnMajor(Hamiltonian), ColumnMajor(Overlap), n, levels);
             values = result.Values;
-            vectors = result.Vectors;
-            SmallEigen.FixSigns(vectors, n, levels);
+            vectors = result.Vectors;   // already in the shared phase convention
         }
         var ops = new Dictionary<string, OperatorMatrix>();
         foreach (var (name, m) in OperatorMatrices) ops[name] = OperatorMatrix.FromReal(m).InBasis(vectors, n, levels);

@@ -1,3 +1,4 @@
+using LevelDesign.Core.Eigen;
 using MathNet.Numerics.LinearAlgebra;
 
 namespace LevelDesign.Core.Linear;
@@ -7,7 +8,7 @@ public static class SmallEigen
 {
     /// <summary>
     /// Lowest <paramref name="count"/> eigenpairs of a real symmetric matrix; vectors column-major n×count,
-    /// each with its largest-magnitude component positive so that repeated solves keep one sign.
+    /// each with the shared phase convention (<see cref="EigenvectorPhase"/>) so repeated solves keep one sign.
     /// </summary>
     public static (double[] Values, double[] Vectors) LowestSymmetric(double[,] matrix, int count)
     {
@@ -24,24 +25,7 @@ public static class SmallEigen
             var column = evd.EigenVectors.Column(order[c]);
             for (int i = 0; i < n; i++) vectors[c * n + i] = column[i];
         }
-        FixSigns(vectors, n, count);
+        EigenvectorPhase.Normalize(vectors, n, count);
         return (values, vectors);
-    }
-
-    /// <summary>Makes the largest-magnitude component of each column positive (first on ties).</summary>
-    public static void FixSigns(double[] vectors, int n, int count)
-    {
-        for (int c = 0; c < count; c++)
-        {
-            int best = 0;
-            double bestAbs = -1;
-            for (int i = 0; i < n; i++)
-            {
-                double a = Math.Abs(vectors[c * n + i]);
-                if (a > bestAbs + 1e-12) { bestAbs = a; best = i; }
-            }
-            if (vectors[c * n + best] < 0)
-                for (int i = 0; i < n; i++) vectors[c * n + i] = -vectors[c * n + i];
-        }
     }
 }
