@@ -39,10 +39,11 @@ internal static class Profile
             sw.Restart();
             previous = davidson.TryLowest(csr, k, guess, previous?.Count ?? 0) ?? throw new InvalidOperationException("no convergence");
             eigen += sw.Elapsed.TotalSeconds;
-            iterations += BlockDavidson.LastIterations;
+            iterations += davidson.LastIterations;
             previousBasis = problem.Basis;
         }
         int m = biases.Length;
+
         Console.WriteLine($"profile ({projected.Name}): prepare {prepare / m * 1e3:F2} ms, csr {sparse / m * 1e3:F2} ms, iterative {eigen / m * 1e3:F2} ms ({(double)iterations / m:F1} iterations) per point");
     }
 }

@@ -53,25 +53,64 @@ if (args.Contains("--profile"))
 
 // warm-up (JIT, native library load)
 Sweep(new SweepOptions { Parallelism = 2 });
+Sweep(new SweepOptions { Parallelism = 1, Solver = new DeviceSolver(EigenSolvers.Managed) });
 
-double sweep2 = Seconds(() => Sweep(new SweepOptions { Parallelism = 2 }));
+// Configurations are interleaved, five rounds, medians reported: this machine's speed drifts by tens of percent
+// within a minute, so back-to-back blocks of one configuration would bias the ratios.
+var configurations = new (string Name, SweepOptions Options)[]
 {
-    // split of the 2-chunk sweep: solving (parallel) vs labelling and quantities (sequential, after the last point)
-    var clock = Stopwatch.StartNew();
-    double solvedAt = 0;
-    var progress = new TimedProgress(clock, t => solvedAt = t, axis.Count);
-    SweepRunner.RunAsync(resolve, plan, new SweepOptions { Parallelism = 2 }, progress).GetAwaiter().GetResult();
-    Console.WriteLine($"  (2 workers: points solved after {solvedAt:F3} s, labelled and finished at {clock.Elapsed.TotalSeconds:F3} s)");
-}
-double sweep1 = Seconds(() => Sweep(new SweepOptions { Parallelism = 1 }));
-double sweepManaged2 = Seconds(() => Sweep(new SweepOptions { Parallelism = 2, Solver = new DeviceSolver(EigenSolvers.Managed) }));
+    ("2 workers", new SweepOptions { Parallelism = 2 }),
+    ("1 worker", new SweepOptions { Parallelism = 1 }),
+    ("2 workers, managed", new SweepOptions { Parallelism = 2, Solver = new DeviceSolver(EigenSolvers.Managed) }),
+    ("1 worker, managed", new SweepOptions { Parallelism = 1, Solver = new DeviceSolver(EigenSolvers.Managed) }),
+    ("2 workers, dense", new SweepOptions { Parallelism = 2, Iterative = false }),
+};
+var samples = configurations.Select(_ => new List<double>()).ToArray();
+const int rounds = 5;
+for (int round = 0; round < rounds; round++)
+    for (int c = 0; c < configurations.Length; c++)
+    {
+        var sw = Stopwatch.StartNew();
+        Sweep(configurations[c].Options);
+        samples[c].Add(sw.Elapsed.TotalSeconds);
+    }
+double Median(List<double> values) { var v = values.Order().ToArray(); return v[v.Length / 2]; }
+var median = samples.Select(Median).ToArray();
+double sweep2 = median[0];
 double peakAfterSweeps = Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0;
-double sweepDense2 = Seconds(() => Sweep(new SweepOptions { Parallelism = 2, Iterative = false }));
-Console.WriteLine("sweep, 201 points, labels + derived quantities, iterative (projected solves managed):");
-Console.WriteLine($"  2 workers: {sweep2:F3} s   1 worker: {sweep1:F3} s   parallel speed-up {sweep1 / sweep2:F2}x");
-Console.WriteLine($"  2 workers, no native LAPACK anywhere (managed dense fallback): {sweepManaged2:F3} s");
-Console.WriteLine($"  2 workers, same pipeline with dense {EigenSolvers.Active.Name} instead of iterative: {sweepDense2:F3} s");
+
+// allocation and collections of one sweep, and where the time of a 2-worker sweep goes
+long allocatedBefore = GC.GetTotalAllocatedBytes(precise: true);
+int gen0 = GC.CollectionCount(0), gen2 = GC.CollectionCount(2);
+var pause = GC.GetTotalPauseDuration();
+var clock = Stopwatch.StartNew();
+double solvedAt = 0;
+var iterative = SweepRunner.RunAsync(resolve, plan, new SweepOptions { Parallelism = 2 }, new TimedProgress(clock, t => solvedAt = t, axis.Count))
+    .GetAwaiter().GetResult();
+double finishedAt = clock.Elapsed.TotalSeconds;
+double allocatedMb = (GC.GetTotalAllocatedBytes(precise: true) - allocatedBefore) / 1048576.0;
+string collections = $"{GC.CollectionCount(0) - gen0} gen0 / {GC.CollectionCount(2) - gen2} gen2, paused {(GC.GetTotalPauseDuration() - pause).TotalMilliseconds:F0} ms";
+
+// accuracy: every level of every point against the dense path
+var dense = Sweep(new SweepOptions { Parallelism = 2, Iterative = false });
+double worst = 0;
+int denseFallbacks = 0;
+for (int i = 0; i < iterative.Points.Count; i++)
+{
+    var a = iterative.Points[i].Spectrum;
+    if (!a.SolverName.StartsWith("block Davidson", StringComparison.Ordinal)) denseFallbacks++;
+    for (int level = 0; level < a.Energies.Length; level++)
+        worst = Math.Max(worst, Math.Abs(a.Energies[level] - dense.Points[i].Spectrum.Energies[level]));
+}
+
+Console.WriteLine($"sweep, 201 points, labels + derived quantities, iterative (medians of {rounds} interleaved rounds):");
+Console.WriteLine($"  2 workers: {median[0]:F3} s   1 worker: {median[1]:F3} s   parallel speed-up {median[1] / median[0]:F2}x");
+Console.WriteLine($"  no native LAPACK anywhere (managed projected and fallback solves): 2 workers {median[2]:F3} s   1 worker {median[3]:F3} s   speed-up {median[3] / median[2]:F2}x");
+Console.WriteLine($"  2 workers, same pipeline with dense {EigenSolvers.Active.Name} instead of iterative: {median[4]:F3} s");
+Console.WriteLine($"  one 2-worker sweep: points solved after {solvedAt:F3} s, labelled and finished at {finishedAt:F3} s; allocated {allocatedMb:F0} MB, {collections}");
+Console.WriteLine($"  largest |E(iterative) − E(dense)| over all {iterative.Points.Count} points and levels: {worst:E1} GHz ({denseFallbacks} points fell back to dense)");
 Console.WriteLine($"  peak working set after the sweeps: {peakAfterSweeps:F0} MB");
+if (args.Contains("--sweeps-only")) return;
 
 // --- the same matrices, dense
 var problems = new List<CompositeProblem>();

@@ -136,12 +136,17 @@ public sealed unsafe class NativeLapackSolver : IEigenSolver
     /// <summary>dsyevr on a scratch copy (destroyed); vectors are not yet phase-normalised.</summary>
     private RealEigenResult Syevr(double[] a, int n, int count)
     {
-        byte jobz = (byte)'V', range = (byte)'I', uplo = (byte)'L';
+        // For a subset dsyevr bisects and inverse-iterates; for all eigenpairs it uses the faster MRRR. Measured
+        // on 56×56 and 93×93 projected problems wanting 31: all pairs took 0.28 and 0.83 ms, the subset 0.62 and
+        // 1.12 ms. Asking for all pays off once a third or more are wanted.
+        bool all = 3 * count >= n;
+        byte jobz = (byte)'V', range = all ? (byte)'A' : (byte)'I', uplo = (byte)'L';
         int nn = n, lda = n, il = 1, iu = count, m = 0, ldz = n, info = 0;
         double vl = 0, vu = 0, abstol = SafeMinimum;
+        int columns = all ? n : count;
         var w = new double[n];
-        var z = new double[n * count];
-        var isuppz = new int[2 * Math.Max(1, count)];
+        var z = new double[n * columns];
+        var isuppz = new int[2 * Math.Max(1, columns)];
 
         double workQuery = 0;
         int iworkQuery = 0, lwork = -1, liwork = -1;
@@ -164,8 +169,8 @@ public sealed unsafe class NativeLapackSolver : IEigenSolver
             }
         }
         ThrowOnInfo("dsyevr", info);
-        CheckFound("dsyevr", m, count);
-        return new RealEigenResult(w[..count], z, n);
+        CheckFound("dsyevr", m, columns);
+        return new RealEigenResult(w[..count], all ? z[..(n * count)] : z, n);
     }
 
     private static void ThrowOnInfo(string routine, int info)

@@ -1,4 +1,5 @@
 using System.Numerics;
+using System.Numerics.Tensors;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.Eigen;
 using LevelDesign.Core.Model;
@@ -17,14 +18,16 @@ internal sealed class PointSolver
     private readonly SweepOptions _options;
     private readonly BlockDavidson? _iterative;
     private SolvedPoint? _previous, _beforePrevious;
+    private double[] _guess = [], _older = [];
+    private Complex[] _column = [];
 
     public PointSolver(DeviceSolver solver, SweepOptions options)
     {
         _solver = solver;
         _options = options;
-        // the projected problems are small (tens of states): measured in one benchmark run, the whole sweep was
-        // about 25% faster with managed projected solves than with native ones (call overhead dominates there)
-        _iterative = options.Iterative ? new BlockDavidson(EigenSolvers.Managed) : null;
+        // the projected problems go to the same eigensolver as dense solves: native when present (dsyevr's MRRR is
+        // faster there than the managed solver), managed when the user chose it
+        _iterative = options.Iterative ? new BlockDavidson(solver.EigenSolver) : null;
     }
 
     public int IterativeSolves { get; private set; }
@@ -88,34 +91,40 @@ internal sealed class PointSolver
     {
         if (_previous is null) return (null, 0);
         int n = basis.Dimension, columns = _previous.Count;
-        var guess = new double[n * columns];
+        if (_guess.Length < n * columns) _guess = new double[n * columns];
+        if (_older.Length != n) { _older = new double[n]; _column = new Complex[n]; }
+        var map = SolvedPoint.IndexMap(basis, _previous.Problem.Basis);
         bool extrapolate = _beforePrevious is not null && _beforePrevious.Count == columns;
-        var older = new double[n];
+        var olderMap = extrapolate ? SolvedPoint.IndexMap(basis, _beforePrevious!.Problem.Basis) : null;
         for (int c = 0; c < columns; c++)
         {
-            var target = guess.AsSpan(c * n, n);
-            GaugedColumn(_previous, basis, phases, c, target);
+            var target = _guess.AsSpan(c * n, n);
+            GaugedColumn(_previous, map, phases, c, target);
             if (!extrapolate) continue;
-            GaugedColumn(_beforePrevious!, basis, phases, c, older);
-            double dot = 0;
-            for (int j = 0; j < n; j++) dot += target[j] * older[j];
+            GaugedColumn(_beforePrevious!, olderMap!, phases, c, _older);
+            double dot = TensorPrimitives.Dot(target, _older);
             double sign = dot < 0 ? -1 : 1;   // the two points may have pinned opposite signs
-            for (int j = 0; j < n; j++) target[j] = 2 * target[j] - sign * older[j];
+            for (int j = 0; j < n; j++) target[j] = 2 * target[j] - sign * _older[j];
         }
-        return (guess, columns);
+        return (_guess, columns);
     }
 
-    private static void GaugedColumn(SolvedPoint point, CompositeBasis basis, Complex[]? phases, int c, Span<double> target)
+    /// <summary>Column c of a solved point in this basis (map: this basis → the point's), gauged to real when phases are given.</summary>
+    private void GaugedColumn(SolvedPoint point, int[] map, Complex[]? phases, int c, Span<double> target)
     {
-        int n = basis.Dimension, oldN = point.Dimension;
-        bool same = ReferenceEquals(basis.Structure, point.Problem.Basis.Structure);
-        var column = new Complex[n];
+        int n = map.Length, offset = c * point.Dimension;
+        if (phases is null && point.RealVectors is double[] real)
+        {
+            // already real with the pinned sign convention: nothing to rotate
+            for (int j = 0; j < n; j++) target[j] = map[j] < 0 ? 0 : real[offset + map[j]];
+            return;
+        }
+        var column = _column.AsSpan(0, n);
         for (int j = 0; j < n; j++)
         {
-            int o = same ? j : point.Problem.Basis.IndexOf(basis.States[j]);
-            column[j] = o < 0 ? Complex.Zero
-                : point.RealVectors is double[] real ? real[c * oldN + o]
-                : point.ComplexVectors![c * oldN + o];
+            column[j] = map[j] < 0 ? Complex.Zero
+                : point.RealVectors is double[] r ? r[offset + map[j]]
+                : point.ComplexVectors![offset + map[j]];
             if (phases is not null) column[j] = Complex.Conjugate(phases[j]) * column[j];
         }
         int pinned = EigenvectorPhase.PinnedIndex(column);

@@ -26,12 +26,14 @@ internal sealed record SolvedPoint(CompositeProblem Problem, double[] Values, do
     }
 
     /// <summary>For each state of this basis, its index in <paramref name="other"/> (−1 when pruned there).</summary>
-    public int[] IndexMapTo(CompositeBasis other)
+    public int[] IndexMapTo(CompositeBasis other) => IndexMap(Problem.Basis, other);
+
+    /// <summary>For each state of <paramref name="from"/>, its index in <paramref name="to"/> (−1 when pruned there).</summary>
+    public static int[] IndexMap(CompositeBasis from, CompositeBasis to)
     {
-        var basis = Problem.Basis;
-        var map = new int[basis.Dimension];
-        bool same = ReferenceEquals(basis.Structure, other.Structure);
-        for (int j = 0; j < map.Length; j++) map[j] = same ? j : other.IndexOf(basis.States[j]);
+        var map = new int[from.Dimension];
+        bool same = ReferenceEquals(from.Structure, to.Structure);
+        for (int j = 0; j < map.Length; j++) map[j] = same ? j : to.IndexOf(from.States[j]);
         return map;
     }
 }
