@@ -42,6 +42,24 @@ double Seconds(Action action)
 
 SweepResult Sweep(SweepOptions options) => SweepRunner.RunAsync(resolve, plan, options).GetAwaiter().GetResult();
 
+if (args.Contains("--cpu"))
+{
+    // processor time of serial sweeps: less disturbed than wall time when other work shares the cores
+    foreach (var (name, options) in new[] { ("native", new SweepOptions { Parallelism = 1 }),
+                 ("managed", new SweepOptions { Parallelism = 1, Solver = new DeviceSolver(EigenSolvers.Managed) }) })
+    {
+        Sweep(options);
+        var cpu = new List<double>();
+        for (int r = 0; r < 5; r++)
+        {
+            var before = Process.GetCurrentProcess().TotalProcessorTime;
+            Sweep(options);
+            cpu.Add((Process.GetCurrentProcess().TotalProcessorTime - before).TotalSeconds);
+        }
+        Console.WriteLine($"serial sweep ({name}): processor time median {cpu.Order().ElementAt(2):F3} s ({cpu.Order().ElementAt(2) / axis.Count * 1e3:F2} ms per point)");
+    }
+    return;
+}
 if (args.Contains("--profile"))
 {
     var biases = Enumerable.Range(0, 60).Select(i => SweepGrid.Value(axis, i)).ToArray();

@@ -14,6 +14,16 @@ public static class SmallEigen
     {
         int n = matrix.GetLength(0);
         if (count > n) throw new ArgumentException($"asked for {count} levels of a {n}-state basis");
+        if (IsTridiagonal(matrix))
+        {
+            var d = new double[n];
+            var e = new double[Math.Max(0, n - 1)];
+            for (int i = 0; i < n; i++) d[i] = matrix[i, i];
+            for (int i = 0; i + 1 < n; i++) e[i] = matrix[i + 1, i];
+            var (tridiagonalValues, tridiagonalVectors) = TridiagonalEigen.Lowest(d, e, count);
+            EigenvectorPhase.Normalize(tridiagonalVectors, n, count);
+            return (tridiagonalValues, tridiagonalVectors);
+        }
         var evd = Matrix<double>.Build.DenseOfArray(matrix).Evd(Symmetricity.Symmetric);
         var allValues = evd.EigenValues.Select(z => z.Real).ToArray();
         var order = Enumerable.Range(0, n).OrderBy(i => allValues[i]).Take(count).ToArray();
@@ -27,5 +37,16 @@ public static class SmallEigen
         }
         EigenvectorPhase.Normalize(vectors, n, count);
         return (values, vectors);
+    }
+
+    private static bool IsTridiagonal(double[,] matrix)
+    {
+        int n = matrix.GetLength(0);
+        for (int r = 0; r < n; r++)
+            for (int c = 0; c < n; c++)
+                if (Math.Abs(r - c) > 1 && matrix[r, c] != 0) return false;
+        for (int r = 0; r + 1 < n; r++)
+            if (matrix[r, r + 1] != matrix[r + 1, r]) return false;
+        return true;
     }
 }

@@ -20,17 +20,25 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
     private const int TopComponents = 4;
     private const double DegenerateGHz = 1e-9;
 
-    public (DressedSpectrum Spectrum, bool Ambiguous) First(SolvedPoint point)
+    /// <summary>
+    /// The parts of labelling that need no neighbour's labels — bare weights and, by character, the overlaps with
+    /// the neighbour's vectors — so a sweep can compute them for all points in parallel before the sequential pass.
+    /// </summary>
+    public static LabelInputs Inputs(LabelMode mode, SolvedPoint point, SolvedPoint? previous) =>
+        new(point.Weights(), previous is not null && mode == LabelMode.ByCharacter ? Overlaps(previous, point) : null);
+
+    public (DressedSpectrum Spectrum, bool Ambiguous) First(SolvedPoint point, LabelInputs inputs)
     {
-        var weights = point.Weights();
+        var weights = inputs.Weights;
         var labels = Labeller.Label(weights, point.Dimension, point.Count, TopComponents, options.AmbiguityMargin);
         bool ambiguous = labels.Take(judgedCount).Any(l => l.Ambiguous);
         return (Build(point, weights, labels), ambiguous);
     }
 
-    public (DressedSpectrum Spectrum, bool Ambiguous) Next(SolvedPoint point, SolvedPoint previous, DressedSpectrum previousSpectrum)
+    public (DressedSpectrum Spectrum, bool Ambiguous) Next(SolvedPoint point, LabelInputs inputs, SolvedPoint previous,
+        DressedSpectrum previousSpectrum)
     {
-        var weights = point.Weights();
+        var weights = inputs.Weights;
         int n = point.Dimension, count = point.Count;
         // the neighbour's labels, as indices of this point's basis
         var previousLabels = new int[previous.Count];
@@ -39,7 +47,7 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
 
         return mode == LabelMode.ByOrder
             ? ByOrder(point, weights, previousLabels)
-            : ByCharacter(point, weights, previousLabels, Overlaps(previous, point));
+            : ByCharacter(point, weights, previousLabels, inputs.Overlaps!);
     }
 
     private (DressedSpectrum, bool) ByOrder(SolvedPoint point, double[] weights, int[] previousLabels)

@@ -60,26 +60,52 @@ public static class SweepRunner
         return new SweepResult(plan, points, completed);
     }
 
-    /// <summary>Labels every solved point from its neighbour, in flat order, and computes its derived quantities.</summary>
+    /// <summary>
+    /// Labels every solved point from its neighbour, in flat order, and computes its derived quantities. Only the
+    /// label hand-over is sequential: weights, overlaps and derived quantities are computed in parallel.
+    /// </summary>
     private static List<SweepPoint> Label(SweepPlan plan, SweepOptions options, double[][] axisValues, SolvedPoint?[] solved)
     {
-        var spectra = new DressedSpectrum?[solved.Length];
-        var points = new List<SweepPoint>();
-        for (int i = 0; i < solved.Length; i++)
+        int total = solved.Length;
+        var neighbour = new int[total];
+        for (int i = 0; i < total; i++)
+        {
+            int previous = SweepGrid.Predecessor(plan, i);
+            while (previous >= 0 && solved[previous] is null) previous--;
+            neighbour[i] = previous;
+        }
+        var parallel = new ParallelOptions { MaxDegreeOfParallelism = Math.Max(1, options.Parallelism) };
+        var inputs = new LabelInputs?[total];
+        Parallel.For(0, total, parallel, i =>
+        {
+            if (solved[i] is SolvedPoint point)
+                inputs[i] = LabelTracker.Inputs(plan.Labels, point, neighbour[i] < 0 ? null : solved[neighbour[i]]);
+        });
+
+        var spectra = new DressedSpectrum?[total];
+        var ambiguous = new bool[total];
+        for (int i = 0; i < total; i++)
         {
             if (solved[i] is not SolvedPoint point) continue;
             // a user-chosen level count is judged whole; the default count carries a 4-state margin at the top,
             // where states mix with ones not computed, so ambiguity there is not reported
             int judged = plan.Levels is not null ? point.Count : Math.Max(1, point.Count - 4);
             var tracker = new LabelTracker(plan.Labels, options, judged);
-            int previous = SweepGrid.Predecessor(plan, i);
-            while (previous >= 0 && solved[previous] is null) previous--;
-            var (spectrum, ambiguous) = previous < 0
-                ? tracker.First(point)
-                : tracker.Next(point, solved[previous]!, spectra[previous]!);
-            spectra[i] = spectrum;
-            points.Add(new SweepPoint(i, axisValues[i], spectrum, DerivedQuantities.From(spectrum).Named(), ambiguous));
+            int previous = neighbour[i];
+            (spectra[i], ambiguous[i]) = previous < 0
+                ? tracker.First(point, inputs[i]!)
+                : tracker.Next(point, inputs[i]!, solved[previous]!, spectra[previous]!);
         }
+
+        var quantities = new IReadOnlyDictionary<string, double>?[total];
+        Parallel.For(0, total, parallel, i =>
+        {
+            if (spectra[i] is DressedSpectrum spectrum) quantities[i] = DerivedQuantities.From(spectrum).Named();
+        });
+        var points = new List<SweepPoint>();
+        for (int i = 0; i < total; i++)
+            if (spectra[i] is DressedSpectrum spectrum)
+                points.Add(new SweepPoint(i, axisValues[i], spectrum, quantities[i]!, ambiguous[i]));
         return points;
     }
 }
