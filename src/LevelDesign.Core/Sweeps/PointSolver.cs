@@ -25,9 +25,7 @@ internal sealed class PointSolver
     {
         _solver = solver;
         _options = options;
-        // the projected problems go to the same eigensolver as dense solves: native when present (dsyevr's MRRR is
-        // faster there than the managed solver), managed when the user chose it
-        _iterative = options.Iterative ? new BlockDavidson(solver.EigenSolver) : null;
+        _iterative = options.Iterative ? new BlockDavidson() : null;
     }
 
     public int IterativeSolves { get; private set; }
@@ -48,7 +46,7 @@ internal sealed class PointSolver
             {
                 var (guess, columns) = WarmStart(problem.Basis, null);
                 result = _iterative.TryLowest(h.ToCsrReal(), count, guess, columns);
-                if (result is not null) { name = $"block Davidson (sparse; projected: {_iterative.Projected.Name})"; IterativeSolves++; }
+                if (result is not null) { name = $"block Davidson (sparse; projected: {BlockDavidson.ProjectedName})"; IterativeSolves++; }
             }
             if (result is null) { result = _solver.EigenSolver.LowestReal(h.ToDenseReal(), n, count); DenseSolves++; }
             point = new SolvedPoint(problem, result.Values, result.Vectors, null, name);
@@ -69,7 +67,7 @@ internal sealed class PointSolver
                         for (int j = 0; j < n; j++) vectors[c * n + j] = phases[j] * real.Vectors[c * n + j];
                     EigenvectorPhase.Normalize(vectors, n, count);
                     complex = new ComplexEigenResult(real.Values, vectors, n);
-                    name = $"block Davidson (sparse, real gauge; projected: {_iterative.Projected.Name})";
+                    name = $"block Davidson (sparse, real gauge; projected: {BlockDavidson.ProjectedName})";
                     IterativeSolves++;
                 }
             }

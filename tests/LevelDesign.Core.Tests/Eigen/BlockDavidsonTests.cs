@@ -69,7 +69,7 @@ public sealed class BlockDavidsonTests
     public void Cold_start_finds_the_lowest_levels()
     {
         var a = CompositeLike(300, seed: 3, out var dense);
-        var result = new BlockDavidson(EigenSolvers.Managed).TryLowest(a, 25);
+        var result = new BlockDavidson().TryLowest(a, 25);
         AssertMatchesDense(a, dense, result, 25);
     }
 
@@ -79,13 +79,13 @@ public sealed class BlockDavidsonTests
         var a = CompositeLike(240, seed: 5, out var dense, degenerate: true);
         var reference = EigenSolvers.Managed.LowestReal(dense, 240, 20);
         Assert.True(reference.Values[1] - reference.Values[0] < 1e-12, "the fixture should have doubled levels");
-        AssertMatchesDense(a, dense, new BlockDavidson(EigenSolvers.Managed).TryLowest(a, 20), 20);
+        AssertMatchesDense(a, dense, new BlockDavidson().TryLowest(a, 20), 20);
     }
 
     [Fact]
     public void Warm_start_from_a_neighbouring_matrix_converges_in_few_iterations_and_one_instance_is_reusable()
     {
-        var solver = new BlockDavidson(EigenSolvers.Managed);
+        var solver = new BlockDavidson();
         var first = CompositeLike(300, seed: 7, out var firstDense);
         var start = solver.TryLowest(first, 20)!;
         int coldIterations = solver.LastIterations;
