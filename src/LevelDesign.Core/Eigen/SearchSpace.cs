@@ -12,7 +12,8 @@ internal sealed class SearchSpace
     private const double DependentFraction = 1e-8;
 
     private readonly int _n, _capacity;
-    private readonly double[] _projected, _scratch, _coefficients;
+    private readonly double[] _projected, _scratch, _coefficients, _gram, _triangle, _norms;
+    private readonly int[] _kept;
     private int _multiplied, _limit;
 
     public SearchSpace(int n, int capacity)
@@ -24,6 +25,10 @@ internal sealed class SearchSpace
         _projected = new double[capacity * capacity];
         _scratch = new double[n * capacity];
         _coefficients = new double[capacity * capacity];
+        _gram = new double[capacity * capacity];
+        _triangle = new double[capacity * capacity];
+        _kept = new int[capacity];
+        _norms = new double[capacity];
     }
 
     public bool Fits(int n, int capacity) => n == _n && capacity <= _capacity;
@@ -115,7 +120,7 @@ internal sealed class SearchSpace
     {
         count = Math.Min(count, _limit - Size);
         if (count <= 0) return 0;
-        var norms = new double[count];
+        var norms = _norms;
         for (int c = 0; c < count; c++)
         {
             var column = Basis.AsSpan((Size + c) * _n, _n);
@@ -150,47 +155,43 @@ internal sealed class SearchSpace
     private int CholeskyOrthonormalize(int count, double[] norms, double keepFraction)
     {
         var w = Basis.AsSpan(Size * _n, count * _n);
-        var gram = new double[count * count];
+        var gram = _gram.AsSpan(0, count * count);
         BlockProducts.Dots(w, _n, count, w, count, gram, count);
-        var r = new double[count * count];   // upper triangular, r[i·count + j] for kept i ≤ j
-        var kept = new List<int>(count);
+        // R over the kept columns in kept order: r[a·count + b] = R[a, b] for a ≤ b
+        var r = _triangle.AsSpan(0, count * count);
+        int m = 0;
         for (int j = 0; j < count; j++)
         {
-            if (Math.Sqrt(gram[j * count + j]) < keepFraction * norms[j]) continue;
             double diagonal = gram[j * count + j];
-            foreach (int i in kept)
+            if (Math.Sqrt(diagonal) < keepFraction * norms[j]) continue;
+            for (int a = 0; a < m; a++)
             {
-                double rij = gram[i * count + j];
-                foreach (int l in kept)
-                {
-                    if (l == i) break;
-                    rij -= r[l * count + i] * r[l * count + j];
-                }
-                rij /= r[i * count + i];
-                r[i * count + j] = rij;
+                double rij = gram[_kept[a] * count + j];
+                for (int b = 0; b < a; b++) rij -= r[b * count + a] * r[b * count + m];
+                rij /= r[a * count + a];
+                r[a * count + m] = rij;
                 diagonal -= rij * rij;
             }
             // dependent on the new columns already kept (to about 1e-5 of its norm): nothing new
             if (diagonal <= 1e-10 * gram[j * count + j]) continue;
-            r[j * count + j] = Math.Sqrt(diagonal);
-            kept.Add(j);
+            r[m * count + m] = Math.Sqrt(diagonal);
+            _kept[m++] = j;
         }
-        // W_kept R⁻¹: invert the kept triangle into coefficients (column c holds the weights of the kept columns)
-        int m = kept.Count;
+        // W_kept R⁻¹: invert the triangle into coefficients (column c holds the weights of the kept columns)
         var inverse = _coefficients.AsSpan(0, m * m);
         inverse.Clear();
         for (int c = 0; c < m; c++)
         {
-            inverse[c * m + c] = 1 / r[kept[c] * count + kept[c]];
+            inverse[c * m + c] = 1 / r[c * count + c];
             for (int i = c - 1; i >= 0; i--)
             {
                 double sum = 0;
-                for (int l = i + 1; l <= c; l++) sum += r[kept[i] * count + kept[l]] * inverse[c * m + l];
-                inverse[c * m + i] = -sum / r[kept[i] * count + kept[i]];
+                for (int l = i + 1; l <= c; l++) sum += r[i * count + l] * inverse[c * m + l];
+                inverse[c * m + i] = -sum / r[i * count + i];
             }
         }
         var source = _scratch.AsSpan(0, m * _n);
-        for (int c = 0; c < m; c++) w.Slice(kept[c] * _n, _n).CopyTo(source.Slice(c * _n, _n));
+        for (int c = 0; c < m; c++) w.Slice(_kept[c] * _n, _n).CopyTo(source.Slice(c * _n, _n));
         BlockProducts.Combine(source, _n, m, inverse, m, m, w);
         return m;
     }

@@ -13,14 +13,16 @@ internal static class BasisConvergence
         Func<int, NaturalBasisProblem> build)
     {
         if (fixedSize is int size) return build(size).Solve(elementId, levels);
-        var previous = build(startSize).Solve(elementId, levels);
+        // only energies are compared while the basis grows; operators are expressed once, in the accepted basis
+        var previous = build(startSize).Diagonalise(levels).Values;
         for (int n = startSize + step; n <= maxSize; n += step)
         {
-            var next = build(n).Solve(elementId, levels);
+            var problem = build(n);
+            var next = problem.Diagonalise(levels);
             double change = 0;
-            for (int i = 0; i < levels; i++) change = Math.Max(change, Math.Abs(next.Energies[i] - previous.Energies[i]));
-            previous = next;
-            if (change < ToleranceGHz) return next;
+            for (int i = 0; i < levels; i++) change = Math.Max(change, Math.Abs(next.Values[i] - previous[i]));
+            previous = next.Values;
+            if (change < ToleranceGHz) return problem.Express(elementId, next);
         }
         throw new InvalidOperationException(
             $"element '{elementId}': the lowest {levels} levels did not converge within a basis of {maxSize}; fewer levels or an explicit basis size are needed");
