@@ -12,25 +12,34 @@ internal static class ChargeBasis
     {
         int size = 2 * nMax + 1;
         var h = new double[size, size];
+        for (int i = 0; i < size; i++)
+        {
+            double charge = i - nMax - ng;
+            h[i, i] = 4 * ec * charge * charge;
+            if (i + 1 < size) h[i, i + 1] = h[i + 1, i] = -ej / 2;
+        }
+        return new NaturalBasisProblem(h, new Lazy<IReadOnlyDictionary<string, OperatorMatrix>>(() => Operators(ng, nMax)),
+            new BasisInfo("charge", size));
+    }
+
+    private static IReadOnlyDictionary<string, OperatorMatrix> Operators(double ng, int nMax)
+    {
+        int size = 2 * nMax + 1;
         var n = new OperatorMatrix(size);
         var cos = new OperatorMatrix(size);
         var sin = new OperatorMatrix(size);
         for (int i = 0; i < size; i++)
         {
-            double charge = i - nMax - ng;
-            h[i, i] = 4 * ec * charge * charge;
-            n[i, i] = charge;
+            n[i, i] = i - nMax - ng;
             if (i + 1 < size)
             {
-                h[i, i + 1] = h[i + 1, i] = -ej / 2;
                 cos[i, i + 1] = cos[i + 1, i] = 0.5;
                 // sin φ = (e^{iφ} − e^{−iφ})/2i, and ⟨n+1|e^{iφ}|n⟩ = 1
                 sin[i + 1, i] = new System.Numerics.Complex(0, -0.5);
                 sin[i, i + 1] = new System.Numerics.Complex(0, 0.5);
             }
         }
-        var ops = new Dictionary<string, OperatorMatrix> { ["n"] = n, ["cos_phi"] = cos, ["sin_phi"] = sin };
-        return new NaturalBasisProblem(h, ops, new BasisInfo("charge", size));
+        return new Dictionary<string, OperatorMatrix> { ["n"] = n, ["cos_phi"] = cos, ["sin_phi"] = sin };
     }
 
     /// <summary>Solves with |n| ≤ N grown from a safe start until the kept levels converge.</summary>

@@ -3,8 +3,15 @@ using LevelDesign.Core.Linear;
 namespace LevelDesign.Core.Elements;
 
 /// <summary>An element's Hamiltonian and operators written in its natural (untruncated) basis.</summary>
-internal sealed record NaturalBasisProblem(double[,] Hamiltonian, IReadOnlyDictionary<string, OperatorMatrix> Operators, BasisInfo Basis)
+/// <remarks>Operators may be built on first use: while a basis grows only the energies are compared, so the larger
+/// trial bases never need them.</remarks>
+internal sealed record NaturalBasisProblem(double[,] Hamiltonian, Lazy<IReadOnlyDictionary<string, OperatorMatrix>> LazyOperators, BasisInfo Basis)
 {
+    public NaturalBasisProblem(double[,] hamiltonian, IReadOnlyDictionary<string, OperatorMatrix> operators, BasisInfo basis)
+        : this(hamiltonian, new Lazy<IReadOnlyDictionary<string, OperatorMatrix>>(operators), basis) { }
+
+    public IReadOnlyDictionary<string, OperatorMatrix> Operators => LazyOperators.Value;
+
     public int Size => Hamiltonian.GetLength(0);
 
     /// <summary>Diagonalises and re-expresses every operator in the lowest <paramref name="levels"/> eigenstates.</summary>
