@@ -38,7 +38,7 @@ public sealed class BlockDavidson
     /// </summary>
     private static RealEigenResult SolveProjected(double[] matrix, int size, int wanted)
     {
-        var (values, vectors) = LowestSymmetric.Solve(matrix, size, wanted);
+        var (values, vectors) = LowestSymmetric.SolveInPlace(matrix, size, wanted);   // the copy is ours to overwrite
         return new RealEigenResult(values, vectors, size);
     }
     public double ResidualTolerance { get; }

@@ -16,8 +16,14 @@ public static class LowestSymmetric
     public static (double[] Values, double[] Vectors) Solve(ReadOnlySpan<double> matrix, int n, int count)
     {
         if (matrix.Length < n * n) throw new ArgumentException("matrix needs n² entries");
+        return SolveInPlace(matrix[..(n * n)].ToArray(), n, count);
+    }
+
+    /// <summary>As <see cref="Solve"/>, using <paramref name="a"/> (n×n, column-major) as work space: it is overwritten.</summary>
+    public static (double[] Values, double[] Vectors) SolveInPlace(double[] a, int n, int count)
+    {
+        if (a.Length < n * n) throw new ArgumentException("matrix needs n² entries");
         if (count < 1 || count > n) throw new ArgumentException($"asked for {count} eigenpairs of a {n}×{n} matrix");
-        var a = matrix[..(n * n)].ToArray();
         var diagonal = new double[n];
         var offDiagonal = new double[Math.Max(0, n - 1)];
         var tau = new double[Math.Max(0, n - 1)];
