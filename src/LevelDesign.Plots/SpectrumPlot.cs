@@ -31,6 +31,8 @@ public static class SpectrumPlot
                 ys.Add(e + ground[i]);
             }
             if (xs.Count == 0) continue;
+            // measured from the ground state, the ground's own branch is a flat line at zero: it only stretches the axis
+            if (scale == SpectrumScale.FromGround && ys.All(y => y == 0)) continue;
             var line = plot.Add.Scatter(xs.ToArray(), ys.ToArray());
             line.MarkerSize = 0;
             line.LineWidth = 1.6f;

@@ -43,6 +43,17 @@ public class SpectrumPlotTests
         Assert.Contains("MHz", text);   // a crossing annotation
     }
 
+    [Fact]
+    public async Task The_ground_branch_is_left_out_when_energies_are_measured_from_it()
+    {
+        var (sweep, _) = await TunableQubitAndResonator();
+        string Legend(SpectrumScale scale) => string.Join(",", SpectrumPlot.Build(sweep, levels: 4, scale: scale)
+            .GetPlottables().OfType<ScottPlot.Plottables.Scatter>().Select(p => p.LegendText));
+        Assert.DoesNotContain("|0,0⟩", Legend(SpectrumScale.FromGround));
+        Assert.Contains("|1,0⟩", Legend(SpectrumScale.FromGround));
+        Assert.Contains("|0,0⟩", Legend(SpectrumScale.Energies));   // there the ground's own shift is information
+    }
+
     [Theory]
     [InlineData("qa.flux", "qa.flux (Φ0)")]
     [InlineData("ra.frequency", "ra.frequency (GHz)")]
