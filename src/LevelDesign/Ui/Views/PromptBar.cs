@@ -1,3 +1,4 @@
+using LevelDesign.Ui.Text;
 using Terminal.Gui.Drawing;
 using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
@@ -6,7 +7,8 @@ using Terminal.Gui.Views;
 namespace LevelDesign.Ui.Views;
 
 /// <summary>
-/// The two-line question area at the bottom of the board: either a typed answer (Enter accepts, Esc
+/// The question area at the bottom of the board, as many lines as the question needs at the current width
+/// (wrapped, never cut silently): either a typed answer (Enter accepts, Esc
 /// cancels; a refused answer keeps the prompt open and shows the reason) or a one-key choice such as
 /// "s save and quit · d discard · Esc stay". Used instead of modal dialogs so nothing ever blocks.
 /// </summary>
@@ -58,6 +60,7 @@ public sealed class PromptBar : View
         _input.Visible = true;
         _input.Text = initial;
         _input.InsertionPoint = initial.Length;
+        Refit();
         _input.SetFocus();
     }
 
@@ -69,6 +72,7 @@ public sealed class PromptBar : View
         _choices = choices;
         _input.Visible = false;
         foreach (char c in choices.Keys) KeyBindings.ReplaceCommands(new Key(c), Command.Toggle);
+        Refit();
         SetFocus();
     }
 
@@ -82,6 +86,38 @@ public sealed class PromptBar : View
         SetNeedsDraw();
     }
 
+    /// <summary>At most this many lines of question, and of message below the answer.</summary>
+    public const int MaxQuestionLines = 6, MaxMessageLines = 3;
+    private int _rows = 3;
+
+    /// <summary>Raised when the prompt needs a different number of lines; the window moves it up or down.</summary>
+    public event Action? RowsChanged;
+
+    /// <summary>Lines in use at the current width: the wrapped question, the answer (when typed), the message.</summary>
+    public int Rows => QuestionLines(AvailableWidth()).Count + (_choices is null ? 1 : 0) + FooterLines(AvailableWidth()).Count;
+
+    /// <summary>Sets the height (and the answer's row) to what the question and message need at the current width.</summary>
+    public void Refit()
+    {
+        _input.Y = QuestionLines(AvailableWidth()).Count;
+        int rows = Rows;
+        if (rows == _rows) return;
+        _rows = rows;
+        Height = rows;
+        RowsChanged?.Invoke();
+    }
+
+    private int AvailableWidth() => SuperView is { } parent && parent.Viewport.Width > 0 ? parent.Viewport.Width : Math.Max(Frame.Width, 1);
+
+    private IReadOnlyList<string> QuestionLines(int width) =>
+        TextFit.WrapLines("» " + _question, width, MaxQuestionLines, indent: "  ");
+
+    /// <summary>The refusal message, or the keys to answer (left out for a choice whose question already names Esc).</summary>
+    private IReadOnlyList<string> FooterLines(int width) =>
+        _message.Length > 0 ? TextFit.WrapLines("  " + _message, width, MaxMessageLines, indent: "    ")
+        : _choices is null ? ["  Enter accept · Esc cancel"]
+        : _question.Contains("Esc", StringComparison.Ordinal) ? [] : ["  Esc cancel"];
+
     private void Answer()
     {
         if (_onAnswer is null) return;
@@ -94,6 +130,7 @@ public sealed class PromptBar : View
             return;
         }
         _message = "✗ " + refusal;
+        Refit();
         SetNeedsDraw();
     }
 
@@ -123,14 +160,20 @@ public sealed class PromptBar : View
     protected override bool OnDrawingContent(DrawContext? context)
     {
         int width = Viewport.Width;
+        var question = QuestionLines(width);
+        var footer = FooterLines(width);
         SetAttribute(GetAttributeForRole(VisualRole.Normal));
-        Move(0, 0);
-        AddStr(RowList.Pad("» " + _question, width));
-        if (_choices is not null) { Move(0, 1); AddStr(RowList.Pad("", width)); }
-        else { Move(0, 1); AddStr("  "); }
-        Move(0, 2);
+        int row = 0;
+        foreach (var line in question) { Move(0, row++); AddStr(RowList.Pad(line, width)); }
+        if (_choices is null) { Move(0, row++); AddStr("  "); }
         SetAttribute(_message.Length > 0 ? Palette.Warning(this) : GetAttributeForRole(VisualRole.Normal));
-        AddStr(RowList.Pad(_message.Length > 0 ? "  " + _message : _choices is null ? "  Enter accept · Esc cancel" : "  Esc cancel", width));
+        foreach (var line in footer)
+        {
+            if (row >= Viewport.Height) break;
+            Move(0, row++);
+            AddStr(RowList.Pad(line, width));
+        }
+        SetAttribute(GetAttributeForRole(VisualRole.Normal));
         return true;
     }
 }
