@@ -230,7 +230,8 @@ public sealed partial class MainWindow
             offers[(char)('1' + i)] = () => ApplyRoot(request.Bias, root.Bias);
         }
         string more = roots.Count > 9 ? $" (+{roots.Count - 9} more)" : "";
-        _prompt.Choose($"{goal} at {request.Bias} = {string.Join(" · ", parts)}{more}.  digit applies · Esc leave", offers);
+        _prompt.Choose($"{goal} at {request.Bias} = {string.Join(" · ", parts)}{more}.\ndigit applies · Esc leave", offers,
+            onCancel: () => Say("target values left; the device is unchanged"));
     }
 
     /// <summary>The latest fit's task (it ends as cancelled after Esc), for tests that check the work really stops.</summary>
@@ -292,8 +293,9 @@ public sealed partial class MainWindow
         string bounds = result.AtBounds.Count > 0 ? $" · at a bound: {string.Join(", ", result.AtBounds)}" : "";
         string how = result.Converged ? $"fit ({result.Iterations} steps)" : $"fit NOT converged ({result.Message})";
         var edits = request.Fields.Select(f => (f.FieldPath!, f.Format(result.Values[f.DevicePath]))).ToList();
-        _prompt.Choose($"{how}: {values}; {residuals}{bounds}.  a applies · Esc leave",
-            new Dictionary<char, Action> { ['a'] = () => Report(_session.SetValues(edits, "fit applied: " + string.Join(", ", edits.Select(e => $"{e.Item1} = {e.Item2}")))) });
+        _prompt.Choose($"{how}: {values}; {residuals}{bounds}.\na applies · Esc leave",
+            new Dictionary<char, Action> { ['a'] = () => Report(_session.SetValues(edits, "fit applied: " + string.Join(", ", edits.Select(e => $"{e.Item1} = {e.Item2}")))) },
+            onCancel: () => Say("fit result left; the device is unchanged"));
     }
 
     private void ApplyRoot(string biasOrPath, double value)

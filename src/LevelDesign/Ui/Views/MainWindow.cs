@@ -427,7 +427,7 @@ public sealed partial class MainWindow : Window
             ['c'] = () => AskNewCoupler(CouplerKind.Capacitive), ['i'] = () => AskNewCoupler(CouplerKind.Inductive),
             ['x'] = () => AskNewCoupler(CouplerKind.Exchange),
         };
-        _prompt.Choose("add: t transmon · u tunable transmon · f fluxonium · k kerr · r resonator │ couplers: c capacitive · i inductive · x exchange", kinds);
+        _prompt.Choose("add: t transmon · u tunable transmon · f fluxonium · k kerr · r resonator\ncouplers: c capacitive · i inductive · x exchange", kinds);
     }
 
     private void AskNewElement(ElementKind kind) =>
