@@ -32,6 +32,12 @@ public class TextFitTests
     }
 
     [Fact]
+    public void A_leading_indent_stays_on_the_first_line()
+    {
+        Assert.Equal(["  ab cd", "ef"], TextFit.Wrap("  ab cd ef", 7).ToList());
+    }
+
+    [Fact]
     public void Wrapped_paragraphs_indent_every_line_after_the_first_and_too_many_lines_end_in_an_ellipsis()
     {
         var lines = TextFit.WrapLines("one two three\nfour five", 9, indent: "  ");

@@ -31,10 +31,12 @@ public static class CrossingsText
         int gapWidth = Math.Max("gap MHz".Length, gaps.Max(g => g.Length));
         int biasWidth = Math.Max(axis.Length, biases.Max(b => b.Length));
         int distanceWidth = Math.Max("distance".Length, distances.Max(d => d.Length));
-        // The distance column goes first when the page is too narrow (the order of the rows still ranks by it).
-        bool showDistance = ranked && 3 + labelWidth + 1 + gapWidth + 1 + biasWidth + 2 + distanceWidth <= width;
+        // On a narrow page the gap and bias columns close up, then the distance column goes (the rows still rank by it).
+        int Length(int space, bool distance) => 3 + labelWidth + 1 + gapWidth + space + biasWidth + (distance ? 2 + distanceWidth : 0);
+        bool showDistance = ranked && Length(1, true) <= width;
+        string space = Length(2, showDistance) <= width ? "  " : " ";
         string Row(string number, string label, string gap, string bias, string distance) =>
-            $"{number,2} {label.PadRight(labelWidth)} {gap.PadLeft(gapWidth)} {bias.PadLeft(biasWidth)}{(showDistance ? "  " + distance.PadLeft(distanceWidth) : "")}";
+            $"{number,2} {label.PadRight(labelWidth)} {gap.PadLeft(gapWidth)}{space}{bias.PadLeft(biasWidth)}{(showDistance ? "  " + distance.PadLeft(distanceWidth) : "")}";
         var lines = new List<TextLine>
         {
             new(TextFit.Cut(ranked ? "nearest to the file's operating points first" : "in bias order (no operating point on this axis)", width), Heading: true),

@@ -25,6 +25,19 @@ public static class TextFit
     /// <summary>As <see cref="Wrap(string, int)"/>, with a different width for the first line and for the others.</summary>
     public static IEnumerable<string> Wrap(string text, int firstWidth, int restWidth)
     {
+        // leading spaces are an indent of the first line, not empty words
+        string body = text.TrimStart(' ');
+        string lead = text[..(text.Length - body.Length)];
+        if (lead.Length > 0 && lead.Length < firstWidth)
+        {
+            bool first = true;
+            foreach (var wrapped in Wrap(body, firstWidth - lead.Length, restWidth))
+            {
+                yield return first ? lead + wrapped : wrapped;
+                first = false;
+            }
+            yield break;
+        }
         int width = Math.Max(1, firstWidth);
         var line = "";
         foreach (var piece in text.Split(' '))

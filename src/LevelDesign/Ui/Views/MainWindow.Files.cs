@@ -18,7 +18,7 @@ public sealed partial class MainWindow
     {
         if (asPath is null && _session.Path is not null && _session.ChangedOnDisk)
         {
-            _prompt.Choose($"{Path.GetFileName(_session.Path)} changed on disk since it was loaded.  o overwrite · Esc keep editing (Ctrl+L reloads)",
+            _prompt.Choose($"{Path.GetFileName(_session.Path)} changed on disk since it was loaded.\no overwrite · Esc keep editing (Ctrl+L reloads)",
                 new Dictionary<char, Action> { ['o'] = () => SaveNow(null) });
             return;
         }
@@ -100,7 +100,7 @@ public sealed partial class MainWindow
     private void OfferRecovery()
     {
         if (_session.RecoveryText is null) return;
-        _prompt.Choose($"found edits not saved by a session that ended early ({Path.GetFileName(_session.Path)}.autosave).  r recover · d discard · Esc decide later",
+        _prompt.Choose($"found edits not saved by a session that ended early ({Path.GetFileName(_session.Path)}.autosave).\nr recover · d discard · Esc decide later",
             new Dictionary<char, Action>
             {
                 ['r'] = () => Report(_session.AcceptRecovery()),

@@ -458,7 +458,7 @@ public sealed partial class MainWindow : Window
         if (id is null) { Say("select an element, coupler or bias to remove"); return; }
         var also = _session.Document?.AlsoRemoved(id) ?? [];
         string with = also.Count == 0 ? "" : $" with {string.Join(", ", also)}";
-        _prompt.Choose($"remove '{id}'{with}?  y remove · Esc keep",
+        _prompt.Choose($"remove '{id}'{with}?\ny remove · Esc keep",
             new Dictionary<char, Action> { ['y'] = () => Report(_session.Remove(id)) });
     }
 
