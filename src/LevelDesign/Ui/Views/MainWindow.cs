@@ -135,7 +135,7 @@ public sealed partial class MainWindow : Window
 
     /// <summary>
     /// The keys of the key bar in display order, each with its action; rank 0 is always shown, larger ranks are
-    /// left out first on narrow screens (the help page lists them all). "Esc stop" shows while work can be cancelled.
+    /// left out first on narrow screens (the help page lists them all). "Esc Stop" shows while work can be cancelled.
     /// </summary>
     private IReadOnlyList<(KeyHint Hint, Key Key, Action? Action)> WindowKeys() =>
     [

@@ -12,7 +12,7 @@ namespace LevelDesign.Ui.Views;
 /// cancels; a refused answer keeps the prompt open and shows the reason) or a one-key choice such as
 /// "s save and quit · d discard · Esc stay". Used instead of modal dialogs so nothing ever blocks.
 /// </summary>
-public sealed class PromptBar : View
+public sealed class PromptBar : WrappedHeightView
 {
     private readonly TextField _input;
     private Func<string, string?>? _onAnswer;
@@ -88,26 +88,16 @@ public sealed class PromptBar : View
 
     /// <summary>At most this many lines of question, and of message below the answer.</summary>
     public const int MaxQuestionLines = 6, MaxMessageLines = 3;
-    private int _rows = 3;
-
-    /// <summary>Raised when the prompt needs a different number of lines; the window moves it up or down.</summary>
-    public event Action? RowsChanged;
 
     /// <summary>Lines in use at the current width: the wrapped question, the answer (when typed), the message.</summary>
-    public int Rows => QuestionLines(AvailableWidth()).Count + (_choices is null ? 1 : 0) + FooterLines(AvailableWidth()).Count;
+    public override int Rows => QuestionLines(AvailableWidth()).Count + (_choices is null ? 1 : 0) + FooterLines(AvailableWidth()).Count;
 
-    /// <summary>Sets the height (and the answer's row) to what the question and message need at the current width.</summary>
-    public void Refit()
+    /// <summary>Also puts the answer on the line under the question.</summary>
+    public override void Refit()
     {
         _input.Y = QuestionLines(AvailableWidth()).Count;
-        int rows = Rows;
-        if (rows == _rows) return;
-        _rows = rows;
-        Height = rows;
-        RowsChanged?.Invoke();
+        base.Refit();
     }
-
-    private int AvailableWidth() => SuperView is { } parent && parent.Viewport.Width > 0 ? parent.Viewport.Width : Math.Max(Frame.Width, 1);
 
     private IReadOnlyList<string> QuestionLines(int width) =>
         TextFit.WrapLines("» " + _question, width, MaxQuestionLines, indent: "  ");

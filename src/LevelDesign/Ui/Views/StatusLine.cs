@@ -9,21 +9,17 @@ namespace LevelDesign.Ui.Views;
 /// work), keeping the most important ones when they do not all fit, then the latest message, wrapped onto up to
 /// <see cref="MaxMessageLines"/> lines so no reason is cut off.
 /// </summary>
-public sealed class StatusLine : View
+public sealed class StatusLine : WrappedHeightView
 {
     public const int MaxMessageLines = 3;
     private IReadOnlyList<(string Text, int Rank)> _facts = [];
     private string _message = "";
-    private int _rows = 2;
 
     public StatusLine()
     {
         Height = 2;
         CanFocus = false;
     }
-
-    /// <summary>Raised when the message needs a different number of lines; the window moves what is above.</summary>
-    public event Action? RowsChanged;
 
     /// <summary>Facts in display order; a larger rank is left out first when the line is too narrow.</summary>
     public void SetFacts(IReadOnlyList<(string Text, int Rank)> facts)
@@ -42,19 +38,7 @@ public sealed class StatusLine : View
     }
 
     /// <summary>Lines in use: the facts and the wrapped message.</summary>
-    public int Rows => 1 + MessageLines(AvailableWidth()).Count;
-
-    /// <summary>Sets the height to the rows the message needs at the current width.</summary>
-    public void Refit()
-    {
-        int rows = Rows;
-        if (rows == _rows) return;
-        _rows = rows;
-        Height = rows;
-        RowsChanged?.Invoke();
-    }
-
-    private int AvailableWidth() => SuperView is { } parent && parent.Viewport.Width > 0 ? parent.Viewport.Width : Math.Max(Frame.Width, 1);
+    public override int Rows => 1 + MessageLines(AvailableWidth()).Count;
 
     private string FactsLine(int width) => TextFit.KeepMostImportant(_facts, width, " │ ");
 
