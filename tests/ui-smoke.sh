@@ -99,7 +99,8 @@ wait_for "trunc" 20
 wait_for "flux        0 Φ0 ← bias qa_flux" 5
 key_bar_ends_with "F1 all keys"
 keys F9; clear_field 60
-keys "fit qa.ej_sum qa.ec qb.ej_sum qb.ec to qa.f01 = 5.5 GHz, qa.anharmonicity = -220 MHz, qb.f01 = 4.9 GHz, qb.anharmonicity = -230 MHz" Enter
+# six parameters, six targets at three settings: tens of seconds if not cancelled
+keys "fit qa.ej_sum qa.ec qb.ej_sum qb.ec qc.ej_sum qc.ec to qa.f01 = 5.5 GHz at idle, qa.anharmonicity = -220 MHz at coupler_low, qb.f01 = 4.9 GHz at idle, qb.anharmonicity = -230 MHz at coupler_low, qc.f01 = 6.2 GHz, qc.anharmonicity = -110 MHz" Enter
 wait_for "Esc cancels" 10
 keys Escape
 wait_for "fit cancelled" 5

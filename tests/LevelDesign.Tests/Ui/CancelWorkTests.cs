@@ -10,9 +10,10 @@ namespace LevelDesign.Tests.Ui;
 [Collection("terminal ui")]
 public class CancelWorkTests
 {
-    /// <summary>Four parameters against four targets on the five-element demo device: many full solves.</summary>
-    private const string LongFit =
-        "fit qa.ej_sum qa.ec qb.ej_sum qb.ec to qa.f01 = 5.5 GHz, qa.anharmonicity = -220 MHz, qb.f01 = 4.9 GHz, qb.anharmonicity = -230 MHz";
+    /// <summary>Six parameters against six targets at three settings of the five-element demo device (tens of seconds uncancelled).</summary>
+    public const string LongFit =
+        "fit qa.ej_sum qa.ec qb.ej_sum qb.ec qc.ej_sum qc.ec to qa.f01 = 5.5 GHz at idle, qa.anharmonicity = -220 MHz at coupler_low, " +
+        "qb.f01 = 4.9 GHz at idle, qb.anharmonicity = -230 MHz at coupler_low, qc.f01 = 6.2 GHz, qc.anharmonicity = -110 MHz";
 
     private static bool Finished(Task task, TimeSpan within) => Task.WhenAny(task, Task.Delay(within)).GetAwaiter().GetResult() == task;
 

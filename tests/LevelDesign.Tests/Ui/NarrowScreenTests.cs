@@ -104,6 +104,20 @@ public class NarrowScreenTests
     }
 
     [Fact]
+    public void A_long_offer_is_shortened_but_keeps_its_keys_line()
+    {
+        using var ui = new UiHarness(80, 24);
+        ui.WaitIdle();
+        string values = string.Join(" · ", Enumerable.Range(1, 30).Select(i => $"q{i}.ec = {200 + i} MHz"));
+        ui.Window.Prompt.Choose($"fit (3 steps): {values}.\na applies · Esc leave", new Dictionary<char, Action> { ['a'] = () => { } });
+        var rows = Rows(ui);
+        Assert.Contains(rows, r => r.Contains("» fit (3 steps): q1.ec = 201 MHz", StringComparison.Ordinal));
+        Assert.Contains(rows, r => r.TrimEnd().TrimEnd('│').TrimEnd().EndsWith('…'));
+        Assert.Contains(rows, r => r.Contains("  a applies · Esc leave", StringComparison.Ordinal));
+        ui.Press(Key.Esc);
+    }
+
+    [Fact]
     public void A_long_status_message_wraps_instead_of_being_cut()
     {
         using var ui = new UiHarness(80, 24, device: "pair.toml");

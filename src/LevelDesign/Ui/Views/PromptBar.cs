@@ -87,7 +87,7 @@ public sealed class PromptBar : WrappedHeightView
     }
 
     /// <summary>At most this many lines of question, and of message below the answer.</summary>
-    public const int MaxQuestionLines = 6, MaxMessageLines = 3;
+    public const int MaxQuestionLines = 8, MaxMessageLines = 3;
 
     /// <summary>Lines in use at the current width: the wrapped question, the answer (when typed), the message.</summary>
     public override int Rows => QuestionLines(AvailableWidth()).Count + (_choices is null ? 1 : 0) + FooterLines(AvailableWidth()).Count;
@@ -99,8 +99,20 @@ public sealed class PromptBar : WrappedHeightView
         base.Refit();
     }
 
-    private IReadOnlyList<string> QuestionLines(int width) =>
-        TextFit.WrapLines("» " + _question, width, MaxQuestionLines, indent: "  ");
+    /// <summary>
+    /// The question wrapped; when it needs more than <see cref="MaxQuestionLines"/>, its first part is shortened
+    /// (ending in "…") and its last line of keys ("a applies · Esc leave", after the last '\n') is kept whole.
+    /// </summary>
+    private IReadOnlyList<string> QuestionLines(int width)
+    {
+        var all = TextFit.WrapLines("» " + _question, width, indent: "  ");
+        if (all.Count <= MaxQuestionLines) return all;
+        int split = _question.LastIndexOf('\n');
+        if (split < 0) return TextFit.WrapLines("» " + _question, width, MaxQuestionLines, indent: "  ");
+        var keys = TextFit.WrapLines("  " + _question[(split + 1)..], width, indent: "  ");
+        var body = TextFit.WrapLines("» " + _question[..split], width, Math.Max(1, MaxQuestionLines - keys.Count), indent: "  ");
+        return [.. body, .. keys];
+    }
 
     /// <summary>The refusal message, or the keys to answer (left out for a choice whose question already names Esc).</summary>
     private IReadOnlyList<string> FooterLines(int width) =>
