@@ -22,9 +22,20 @@ public static class KeyBarText
         return Shown(kept, cut);
     }
 
-    /// <summary>The fitted bar as plain text, as drawn.</summary>
+    /// <summary>The fitted bar as plain text.</summary>
     public static string Line(IReadOnlyList<KeyHint> hints, int width) =>
         TextFit.Cut(string.Join(Separator, Fit(hints, width).Select(p => $"{p.Key} {p.Label}")), width);
+
+    /// <summary>
+    /// The entries for a bar of <paramref name="width"/> columns and where they start: one column in, unless
+    /// starting at the edge fits more (all keys in full at exactly 120 columns, say).
+    /// </summary>
+    public static (IReadOnlyList<(string Key, string Label)> Items, int Indent) Layout(IReadOnlyList<KeyHint> hints, int width)
+    {
+        var indented = Fit(hints, width - 1);
+        var edge = Fit(hints, width);
+        return Length(edge) > Length(indented) ? (edge, 0) : (indented, 1);
+    }
 
     private static List<(string Key, string Label)> Shown(IEnumerable<KeyHint> hints, bool cut) =>
         hints.Select(h => (h.ShortKey, cut && h.LabelWhenCut is not null ? h.LabelWhenCut : h.Label)).ToList();

@@ -24,9 +24,6 @@ public sealed class KeyBar : View
         set { _hints = value; SetNeedsDraw(); }
     }
 
-    /// <summary>The text drawn at the current width (for tests and the smoke script).</summary>
-    public string ShownText => KeyBarText.Line(_hints, Math.Max(0, Viewport.Width - 1));
-
     protected override bool OnDrawingContent(DrawContext? context)
     {
         int width = Viewport.Width;
@@ -35,9 +32,9 @@ public sealed class KeyBar : View
         SetAttribute(normal);
         Move(0, 0);
         AddStr(new string(' ', Math.Max(0, width)));
-        Move(1, 0);
-        int room = width - 1, used = 0;
-        var items = KeyBarText.Fit(_hints, room);
+        var (items, indent) = KeyBarText.Layout(_hints, width);
+        Move(indent, 0);
+        int room = width - indent, used = 0;
         for (int i = 0; i < items.Count && used < room; i++)
         {
             string separator = i == 0 ? "" : KeyBarText.Separator;
