@@ -1,5 +1,6 @@
 #!/usr/bin/env bash
-# Smoke test of the real terminal UI in tmux at 80x24 and 120x40: sends keys, captures the pane, checks text.
+# Smoke test of the real terminal UI in tmux at 80x24, 100x30 and 120x40: sends keys, captures the pane, checks text
+# (the key bar, the bias marker and the F9 question fit; Esc cancels a fit).
 # Also kills the process mid-edit (kill -9) and checks that the next start offers the recovered edits.
 # Usage: tests/ui-smoke.sh            (skips with exit 0 when tmux is missing)
 # LEVELDESIGN_CMD overrides how the UI is started (default: dotnet <built leveldesign.dll>).
@@ -33,12 +34,20 @@ start() { # width height
   tmux new-session -d -s "$SESSION" -x "$1" -y "$2" "cd '$WORK' && $CMD pair.toml; echo UI-EXITED; sleep 30"
 }
 keys() { tmux send-keys -t "$SESSION" "$@"; sleep 0.3; }
-clear_field() { keys End; for _ in $(seq 30); do tmux send-keys -t "$SESSION" BSpace; done; sleep 0.2; }
+clear_field() { keys End; for _ in $(seq "${1:-30}"); do tmux send-keys -t "$SESSION" BSpace; done; sleep 0.2; }
+# Fails unless the key bar (the row above the bottom border) ends with the given entry.
+key_bar_ends_with() { capture | grep -qP -- "\\Q$1\\E *│$" || { echo "FAIL: the key bar does not end with '$1'"; capture; fail=1; }; }
 
 echo "== 80x24: open, edit, sweep, cursor"
 start 80 24
 wait_for "States at cursor" 40
 wait_for "trunc" 20
+key_bar_ends_with "F1 all keys"
+wait_for "flux        0 Φ0 ← qa_flux" 5
+keys F9
+wait_for "» target: QUANTITY = VALUE by BIAS LOW to HIGH" 5
+wait_for "  or  fit PATH [LOW..HIGH] [PATH ...] to QUANTITY = VALUE [at POINT][, ...]" 5
+keys Escape
 keys Enter; keys Enter              # board → form → edit the first value
 wait_for "» elements." 5
 clear_field; keys "210 MHz" Enter
@@ -82,10 +91,31 @@ keys Escape
 keys C-q; keys d
 wait_for "UI-EXITED" 10
 
+echo "== 100x30: the whole bias marker; a fit cancelled with Esc leaves the file as it was"
+cp devices/pair.toml "$WORK/pair.toml"; rm -f "$WORK/pair.toml.autosave"
+start 100 30
+wait_for "States at cursor" 40
+wait_for "trunc" 20
+wait_for "flux        0 Φ0 ← bias qa_flux" 5
+key_bar_ends_with "F1 all keys"
+keys F9; clear_field 60
+# six parameters, six targets at three settings: tens of seconds if not cancelled
+keys "fit qa.ej_sum qa.ec qb.ej_sum qb.ec qc.ej_sum qc.ec to qa.f01 = 5.5 GHz at idle, qa.anharmonicity = -220 MHz at coupler_low, qb.f01 = 4.9 GHz at idle, qb.anharmonicity = -230 MHz at coupler_low, qc.f01 = 6.2 GHz, qc.anharmonicity = -110 MHz" Enter
+wait_for "Esc cancels" 10
+keys Escape
+wait_for "fit cancelled" 5
+sleep 1
+capture | grep -qF "a applies" && { echo "FAIL: a cancelled fit offered its values"; capture; fail=1; }
+cmp -s devices/pair.toml "$WORK/pair.toml" || { echo "FAIL: the cancelled fit changed the file"; fail=1; }
+capture > "$WORK/100x30.txt"
+keys C-q
+wait_for "UI-EXITED" 10
+
 echo "== 120x40: spectrum and states together, help, limits"
 start 120 40
 wait_for "States at cursor" 40
 wait_for "Spectrum" 5
+key_bar_ends_with "F1 Help"
 keys F1; wait_for "Keys" 5
 keys l; wait_for "Limits of the model" 5
 capture > "$WORK/120x40.txt"

@@ -13,7 +13,7 @@ namespace LevelDesign.Ui.Compute;
 /// </summary>
 public static partial class FitRequestParser
 {
-    public const string Syntax = "fit PATH [LOW..HIGH] … to QUANTITY = VALUE [at POINT], …  e.g. fit qa.ej_sum qa.ec to qa.f01 = 5.2 GHz, qa.anharmonicity = -230 MHz";
+    public const string Syntax = "fit PATH [LOW..HIGH] [PATH ...] to QUANTITY = VALUE [at POINT][, ...]  e.g. fit qa.ej_sum qa.ec to qa.f01 = 5.2 GHz, qa.anharmonicity = -230 MHz";
 
     public static bool IsFit(string text) => text.TrimStart().StartsWith("fit ", StringComparison.Ordinal);
 

@@ -11,7 +11,7 @@ namespace LevelDesign.Ui.Compute;
 /// </summary>
 public static class SweepRequestParser
 {
-    public const string Syntax = "BIAS START STOP POINTS (e.g. qc_flux 0.3 mA 0.6 mA 41) [link PATH SCALE SHIFT]…  or a sweep name from the file";
+    public const string Syntax = "BIAS START STOP POINTS (e.g. qc_flux 0.3 mA 0.6 mA 41) [link PATH SCALE SHIFT]...  or a sweep name from the file";
 
     public static SweepRequest? Parse(string text, DeviceDocument document, out string? error)
     {

@@ -62,13 +62,13 @@ public static class BoardOutline
                     string shown = FieldUnits.Display(value, kind);
                     // The file's biases override element values: show where the value comes from and edit the bias.
                     if (document.Biases.FirstOrDefault(b => b.Target == $"{element.Id}.{name}") is { } bias)
-                        rows.Add(new FieldRow(name, $"{shown} ← bias {bias.Name}", $"biases.{bias.Name}.value",
+                        rows.Add(new FieldRow(name, shown, $"biases.{bias.Name}.value",
                             $"sets {bias.Target} through bias {bias.Name}; control value{ControlUnitHint(bias)}",
-                            QuantityFormatter.Format(bias.Value, bias.ControlKind)));
+                            QuantityFormatter.Format(bias.Value, bias.ControlKind), Note: $"← bias {bias.Name}", ShortNote: $"← {bias.Name}"));
                     else if (document.ValueTextOf(path) is string written)
                         rows.Add(new FieldRow(name, shown, path, kind.ExampleText(), written));
                     else if (DerivedFrom(document, element.Id, name) is string source)
-                        rows.Add(new FieldRow(name, $"{shown} ({source})", null, ""));
+                        rows.Add(new FieldRow(name, shown, null, "", Note: $"({source})", ShortNote: ""));
                     else if (fileKeys.Contains(name))
                         rows.Add(new FieldRow(name, shown, path, kind.ExampleText() + " (not in the file yet: the edit adds it)"));
                     else
@@ -101,7 +101,7 @@ public static class BoardOutline
                 string strengthPath = $"couplers.{c.Id}.{name}";
                 rows.Add(document.ValueTextOf(strengthPath) is string written
                     ? new FieldRow(name, FieldUnits.Display(value, unit), strengthPath, unit.ExampleText(), written)
-                    : new FieldRow(name, $"{FieldUnits.Display(value, unit)} (from [capacitance_matrix])", null, ""));
+                    : new FieldRow(name, FieldUnits.Display(value, unit), null, "", Note: "(from [capacitance_matrix])", ShortNote: ""));
                 return rows;
             }
             case BoardNodeKind.Bias:

@@ -13,14 +13,15 @@ public static class HelpText
         int room = Math.Max(20, width - 30);
         foreach (var (keys, what) in KeyHelp.All)
         {
-            var wrapped = Wrap(what, room).ToList();
+            var wrapped = TextFit.Wrap(what, room).ToList();
             lines.Add(new TextLine($"  {keys,-27} {wrapped[0]}"));
             foreach (var more in wrapped.Skip(1)) lines.Add(new TextLine($"  {"",-27} {more}"));
         }
         lines.Add(new TextLine(""));
         lines.Add(new TextLine("Marks", Heading: true));
-        lines.Add(new TextLine("  ● unsaved changes    ⚠ file changed on disk    " + StatesTableText.Legend));
-        lines.Add(new TextLine("  × crossing on the spectrum    ┊ bias cursor    ⟳ computing"));
+        lines.AddRange(Indented("● unsaved changes   ⚠ file changed on disk   ⟳ computing", width));
+        lines.AddRange(Indented(StatesTableText.Legend, width));
+        lines.AddRange(Indented("× crossing on the spectrum   ┊ bias cursor   … text cut to fit (Enter on a row, or a wider terminal, shows it whole)", width));
         lines.Add(new TextLine(""));
         lines.Add(new TextLine("Press L for the limits of the model and the conventions used.", Heading: true));
         return lines;
@@ -29,27 +30,20 @@ public static class HelpText
     public static IReadOnlyList<TextLine> Limits(int width = 100) =>
     [
         new("Limits of the model", Heading: true),
-        .. Wrap(Conventions.LimitsOfModel, Math.Max(20, width - 3)).Select(l => new TextLine("  " + l)),
+        .. Indented(Conventions.LimitsOfModel, width),
         new(""),
         new("Conventions", Heading: true),
         .. new[] { Conventions.Energies, Conventions.Transitions, Conventions.LambShift, Conventions.DispersiveShift,
                    Conventions.ZZ, Conventions.Purity, Conventions.Purcell }
-            .SelectMany(c => Wrap(c, Math.Max(20, width - 3))).Select(l => new TextLine("  " + l)),
+            .SelectMany(c => Indented(c, width)),
         new(""),
         new("Eigensolver", Heading: true),
-        new("  " + EigenSolvers.Describe()),
+        .. Indented(EigenSolvers.Describe(), width),
         new(""),
         new("Press L again for the keys.", Heading: true),
     ];
 
-    public static IEnumerable<string> Wrap(string text, int width)
-    {
-        var line = "";
-        foreach (var word in text.Split(' '))
-        {
-            if (line.Length + word.Length + 1 > width && line.Length > 0) { yield return line; line = ""; }
-            line = line.Length == 0 ? word : line + " " + word;
-        }
-        if (line.Length > 0) yield return line;
-    }
+    /// <summary>A paragraph wrapped to the page and indented by two columns.</summary>
+    private static IEnumerable<TextLine> Indented(string text, int width) =>
+        TextFit.Wrap(text, Math.Max(20, width - 3)).Select(l => new TextLine("  " + l));
 }

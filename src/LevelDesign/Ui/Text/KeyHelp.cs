@@ -1,6 +1,6 @@
 namespace LevelDesign.Ui.Text;
 
-/// <summary>Every key of the board, in one list for the help page (the status bar shows the main ones).</summary>
+/// <summary>Every key of the board, in one list for the help page (the key bar shows the main ones, as many as fit).</summary>
 public static class KeyHelp
 {
     public static readonly IReadOnlyList<(string Keys, string What)> All =
@@ -16,7 +16,7 @@ public static class KeyHelp
         ("Delete (board)", "remove the selected element, coupler or bias; the question lists what goes with it (an element's couplers and biases, sweeps and point values naming them)"),
         ("F6 (board)", "rename the selected element, coupler or bias; every reference in the file follows"),
         ("F5", "sweep: bias (or bias+linked path), start, stop (0.3 mA or plain SI), points; runs in the background"),
-        ("Esc (while sweeping)", "cancel the running sweep (points computed so far are kept)"),
+        ("Esc (while working)", "stop the running sweep (keeping its points), fit or target search (device unchanged)"),
         ("F7", "spectrum manifold: single excitations → up to two → all kept"),
         ("← → (spectrum)", "move the bias cursor; Shift+← → jump 10 points"),
         ("+ / − (spectrum)", "zoom the frequency axis in / out"),
@@ -24,7 +24,7 @@ public static class KeyHelp
         ("Enter (crossings)", "move the cursor to the sweep point nearest that crossing and show the spectrum; crossings are listed nearest to the file's operating points first"),
         ("F8", "export the sweep (or the states table) to .csv or .json, or the spectrum with its crossings to .svg or .png"),
         ("F9", "target: every bias in a range where a quantity has a value (qa.f01 = 5.2 GHz by qa_flux 0 to 0.5; zz:qa:qb = 0 MHz by qc_flux 0.15 mA to 1 mA); a digit applies one root (undoable)"),
-        ("F9 fit …", "fit qa.ej_sum 10 GHz..40 GHz qa.ec to qa.f01 = 5.2 GHz, qa.anharmonicity = -230 MHz [at POINT]; a applies (one undo)"),
+        ("F9 fit", "fit qa.ej_sum 10 GHz..40 GHz qa.ec to qa.f01 = 5.2 GHz, qa.anharmonicity = -230 MHz [at POINT]; a applies (one undo)"),
         ("Ctrl+S", "save (comments and layout kept, atomic, previous file kept as .bak)"),
         ("Ctrl+W", "save as"),
         ("Ctrl+Z / Ctrl+Y", "undo / redo (every edit)"),

@@ -8,60 +8,79 @@ namespace LevelDesign.Ui.Text;
 /// <summary>The 2χ matrix (qubit rows × resonator columns), the ZZ matrix and per-element transitions, in MHz.</summary>
 public static class ShiftsText
 {
+    /// <param name="width">Columns of the page: conventions wrap, and columns narrow to their contents.</param>
     public static IReadOnlyList<TextLine> Build(DerivedQuantities q, string where, IReadOnlyList<ConvergenceEntry>? convergence = null, Device? device = null,
-        string? convergenceProblem = null)
+        string? convergenceProblem = null, int width = 100)
     {
-        var lines = new List<TextLine> { new($"At {where}; all in MHz", Heading: true) };
+        var lines = new List<TextLine>();
+        lines.AddRange(Wrapped($"At {where}; all in MHz", width, heading: true));
 
         lines.Add(new TextLine(""));
         lines.Add(new TextLine("2χ  qubit ↓ × resonator →", Heading: true));
-        lines.Add(new TextLine(Conventions.DispersiveShift));
+        lines.AddRange(Wrapped(Conventions.DispersiveShift, width));
         lines.AddRange(Matrix(q.DispersiveShifts.Select(p => p.First).Distinct().ToList(),
             q.DispersiveShifts.Select(p => p.Second).Distinct().ToList(), q.DispersiveShifts, symmetric: false));
 
         lines.Add(new TextLine(""));
         lines.Add(new TextLine("ZZ  ζ/h", Heading: true));
-        lines.Add(new TextLine(Conventions.ZZ));
+        lines.AddRange(Wrapped(Conventions.ZZ, width));
         var qubits = q.ZZ.SelectMany(p => new[] { p.First, p.Second }).Distinct().ToList();
         lines.AddRange(Matrix(qubits, qubits, q.ZZ, symmetric: true));
 
         lines.Add(new TextLine(""));
-        lines.Add(new TextLine("Transitions (GHz)        f01 dressed    α (MHz)   Lamb (MHz)", Heading: true));
-        lines.Add(new TextLine(Conventions.Transitions));
-        foreach (var t in q.Transitions)
-            lines.Add(new TextLine($"  {t.ElementId,-22} {Numbers.GHz(t.DressedF01),11} {Numbers.MHz(t.Anharmonicity, 2),10} {Numbers.MHz(t.LambShift, 3),12}"));
+        lines.AddRange(Transitions(q, width));
         if (q.Purcell.Count > 0)
         {
             lines.Add(new TextLine(""));
             lines.Add(new TextLine("Purcell", Heading: true));
-            lines.Add(new TextLine(Conventions.Purcell));
+            lines.AddRange(Wrapped(Conventions.Purcell, width));
             foreach (var p in q.Purcell)
-                lines.Add(new TextLine($"  {p.Qubit} via {p.Resonator}: γ = {Numbers.MHz(p.RateGHz, 6)} MHz"));
+                lines.AddRange(Wrapped($"  {p.Qubit} via {p.Resonator}: γ = {Numbers.MHz(p.RateGHz, 6)} MHz", width));
         }
-        if (convergence is not null && device is not null) lines.AddRange(Convergence(convergence, device));
+        if (convergence is not null && device is not null) lines.AddRange(Convergence(convergence, device, width));
         if (convergenceProblem is not null)
         {
             lines.Add(new TextLine(""));
             lines.Add(new TextLine("Truncation check at the file's biases", Heading: true));
-            lines.Add(new TextLine("  not run: " + convergenceProblem, Warning: true));
+            lines.AddRange(Wrapped("  not run: " + convergenceProblem, width, warning: true));
         }
         return lines;
     }
 
+    private static IEnumerable<TextLine> Wrapped(string text, int width, bool heading = false, bool warning = false) =>
+        TextFit.WrapLines(text, width, indent: "  ").Select(l => new TextLine(l, Warning: warning, Heading: heading));
+
+    /// <summary>Dressed f01 (GHz), α and Lamb shift (MHz) per element; the element column is as wide as the longest id.</summary>
+    private static IEnumerable<TextLine> Transitions(DerivedQuantities q, int width)
+    {
+        int idWidth = Math.Max(7, q.Transitions.Select(t => t.ElementId.Length).DefaultIfEmpty(0).Max());
+        yield return new TextLine("Transitions (dressed)", Heading: true);
+        foreach (var line in Wrapped(Conventions.Transitions, width)) yield return line;
+        yield return new TextLine($"  {"element".PadRight(idWidth)} {"f01 GHz",11} {"α MHz",10} {"Lamb MHz",11}", Heading: true);
+        foreach (var t in q.Transitions)
+            yield return new TextLine($"  {t.ElementId.PadRight(idWidth)} {Numbers.GHz(t.DressedF01),11} {Numbers.MHz(t.Anharmonicity, 2),10} {Numbers.MHz(t.LambShift, 3),11}");
+    }
+
     /// <summary>Each key value's change when every cutoff is raised, in kHz; the other flagged values on one line.</summary>
-    private static IEnumerable<TextLine> Convergence(IReadOnlyList<ConvergenceEntry> entries, Device device)
+    private static IEnumerable<TextLine> Convergence(IReadOnlyList<ConvergenceEntry> entries, Device device, int width)
     {
         yield return new TextLine("");
         yield return new TextLine("Truncation check at the file's biases", Heading: true);
-        yield return new TextLine($"Δ = change when every cutoff is raised; ✗ when |Δ| > {TruncationConvergence.DefaultToleranceGHz * 1e6:0.#} kHz");
+        foreach (var line in Wrapped($"Δ = change when every cutoff is raised; ✗ when |Δ| > {TruncationConvergence.DefaultToleranceGHz * 1e6:0.#} kHz", width))
+            yield return line;
         yield return new TextLine($"    {"key value",-17}{"MHz",11}{"Δ kHz",10}");
         foreach (var e in ConvergenceSummary.Key(entries, device))
             yield return new TextLine($"  {(e.Flagged ? "✗" : "✓")} {e.Quantity,-17}{Numbers.MHz(e.Value, 4),11}{Kilohertz(e.Change),10}", Warning: e.Flagged);
         var others = entries.Where(e => e.Flagged && !ConvergenceSummary.IsKey(e.Quantity, device)).ToList();
         if (others.Count > 0)
-            yield return new TextLine("  not counted (margin levels): " + string.Join(", ", others.Select(e => $"{e.Quantity} {Kilohertz(e.Change)} kHz")));
+            foreach (var line in Wrapped("  not counted (margin levels): " + string.Join(", ", others.Select(e => $"{e.Quantity} {Kilohertz(e.Change)} kHz")), width))
+                yield return line;
     }
 
+    /// <summary>
+    /// A matrix of values in MHz; columns are as wide as their widest entry (at most 12), so three or four
+    /// fit a narrow page. Ids longer than the row-name column are cut with "…".
+    /// </summary>
     private static IEnumerable<TextLine> Matrix(IReadOnlyList<string> rows, IReadOnlyList<string> columns, IReadOnlyList<PairValue> values, bool symmetric)
     {
         if (rows.Count == 0 || columns.Count == 0)
@@ -69,17 +88,16 @@ public static class ShiftsText
             yield return new TextLine("  (no pairs in this device)");
             yield break;
         }
-        yield return new TextLine("  " + new string(' ', 8) + string.Concat(columns.Select(c => $"{Cut(c),12}")));
-        foreach (var r in rows)
+        string Cell(string r, string c)
         {
-            var cells = columns.Select(c =>
-            {
-                if (symmetric && r == c) return $"{"·",12}";
-                var v = values.FirstOrDefault(p => (p.First == r && p.Second == c) || (symmetric && p.First == c && p.Second == r));
-                return v is null ? $"{"",12}" : $"{Numbers.MHz(v.Value, 4),12}";
-            });
-            yield return new TextLine($"  {Cut(r),-8}" + string.Concat(cells));
+            if (symmetric && r == c) return "·";
+            var v = values.FirstOrDefault(p => (p.First == r && p.Second == c) || (symmetric && p.First == c && p.Second == r));
+            return v is null ? "" : Numbers.MHz(v.Value, 4);
         }
+        int cellWidth = Math.Min(12, 2 + Math.Max(columns.Max(c => Cut(c).Length), rows.SelectMany(r => columns.Select(c => Cell(r, c).Length)).Max()));
+        yield return new TextLine("  " + new string(' ', 8) + string.Concat(columns.Select(c => Cut(c).PadLeft(cellWidth))));
+        foreach (var r in rows)
+            yield return new TextLine($"  {Cut(r),-8}" + string.Concat(columns.Select(c => Cell(r, c).PadLeft(cellWidth))));
     }
 
     private static string Kilohertz(double ghz) =>

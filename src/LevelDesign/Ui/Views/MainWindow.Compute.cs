@@ -268,24 +268,25 @@ public sealed partial class MainWindow
             _ => "",
         };
         var shown = Shown;
+        int width = PageWidth;
         switch (page)
         {
             case Page.States:
-                _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")] : StatesTableText.Build(shown.Spectrum, Where()));
+                _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")] : StatesTableText.Build(shown.Spectrum, Where(), width));
                 break;
             case Page.Shifts:
-                _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")] : ShiftsText.Build(shown.Quantities, Where(), _snapshot?.Convergence, _snapshot?.Spectrum.Device, _snapshot?.ConvergenceProblem));
+                _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")]
+                    : ShiftsText.Build(shown.Quantities, Where(), _snapshot?.Convergence, _snapshot?.Spectrum.Device, _snapshot?.ConvergenceProblem, width));
                 break;
             case Page.Help:
-                int width = Math.Max(40, Frame.Width - (_boardFrame.Visible ? LeftWidth : 0) - 4);
                 _page.SetLines(_showLimits ? HelpText.Limits(width) : HelpText.Keys(width));
                 break;
             case Page.Errors:
-                _page.SetLines(LoadErrorText.Build(_session.LoadErrors, _session.LoadedText, Math.Max(40, Frame.Width - (_boardFrame.Visible ? LeftWidth : 0) - 6)));
+                _page.SetLines(LoadErrorText.Build(_session.LoadErrors, _session.LoadedText, width));
                 break;
             case Page.Crossings:
                 _crossingList.SetLines(CrossingsText.Build(_crossings, _sweep, _series?.AxisName, _crossingsPending,
-                    v => BiasText.Format(_session.Document, _series?.AxisName ?? "", v, digits: 4)));
+                    v => BiasText.Format(_session.Document, _series?.AxisName ?? "", v, digits: 4), width - 1));
                 break;
         }
         SetNeedsDraw();

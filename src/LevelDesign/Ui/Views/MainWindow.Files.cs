@@ -1,6 +1,10 @@
+using LevelDesign.Core.Composite;
+using LevelDesign.Core.Eigen;
+using LevelDesign.Core.Sweeps;
 using LevelDesign.Core.Units;
 using LevelDesign.Ui.Compute;
 using LevelDesign.Ui.Export;
+using LevelDesign.Ui.Session;
 using LevelDesign.Ui.Text;
 
 namespace LevelDesign.Ui.Views;
@@ -14,7 +18,7 @@ public sealed partial class MainWindow
     {
         if (asPath is null && _session.Path is not null && _session.ChangedOnDisk)
         {
-            _prompt.Choose($"{Path.GetFileName(_session.Path)} changed on disk since it was loaded.  o overwrite · Esc keep editing (Ctrl+L reloads)",
+            _prompt.Choose($"{Path.GetFileName(_session.Path)} changed on disk since it was loaded.\no overwrite · Esc keep editing (Ctrl+L reloads)",
                 new Dictionary<char, Action> { ['o'] = () => SaveNow(null) });
             return;
         }
@@ -87,6 +91,8 @@ public sealed partial class MainWindow
         {
             _sweepJobs.Cancel();
             _pointJobs.Cancel();
+            _fitJobs.Cancel();
+            _solveJobs.Cancel();
         }
         return base.OnIsRunningChanging(oldIsRunning, newIsRunning);
     }
@@ -94,7 +100,7 @@ public sealed partial class MainWindow
     private void OfferRecovery()
     {
         if (_session.RecoveryText is null) return;
-        _prompt.Choose($"found edits not saved by a session that ended early ({Path.GetFileName(_session.Path)}.autosave).  r recover · d discard · Esc decide later",
+        _prompt.Choose($"found edits not saved by a session that ended early ({Path.GetFileName(_session.Path)}.autosave).\nr recover · d discard · Esc decide later",
             new Dictionary<char, Action>
             {
                 ['r'] = () => Report(_session.AcceptRecovery()),
@@ -153,6 +159,9 @@ public sealed partial class MainWindow
         });
     }
 
+    /// <summary>The question of F9, one form per line so both read whole at 80 columns.</summary>
+    public const string TargetQuestion = "target: QUANTITY = VALUE by BIAS LOW to HIGH\nor  fit PATH [LOW..HIGH] [PATH ...] to QUANTITY = VALUE [at POINT][, ...]";
+
     private void AskTarget()
     {
         var document = _session.Document;
@@ -161,80 +170,132 @@ public sealed partial class MainWindow
         string range = bias is null ? "qa.flux 0 to 0.5"
             : $"{bias.Name} {BiasText.Format(document, bias.Name, bias.Offset)} to {BiasText.Format(document, bias.Name, bias.Offset + bias.Period / 2)}";
         string quantity = _snapshot?.Quantities.Named().Keys.FirstOrDefault() ?? "qa.f01";
-        _prompt.Ask("target: QUANTITY = VALUE by BIAS LOW to HIGH  ·  or " + FitRequestParser.Syntax, $"{quantity} = 5 GHz by {range}", text =>
+        _prompt.Ask(TargetQuestion, $"{quantity} = 5 GHz by {range}", text =>
         {
             if (FitRequestParser.IsFit(text)) return StartFit(text, document);
             var request = TargetRequestParser.Parse(text, document, _snapshot?.Quantities.Named().Keys, out string? error);
             if (request is null) return error;
-            Say($"⟳ solving {request.Quantity} = {Numbers.GHz(request.GoalGHz)} GHz by {request.Bias} ({TargetSearch.ScanPoints}-point scan, then Brent)…");
-            Task.Run(async () =>
-            {
-                try
-                {
-                    var roots = await _targets.FindAllAsync(document, request, CancellationToken.None).ConfigureAwait(false);
-                    _scheduler.Post(() => OfferRoots(document, request, roots));
-                }
-                catch (Exception e) when (e is not OutOfMemoryException)
-                {
-                    _scheduler.Post(() => Say("✗ target not solved: " + DescribeProblem(e), warning: true));
-                }
-            });
+            StartSolve(document, request);
             return null;
         });
     }
 
+    private void StartSolve(Core.DeviceFiles.DeviceDocument document, TargetRequest request)
+    {
+        var (generation, token) = _solveJobs.Begin();
+        _solving = true;
+        UpdateStatus();
+        Say($"⟳ solving {request.Quantity} = {Numbers.GHz(request.GoalGHz)} GHz by {request.Bias} ({TargetSearch.ScanPoints}-point scan, then Brent); Esc cancels");
+        Task.Run(async () =>
+        {
+            try
+            {
+                var roots = await _targets.FindAllAsync(document, request, token).ConfigureAwait(false);
+                _scheduler.Post(() =>
+                {
+                    if (!_solveJobs.IsCurrent(generation)) return;
+                    _solving = false;
+                    UpdateStatus();
+                    OfferRoots(document, request, roots);
+                });
+            }
+            catch (OperationCanceledException) { }
+            catch (Exception e) when (e is not OutOfMemoryException)
+            {
+                _scheduler.Post(() =>
+                {
+                    if (!_solveJobs.IsCurrent(generation)) return;
+                    _solving = false;
+                    UpdateStatus();
+                    Say("✗ target not solved: " + DescribeProblem(e), warning: true);
+                });
+            }
+        }, CancellationToken.None);
+    }
+
     /// <summary>Lists every root; a digit applies that one to the device (an ordinary, undoable edit of the bias value).</summary>
-    private void OfferRoots(Core.DeviceFiles.DeviceDocument solvedOn, TargetRequest request, IReadOnlyList<Core.Sweeps.TargetRoot> roots)
+    private void OfferRoots(Core.DeviceFiles.DeviceDocument solvedOn, TargetRequest request, IReadOnlyList<TargetRoot> roots)
     {
         string goal = $"{request.Quantity} = {Numbers.GHz(request.GoalGHz)} GHz";
         if (roots.Count == 0) { Say($"✗ {goal} is not reached for {request.Bias} in the range (no sign change on the scan)", warning: true); return; }
-        if (!ReferenceEquals(solvedOn, _session.Document)) Say("the device changed while solving; the roots are for the device as it was");
+        Say(ReferenceEquals(solvedOn, _session.Document) ? "target search done; a digit applies one of the values listed, Esc leaves the device as it is"
+            : "the device changed while solving; the roots are for the device as it was");
         var offers = new Dictionary<char, Action>();
         var parts = new List<string>();
         for (int i = 0; i < roots.Count && i < 9; i++)
         {
             var root = roots[i];
             string at = BiasText.Format(solvedOn, request.Bias, root.Bias);
-            parts.Add($"{i + 1} {at}{(root.Refined ? "" : " (jump, not a root)")}");
+            parts.Add($"[{i + 1}] {at}{(root.Refined ? "" : " (jump, not a root)")}");
             offers[(char)('1' + i)] = () => ApplyRoot(request.Bias, root.Bias);
         }
         string more = roots.Count > 9 ? $" (+{roots.Count - 9} more)" : "";
-        _prompt.Choose($"{goal} at {request.Bias} = {string.Join(" · ", parts)}{more}.  digit applies · Esc leave", offers);
+        _prompt.Choose($"{goal} at {request.Bias} = {string.Join(" · ", parts)}{more}.\ndigit applies · Esc leave", offers,
+            onCancel: () => Say("target values left; the device is unchanged"));
     }
 
+    /// <summary>The latest fit's task (it ends as cancelled after Esc), for tests that check the work really stops.</summary>
+    public Task? RunningFit { get; private set; }
+
+    /// <summary>
+    /// Runs the fit off the UI thread. Esc cancels it: the token reaches Core's fit loop and every full solve (through
+    /// <see cref="CancellableEigenSolver"/>), a late result is dropped, and the device is never touched.
+    /// </summary>
     private string? StartFit(string text, Core.DeviceFiles.DeviceDocument document)
     {
         if (_snapshot is null) return "wait until the device has been computed once (the quantity names come from it)";
         var request = FitRequestParser.Parse(text, document, _snapshot.Quantities.Named().Keys.ToArray(), out string? error);
         if (request is null) return error;
-        Say($"⟳ fitting {string.Join(", ", request.Parameters.Select(p => p.Path))} to {request.Targets.Count} target(s) (least squares, full solves)…");
-        Task.Run(() =>
+        var (generation, token) = _fitJobs.Begin();
+        _fitting = true;
+        UpdateStatus();
+        Say($"⟳ fitting {string.Join(", ", request.Parameters.Select(p => p.Path))} to {request.Targets.Count} target(s) (least squares, full solves); Esc cancels");
+        RunningFit = Task.Run(() =>
         {
             try
             {
-                var result = Core.Sweeps.ParameterFit.Fit(document.Device, request.Parameters, request.Targets);
-                _scheduler.Post(() => OfferFit(document, request, result));
+                var solver = new DeviceSolver(new CancellableEigenSolver(EigenSolvers.Active, token));
+                var result = ParameterFit.Fit(document.Device, request.Parameters, request.Targets, solver, cancellation: token);
+                _scheduler.Post(() =>
+                {
+                    if (!_fitJobs.IsCurrent(generation)) return;
+                    _fitting = false;
+                    UpdateStatus();
+                    OfferFit(document, request, result);
+                });
             }
-            catch (Exception e) when (e is not OutOfMemoryException)
+            // a cancellation passes through and ends the task as cancelled: nothing is posted back
+            catch (Exception e) when (e is not (OutOfMemoryException or OperationCanceledException))
             {
-                _scheduler.Post(() => Say("✗ fit failed: " + DescribeProblem(e), warning: true));
+                _scheduler.Post(() =>
+                {
+                    if (!_fitJobs.IsCurrent(generation)) return;
+                    _fitting = false;
+                    UpdateStatus();
+                    Say("✗ fit failed: " + DescribeProblem(e), warning: true);
+                });
             }
-        });
+        }, token);
         return null;
     }
 
+    /// <summary>Significant digits of a fit residual in the offer (the fitted values keep the digits written to the file).</summary>
+    private const int ResidualDigits = 3;
+
     /// <summary>Fitted values in the file's units and each target's residual; 'a' writes all values as one undoable edit.</summary>
-    private void OfferFit(Core.DeviceFiles.DeviceDocument fittedOn, FitRequest request, Core.Sweeps.FitResult result)
+    private void OfferFit(Core.DeviceFiles.DeviceDocument fittedOn, FitRequest request, FitResult result)
     {
-        if (!ReferenceEquals(fittedOn, _session.Document)) Say("the device changed while fitting; the values are for the device as it was");
+        Say(ReferenceEquals(fittedOn, _session.Document) ? $"fit done ({result.Iterations} steps); a applies the values, Esc leaves the device as it is"
+            : "the device changed while fitting; the values are for the device as it was");
         string values = string.Join(" · ", request.Fields.Select(f => $"{f.DevicePath} = {f.Display(result.Values[f.DevicePath])}"));
         string residuals = string.Join(" · ", result.Residuals.Select(r =>
-            $"{r.Target.Quantity} off by {QuantityFormatter.Format(r.Residual, UnitKind.Frequency)}"));
+            $"{r.Target.Quantity} off by {FieldUnits.Display(r.Residual, UnitKind.Frequency, ResidualDigits)}"));
         string bounds = result.AtBounds.Count > 0 ? $" · at a bound: {string.Join(", ", result.AtBounds)}" : "";
         string how = result.Converged ? $"fit ({result.Iterations} steps)" : $"fit NOT converged ({result.Message})";
         var edits = request.Fields.Select(f => (f.FieldPath!, f.Format(result.Values[f.DevicePath]))).ToList();
-        _prompt.Choose($"{how}: {values}; {residuals}{bounds}.  a applies · Esc leave",
-            new Dictionary<char, Action> { ['a'] = () => Report(_session.SetValues(edits, "fit applied: " + string.Join(", ", edits.Select(e => $"{e.Item1} = {e.Item2}")))) });
+        _prompt.Choose($"{how}: {values}; {residuals}{bounds}.\na applies · Esc leave",
+            new Dictionary<char, Action> { ['a'] = () => Report(_session.SetValues(edits, "fit applied: " + string.Join(", ", edits.Select(e => $"{e.Item1} = {e.Item2}")))) },
+            onCancel: () => Say("fit result left; the device is unchanged"));
     }
 
     private void ApplyRoot(string biasOrPath, double value)

@@ -22,7 +22,8 @@ namespace LevelDesign.Ui.Views;
 /// </summary>
 public sealed partial class MainWindow : Window
 {
-    private int LeftWidth => Frame.Width >= 110 ? 40 : 30;
+    /// <summary>The board column: 30 columns leave the page 46 at 80 columns; wider screens give the form room for "← bias NAME".</summary>
+    private int LeftWidth => Frame.Width >= 110 ? 40 : Frame.Width >= 100 ? 34 : 30;
     private static readonly TimeSpan ResweepPause = TimeSpan.FromMilliseconds(600);
 
     private readonly EditSession _session;
@@ -36,12 +37,14 @@ public sealed partial class MainWindow : Window
     private readonly SpectrumView _spectrum;
     private readonly StatusLine _status;
     private readonly PromptBar _prompt;
+    private readonly KeyBar _keyBar;
+    private readonly IReadOnlyList<(KeyHint Hint, Key Key, Action? Action)> _windowKeys;
 
-    private readonly LatestOnly _pointJobs = new(), _sweepJobs = new();
+    private readonly LatestOnly _pointJobs = new(), _sweepJobs = new(), _fitJobs = new(), _solveJobs = new();
     private IReadOnlyList<BoardNode> _nodes = [];
     private IReadOnlyList<FieldRow> _fields = [];
     private Page _pageShown = Page.States, _pageBeforeHelp = Page.States;
-    private bool _showLimits, _wideOff, _allowQuit, _computing, _sweeping, _sweepStale;
+    private bool _showLimits, _wideOff, _allowQuit, _computing, _sweeping, _sweepStale, _fitting, _solving;
     private PointSnapshot? _snapshot, _cursorSnapshot;
     private string _eigenPath = "…";
     private SweepRequest? _lastSweep;
@@ -85,11 +88,16 @@ public sealed partial class MainWindow : Window
 
         _status = new StatusLine { X = 0, Y = Pos.AnchorEnd(3), Width = Dim.Fill() };
         _prompt = new PromptBar { X = 0, Y = Pos.AnchorEnd(6), Width = Dim.Fill() };
+        _keyBar = new KeyBar { X = 0, Y = Pos.AnchorEnd(1), Width = Dim.Fill() };
+        _windowKeys = WindowKeys();
+        _status.RowsChanged += LayoutBottom;
+        _prompt.RowsChanged += LayoutBottom;
 
         // Titles carry file names and ids with '_', which the framework would take as a hotkey marker.
         foreach (View titled in new View[] { this, _boardFrame, _formFrame, _pageFrame, _plotFrame })
             titled.HotKeySpecifier = (System.Text.Rune)0xFFFF;
-        Add(_boardFrame, _formFrame, _pageFrame, _plotFrame, _status, _prompt, BuildKeyBar());
+        Add(_boardFrame, _formFrame, _pageFrame, _plotFrame, _status, _prompt, _keyBar);
+        UpdateKeyBar();
         BindBoardKeys();
         BindWindowKeys();
 
@@ -121,26 +129,54 @@ public sealed partial class MainWindow : Window
     public SpectrumView Spectrum => _spectrum;
     public SweepResult? LastSweep => _sweep;
     public bool IsComputing => _computing || _sweeping;
+    public bool IsFitting => _fitting;
+    public bool IsSolving => _solving;
     public bool QuitAllowed => _allowQuit;
 
-    private StatusBar BuildKeyBar() => new(
+    /// <summary>
+    /// The keys of the key bar in display order, each with its action; rank 0 is always shown, larger ranks are
+    /// left out first on narrow screens (the help page lists them all). "Esc Stop" shows while work can be cancelled.
+    /// </summary>
+    private IReadOnlyList<(KeyHint Hint, Key Key, Action? Action)> WindowKeys() =>
     [
-        // Most used first: at 80 columns the tail is cut off, and the help page (F1) lists every key.
-        new Shortcut(Key.F1, "Help", ToggleHelp, ""),
-        new Shortcut(Key.F2, "Edit", EditField, ""),
-        new Shortcut(Key.F3, "Page", NextPage, ""),
-        new Shortcut(Key.F5, "Sweep", AskSweep, ""),
-        new Shortcut(Key.S.WithCtrl, "Save", () => InvokeCommand(Command.Save), ""),
-        new Shortcut(Key.Z.WithCtrl, "Undo", () => InvokeCommand(Command.Undo), ""),
-        new Shortcut(Key.Q.WithCtrl, "Quit", () => InvokeCommand(Command.Quit), ""),
-        new Shortcut(Key.F4, "Wide", ToggleWide, ""),
-        new Shortcut(Key.F7, "Manifold", NextManifold, ""),
-        new Shortcut(Key.F8, "Export", AskExport, ""),
-        new Shortcut(Key.F9, "Target", AskTarget, ""),
-    ]);
+        // Esc and the Ctrl keys are window commands (bound in BindWindowKeys); the function keys run their action.
+        (new KeyHint("Esc", "Esc", "Stop", 1), Key.Esc, null),
+        (new KeyHint("F2", "F2", "Edit", 2), Key.F2, EditField),
+        (new KeyHint("F3", "F3", "Page", 4), Key.F3, NextPage),
+        (new KeyHint("F5", "F5", "Sweep", 3), Key.F5, AskSweep),
+        (new KeyHint("F9", "F9", "Target", 8), Key.F9, AskTarget),
+        (new KeyHint("Ctrl+S", "^S", "Save", 5), Key.S.WithCtrl, null),
+        (new KeyHint("Ctrl+Z", "^Z", "Undo", 7), Key.Z.WithCtrl, null),
+        (new KeyHint("Ctrl+Q", "^Q", "Quit", 6), Key.Q.WithCtrl, null),
+        (new KeyHint("F4", "F4", "Wide", 10), Key.F4, ToggleWide),
+        (new KeyHint("F7", "F7", "Manifold", 11), Key.F7, NextManifold),
+        (new KeyHint("F8", "F8", "Export", 9), Key.F8, AskExport),
+        (new KeyHint("F1", "F1", "Help", 0, LabelWhenCut: "all keys"), Key.F1, ToggleHelp),
+    ];
+
+    /// <summary>True while a sweep, fit or target search runs (Esc stops it).</summary>
+    private bool Cancellable => _sweeping || _fitting || _solving;
+
+    /// <summary>The key bar for the moment: Esc only while work runs, F1 "Back" on the help page, F2 "Fix" on the errors page.</summary>
+    private void UpdateKeyBar() =>
+        _keyBar.Hints = _windowKeys.Select(k => k.Hint).Where(h => h.Key != "Esc" || Cancellable).Select(h => h.Key switch
+        {
+            "F1" when _pageShown == Page.Help => h with { Label = "Back", LabelWhenCut = null },
+            "F2" when _pageShown == Page.Errors => h with { Label = "Fix" },
+            _ => h,
+        }).ToList();
 
     private void BindWindowKeys()
     {
+        // The function keys go through one command that looks up the pressed key (the key bar only displays them).
+        var actions = _windowKeys.Where(k => k.Action is not null).ToDictionary(k => k.Key, k => k.Action!);
+        AddCommand(Command.Toggle, context =>
+        {
+            if (context?.Binding is not KeyBinding { Key: { } key } || !actions.TryGetValue(key, out var action)) return false;
+            action();
+            return true;
+        });
+        foreach (var key in actions.Keys) KeyBindings.ReplaceCommands(key, Command.Toggle);
         AddCommand(Command.Save, () => { Save(null); return true; });
         AddCommand(Command.SaveAs, () => { AskSaveAs(); return true; });
         AddCommand(Command.Undo, () => { Report(_session.Undo()); return true; });
@@ -170,6 +206,25 @@ public sealed partial class MainWindow : Window
 
     private bool Wide => Frame.Width >= 120 && Frame.Height >= 34;
 
+    /// <summary>Rows under the pages: the status line (facts and a wrapped message) and the key bar.</summary>
+    private int RowsBelowPages => _status.Rows + 1;
+
+    /// <summary>Stacks key bar, status line and question bar from the bottom; the pages end above the status line.</summary>
+    private void LayoutBottom()
+    {
+        int below = RowsBelowPages;
+        _status.Y = Pos.AnchorEnd(below);
+        _prompt.Y = Pos.AnchorEnd(below + _prompt.Rows);
+        _formFrame.Height = _pageFrame.Height = Dim.Fill(below);
+        if (!(Wide && _pageShown is not (Page.Help or Page.Errors))) _plotFrame.Height = Dim.Fill(below);
+    }
+
+    /// <summary>Columns inside the page frame (the board column and the borders taken off).</summary>
+    private int PageWidth => Math.Max(20, Viewport.Width - (!_wideOff && _pageShown is not (Page.Help or Page.Errors) ? LeftWidth : 0) - 2);
+
+    /// <summary>Columns for a form row's text (inside the frame, after the "›" marker).</summary>
+    private int FormWidth => Math.Max(10, LeftWidth - 3);
+
     private void ApplyLayout()
     {
         // Help and errors take the whole width, so no line is cut and long lists wrap less.
@@ -192,9 +247,12 @@ public sealed partial class MainWindow : Window
             _pageFrame.Visible = !plotPage;
             _plotFrame.X = _pageFrame.X = x;
             _plotFrame.Y = _pageFrame.Y = 0;
-            _plotFrame.Height = Dim.Fill(3);
         }
-        _pageFrame.Height = Dim.Fill(3);
+        _status.Refit();
+        _prompt.Refit();
+        LayoutBottom();
+        ShowFields();
+        UpdateStatus();
         RefreshPage();
     }
 
@@ -227,7 +285,9 @@ public sealed partial class MainWindow : Window
     public void ShowPage(Page page)
     {
         if (page == Page.Help && _pageShown != Page.Help) _pageBeforeHelp = _pageShown;
+        if (page != _pageShown) _page.ScrollToTop();
         _pageShown = page;
+        UpdateKeyBar();
         ApplyLayout();
         FocusPage();
     }
@@ -242,15 +302,28 @@ public sealed partial class MainWindow : Window
     {
         if (_pageShown != Page.Help) return;
         _showLimits = !_showLimits;
+        _page.ScrollToTop();
         RefreshPage();
     }
 
     private bool? CancelSomething()
     {
+        if (_fitting || _solving)
+        {
+            // The result of a cancelled fit or search is dropped when it arrives, so the device stays as it was.
+            string what = _fitting ? "fit" : "target search";
+            if (_fitting) _fitJobs.Cancel();
+            if (_solving) _solveJobs.Cancel();
+            _fitting = _solving = false;
+            UpdateStatus();
+            Say($"{what} cancelled; the device is unchanged");
+            return true;
+        }
         if (_sweeping)
         {
             _sweepJobs.Cancel();
             _sweeping = false;
+            UpdateStatus();
             Say("sweep cancelled; the points computed so far stay on screen");
             return true;
         }
@@ -305,12 +378,11 @@ public sealed partial class MainWindow : Window
             BoardNodeKind.Bias => $"Bias: {node.Id}",
             _ => "Device",
         };
-        int nameWidth = Math.Max(6, _fields.Select(f => f.Name.Length).DefaultIfEmpty(6).Max());
         // Another item starts at its first editable row; the same item (after an edit) keeps the row.
         int first = Math.Max(0, _fields.ToList().FindIndex(f => f.Editable));
         int select = node.Id == _formItemId && node.Kind == _formItemKind ? Math.Min(_form.SelectedIndex, _fields.Count - 1) : first;
         (_formItemId, _formItemKind) = (node.Id, node.Kind);
-        _form.SetLines(_fields.Select(f => new TextLine($"{f.Name.PadRight(nameWidth)} {(f.Editable ? "" : "·")}{f.ValueText}")).ToList(), Math.Max(0, select));
+        _form.SetLines(FormRowText.Build(_fields, FormWidth), Math.Max(0, select));
     }
 
     private void EditField()
@@ -319,7 +391,7 @@ public sealed partial class MainWindow : Window
         if (_session.Document is null) { Say("no device is open", warning: true); return; }
         if (_form.SelectedIndex >= _fields.Count) return;
         var field = _fields[_form.SelectedIndex];
-        if (!field.Editable) { Say($"{field.Name} is shown for reference; it is not edited here (· marks read-only rows)"); return; }
+        if (!field.Editable) { Say($"{field.Name} = {field.FullText}: shown for reference, not edited here (· marks read-only rows)"); return; }
         _prompt.Ask($"{field.FieldPath} =   ({field.Hint})", field.StartText, text =>
         {
             var outcome = _session.SetValue(field.FieldPath!, text);
@@ -355,7 +427,7 @@ public sealed partial class MainWindow : Window
             ['c'] = () => AskNewCoupler(CouplerKind.Capacitive), ['i'] = () => AskNewCoupler(CouplerKind.Inductive),
             ['x'] = () => AskNewCoupler(CouplerKind.Exchange),
         };
-        _prompt.Choose("add: t transmon · u tunable transmon · f fluxonium · k kerr · r resonator │ couplers: c capacitive · i inductive · x exchange", kinds);
+        _prompt.Choose("add: t transmon · u tunable transmon · f fluxonium · k kerr · r resonator\ncouplers: c capacitive · i inductive · x exchange", kinds);
     }
 
     private void AskNewElement(ElementKind kind) =>
@@ -386,7 +458,7 @@ public sealed partial class MainWindow : Window
         if (id is null) { Say("select an element, coupler or bias to remove"); return; }
         var also = _session.Document?.AlsoRemoved(id) ?? [];
         string with = also.Count == 0 ? "" : $" with {string.Join(", ", also)}";
-        _prompt.Choose($"remove '{id}'{with}?  y remove · Esc keep",
+        _prompt.Choose($"remove '{id}'{with}?\ny remove · Esc keep",
             new Dictionary<char, Action> { ['y'] = () => Report(_session.Remove(id)) });
     }
 
@@ -424,9 +496,17 @@ public sealed partial class MainWindow : Window
         string disk = _diskChanged ? " ⚠ changed on disk" : "";
         string computed = _computing ? "⟳ computing" : _snapshot is null ? "not computed" : $"at {_snapshot.ComputedAt:HH:mm:ss} ({_snapshot.Elapsed.TotalSeconds:0.00} s)";
         string trunc = _snapshot?.ConvergenceText ?? "…";
-        string sweep = _sweeping ? $" │ {_progressText} Esc cancels" : "";
-        _status.Facts = $"{file}{dirty}{disk} │ eigen {_eigenPath} │ trunc {trunc} │ {computed}{sweep}";
-        _status.SetNeedsDraw();
+        string work = string.Join(" · ", new[] { _sweeping ? _progressText : "", _fitting ? "⟳ fitting" : "", _solving ? "⟳ solving" : "" }.Where(w => w.Length > 0));
+        // Ranks: what is left out first on a narrow screen is the largest (eigensolver, then the time of the last result).
+        _status.SetFacts(
+        [
+            ($"{file}{dirty}{disk}", 0),
+            ($"eigen {_eigenPath}", 4),
+            ($"trunc {trunc}", 2),
+            (computed, 3),
+            (work.Length > 0 ? work + " (Esc cancels)" : "", 1),
+        ]);
+        UpdateKeyBar();
     }
 
     private static bool NativeEigen()

@@ -1,3 +1,4 @@
+using LevelDesign.Ui.Text;
 using Terminal.Gui.Drawing;
 using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
@@ -6,11 +7,12 @@ using Terminal.Gui.Views;
 namespace LevelDesign.Ui.Views;
 
 /// <summary>
-/// The two-line question area at the bottom of the board: either a typed answer (Enter accepts, Esc
+/// The question area at the bottom of the board, as many lines as the question needs at the current width
+/// (wrapped, never cut silently): either a typed answer (Enter accepts, Esc
 /// cancels; a refused answer keeps the prompt open and shows the reason) or a one-key choice such as
 /// "s save and quit · d discard · Esc stay". Used instead of modal dialogs so nothing ever blocks.
 /// </summary>
-public sealed class PromptBar : View
+public sealed class PromptBar : WrappedHeightView
 {
     private readonly TextField _input;
     private Func<string, string?>? _onAnswer;
@@ -58,6 +60,7 @@ public sealed class PromptBar : View
         _input.Visible = true;
         _input.Text = initial;
         _input.InsertionPoint = initial.Length;
+        Refit();
         _input.SetFocus();
     }
 
@@ -69,6 +72,7 @@ public sealed class PromptBar : View
         _choices = choices;
         _input.Visible = false;
         foreach (char c in choices.Keys) KeyBindings.ReplaceCommands(new Key(c), Command.Toggle);
+        Refit();
         SetFocus();
     }
 
@@ -82,6 +86,40 @@ public sealed class PromptBar : View
         SetNeedsDraw();
     }
 
+    /// <summary>At most this many lines of question, and of message below the answer.</summary>
+    public const int MaxQuestionLines = 8, MaxMessageLines = 3;
+
+    /// <summary>Lines in use at the current width: the wrapped question, the answer (when typed), the message.</summary>
+    public override int Rows => QuestionLines(AvailableWidth()).Count + (_choices is null ? 1 : 0) + FooterLines(AvailableWidth()).Count;
+
+    /// <summary>Also puts the answer on the line under the question.</summary>
+    public override void Refit()
+    {
+        _input.Y = QuestionLines(AvailableWidth()).Count;
+        base.Refit();
+    }
+
+    /// <summary>
+    /// The question wrapped; when it needs more than <see cref="MaxQuestionLines"/>, its first part is shortened
+    /// (ending in "…") and its last line of keys ("a applies · Esc leave", after the last '\n') is kept whole.
+    /// </summary>
+    private IReadOnlyList<string> QuestionLines(int width)
+    {
+        var all = TextFit.WrapLines("» " + _question, width, indent: "  ");
+        if (all.Count <= MaxQuestionLines) return all;
+        int split = _question.LastIndexOf('\n');
+        if (split < 0) return TextFit.WrapLines("» " + _question, width, MaxQuestionLines, indent: "  ");
+        var keys = TextFit.WrapLines("  " + _question[(split + 1)..], width, indent: "  ");
+        var body = TextFit.WrapLines("» " + _question[..split], width, Math.Max(1, MaxQuestionLines - keys.Count), indent: "  ");
+        return [.. body, .. keys];
+    }
+
+    /// <summary>The refusal message, or the keys to answer (left out for a choice whose question already names Esc).</summary>
+    private IReadOnlyList<string> FooterLines(int width) =>
+        _message.Length > 0 ? TextFit.WrapLines("  " + _message, width, MaxMessageLines, indent: "    ")
+        : _choices is null ? ["  Enter accept · Esc cancel"]
+        : _question.Contains("Esc", StringComparison.Ordinal) ? [] : ["  Esc cancel"];
+
     private void Answer()
     {
         if (_onAnswer is null) return;
@@ -94,6 +132,7 @@ public sealed class PromptBar : View
             return;
         }
         _message = "✗ " + refusal;
+        Refit();
         SetNeedsDraw();
     }
 
@@ -123,14 +162,20 @@ public sealed class PromptBar : View
     protected override bool OnDrawingContent(DrawContext? context)
     {
         int width = Viewport.Width;
+        var question = QuestionLines(width);
+        var footer = FooterLines(width);
         SetAttribute(GetAttributeForRole(VisualRole.Normal));
-        Move(0, 0);
-        AddStr(RowList.Pad("» " + _question, width));
-        if (_choices is not null) { Move(0, 1); AddStr(RowList.Pad("", width)); }
-        else { Move(0, 1); AddStr("  "); }
-        Move(0, 2);
+        int row = 0;
+        foreach (var line in question) { Move(0, row++); AddStr(RowList.Pad(line, width)); }
+        if (_choices is null) { Move(0, row++); AddStr("  "); }
         SetAttribute(_message.Length > 0 ? Palette.Warning(this) : GetAttributeForRole(VisualRole.Normal));
-        AddStr(RowList.Pad(_message.Length > 0 ? "  " + _message : _choices is null ? "  Enter accept · Esc cancel" : "  Esc cancel", width));
+        foreach (var line in footer)
+        {
+            if (row >= Viewport.Height) break;
+            Move(0, row++);
+            AddStr(RowList.Pad(line, width));
+        }
+        SetAttribute(GetAttributeForRole(VisualRole.Normal));
         return true;
     }
 }

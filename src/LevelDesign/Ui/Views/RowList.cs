@@ -69,6 +69,13 @@ public class RowList : View
         SelectionChanged?.Invoke(_selected);
     }
 
+    /// <summary>Shows the first rows again (a new page of text starts at its top).</summary>
+    public void ScrollToTop()
+    {
+        _top = 0;
+        SetNeedsDraw();
+    }
+
     public void Select(int index)
     {
         if (_lines.Count == 0) return;
@@ -138,9 +145,6 @@ public class RowList : View
         return true;
     }
 
-    internal static string Pad(string text, int width)
-    {
-        if (width <= 0) return "";
-        return text.Length >= width ? text[..width] : text + new string(' ', width - text.Length);
-    }
+    /// <summary>Exactly <paramref name="width"/> columns: padded, or cut with a visible "…" so a cut never passes unseen.</summary>
+    internal static string Pad(string text, int width) => TextFit.Pad(text, width);
 }

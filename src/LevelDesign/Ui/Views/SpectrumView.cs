@@ -118,17 +118,18 @@ public sealed class SpectrumView : View
         if (width < AxisWidth + 10 || height < 5) { Move(0, 0); AddStr(RowList.Pad("enlarge to see the spectrum", width)); return true; }
 
         var series = _series;
+        // On a narrow plot the manifold goes first, then the status; the cursor's bias always stays.
         string header = series is null || series.Axis.Length == 0
             ? $"Spectrum — {Status}"
-            : $"cursor {series.AxisName} = {FormatBias(series.Axis[CursorIndex])} │ {ManifoldText} │ {Status}";
+            : TextFit.KeepMostImportant([($"cursor {series.AxisName} = {FormatBias(series.Axis[CursorIndex])}", 0), (ManifoldText, 2), (Status, 1)], width, " │ ");
         Move(0, 0);
         AddStr(RowList.Pad(header, width));
         int labelWidth = width >= 60 ? 12 : width >= 45 ? 8 : 0;
         int plotColumns = width - AxisWidth - labelWidth, plotRows = height - 3;
         if (series is null || series.Axis.Length == 0 || plotColumns < 4 || plotRows < 2)
         {
-            Move(0, 2);
-            AddStr(RowList.Pad("←/→ cursor  +/− zoom  PgUp/PgDn pan  Home fit  F7 manifold", width));
+            var keys = TextFit.WrapLines("←/→ cursor · +/− zoom · PgUp/PgDn pan · Home fit · F7 manifold", width, Math.Max(1, height - 2));
+            for (int i = 0; i < keys.Count; i++) { Move(0, 2 + i); AddStr(RowList.Pad(keys[i], width)); }
             return true;
         }
 
@@ -197,13 +198,27 @@ public sealed class SpectrumView : View
 
         Move(0, height - 2);
         AddStr(new string(' ', AxisWidth - 1) + "└" + new string('─', plotColumns));
-        string left = FormatBias(xMin), right = FormatBias(xMax);
-        string axisLine = new string(' ', AxisWidth) + left;
-        int rightAt = AxisWidth + plotColumns - right.Length;
-        axisLine = axisLine.PadRight(Math.Max(axisLine.Length, rightAt)) [..Math.Max(axisLine.Length, rightAt)] + right;
-        string hint = $"  {series.AxisName} → · f in GHz · × crossing";
         Move(0, height - 1);
-        AddStr(RowList.Pad(axisLine + hint, width));
+        AddStr(RowList.Pad(AxisLine(FormatBias(xMin), FormatBias(xMax), series.AxisName, plotColumns, width), width));
         return true;
+    }
+
+    /// <summary>
+    /// The line under the plot: the bias at both ends, the axis name centred between them (or after them when the
+    /// plot is too narrow), then as much of "f in GHz · × crossing" as fits.
+    /// </summary>
+    public static string AxisLine(string left, string right, string axisName, int plotColumns, int width)
+    {
+        string line = new string(' ', AxisWidth) + left;
+        int rightAt = Math.Max(line.Length + 1, AxisWidth + plotColumns - right.Length);
+        string name = $"{axisName} →";
+        int gap = rightAt - line.Length;
+        bool nameBetween = name.Length + 4 <= gap;
+        if (nameBetween) line += new string(' ', (gap - name.Length) / 2) + name;
+        line = line.PadRight(rightAt) + right;
+        var notes = new List<(string, int)> { ("f in GHz", 1), ("× crossing", 2) };
+        if (!nameBetween) notes.Insert(0, (name, 0));
+        string tail = TextFit.KeepMostImportant(notes, Math.Max(0, width - line.Length - 2), " · ", cutLast: nameBetween is false);
+        return tail.Length > 0 ? line + "  " + tail : line;
     }
 }
