@@ -10,12 +10,40 @@ public static class BrentMinimizer
 
     /// <returns>The abscissa of the minimum found and the function value there.</returns>
     public static (double X, double Value) Minimize(Func<double, double> f, double lower, double upper,
-        double tolerance = 1e-10, int maxIterations = 200)
+        double tolerance = 1e-10, int maxIterations = 200) => Minimize(f, lower, upper, [], tolerance, maxIterations);
+
+    /// <summary>
+    /// As above, starting from values of f already known inside the interval (e.g. from neighbouring searches):
+    /// the interval narrows at once to the known neighbours of the best known point (f is assumed unimodal, as
+    /// Brent's method does throughout), and the first step is a parabola through the three best known points.
+    /// With none known it is the classic start (one golden-section point).
+    /// </summary>
+    public static (double X, double Value) Minimize(Func<double, double> f, double lower, double upper,
+        IReadOnlyList<(double X, double Value)> known, double tolerance = 1e-10, int maxIterations = 200)
     {
         double a = Math.Min(lower, upper), b = Math.Max(lower, upper);
-        double x = a + GoldenSection * (b - a), w = x, v = x;
-        double fx = f(x), fw = fx, fv = fx;
-        double d = 0, e = 0;
+        double x, w, v, fx, fw, fv, d, e;
+        var inside = known.Where(p => p.X >= a && p.X <= b && !double.IsNaN(p.Value)).OrderBy(p => p.Value).ThenBy(p => p.X).ToArray();
+        if (inside.Length == 0)
+        {
+            x = a + GoldenSection * (b - a);
+            w = v = x;
+            fx = fw = fv = f(x);
+            d = e = 0;   // no step history: the first step is golden
+        }
+        else
+        {
+            (x, fx) = inside[0];
+            foreach (var p in inside)
+            {
+                if (p.X < x) a = Math.Max(a, p.X);
+                if (p.X > x) b = Math.Min(b, p.X);
+            }
+            var others = inside.Skip(1).Where(p => p.X >= a && p.X <= b && p.X != x).ToArray();
+            (w, fw) = others.Length > 0 ? others[0] : (x, fx);
+            (v, fv) = others.Length > 1 ? others[1] : (w, fw);
+            d = e = b - a;   // a step history as wide as the interval lets the first step be parabolic
+        }
         for (int iteration = 0; iteration < maxIterations; iteration++)
         {
             double middle = 0.5 * (a + b);

@@ -11,55 +11,47 @@ namespace LevelDesign.Core.Sweeps;
 /// refined by Brent minimisation in the bias of the separation of the two dressed states that share the
 /// A/B character, which is the adiabatic gap 2g_eff.
 /// </summary>
+/// <remarks>
+/// Speed: one dense solve gives the separation of every label pair, and many candidates share a stretch of the
+/// sweep (the same physical crossing seen from several label pairs, spectator excitations, label hand-overs). So
+/// candidates are refined one after another in bias order with one <see cref="SeparationSampler"/>: each starts
+/// from every solve already made in its bracket and from the sweep's own points there, which narrows the bracket
+/// and gives Brent a parabola at once. Solves ask only for as many states as the searched labels occupy along the
+/// sweep (plus a margin), in the real gauge when the matrix is real up to phases. Two workers were not faster than
+/// one: the dense solver already uses both cores.
+/// </remarks>
 public static class CrossingFinder
 {
+    /// <summary>States above the highest searched label kept in every refinement solve (they may mix with it).</summary>
+    private const int CountMargin = 4;
+
     public static IReadOnlyList<Crossing> Find(SweepResult sweep, Func<double, Device> resolve, CrossingOptions? options = null,
         DeviceSolver? solver = null, CancellationToken cancellation = default)
     {
         options ??= new CrossingOptions();
-        solver ??= new DeviceSolver();
         if (sweep.Plan.Axes.Count != 1) throw new ArgumentException("crossings are searched along a 1-D sweep; this sweep has two axes");
-        var points = sweep.Points;
-        if (points.Count < 3) return [];
-        var first = points[0].Spectrum;
-        int levels = Math.Min(first.Count, options.Levels ?? (sweep.Plan.Levels ?? Math.Max(1, first.Count - 4)));
-        var states = Enumerable.Range(0, levels).Select(k => first.LabelLevels(k)).ToArray();
-        var x = points.Select(p => p.AxisValues[0]).ToArray();
-        var energies = states.Select(s => points.Select(p => p.Spectrum.EnergyOf(s)).ToArray()).ToArray();
+        if (sweep.Points.Count < 3) return [];
+        var states = SearchedStates(sweep, options);
+        var candidates = Candidates(sweep, states, options);
+        var refined = RefineAll(sweep, resolve, states, candidates, options, solver ?? new DeviceSolver(), cancellation);
+        return Keep(candidates, refined, options, Math.Abs(sweep.Points[1].AxisValues[0] - sweep.Points[0].AxisValues[0]));
+    }
 
-        var candidates = new List<(int A, int B, double Lower, double Upper, bool SignChange)>();
-        for (int a = 0; a < states.Length; a++)
-            for (int b = a + 1; b < states.Length; b++)
-            {
-                var d = energies[a].Zip(energies[b], (ea, eb) => ea - eb).ToArray();
-                for (int i = 0; i + 1 < d.Length; i++)
-                    if (double.IsFinite(d[i]) && double.IsFinite(d[i + 1]) && Math.Sign(d[i]) != Math.Sign(d[i + 1]))
-                        candidates.Add((a, b, x[Math.Max(i - 1, 0)], x[Math.Min(i + 2, d.Length - 1)], true));
-                for (int i = 1; i + 1 < d.Length; i++)
-                {
-                    double g = Math.Abs(d[i]);
-                    if (!(g < options.MaxGapGHz) || !(g <= Math.Abs(d[i - 1])) || !(g <= Math.Abs(d[i + 1]))) continue;
-                    if (Math.Sign(d[i - 1]) != Math.Sign(d[i]) || Math.Sign(d[i + 1]) != Math.Sign(d[i])) continue;   // a sign change covers it
-                    candidates.Add((a, b, x[i - 1], x[i + 1], false));
-                }
-            }
-
-        var found = new Crossing?[candidates.Count];
-        int count = first.Count;
-        // CPU-bound items: without a cap the thread pool keeps adding workers that only contend for the cores
-        var parallel = new ParallelOptions { CancellationToken = cancellation, MaxDegreeOfParallelism = Environment.ProcessorCount };
-        Parallel.For(0, candidates.Count, parallel, c =>
-        {
-            var (a, b, lower, upper, signChange) = candidates[c];
-            var crossing = Refine(solver, resolve, states[a], states[b], lower, upper, count, options.BiasTolerance);
+    /// <summary>
+    /// The refined candidates worth reporting, one per label pair and stretch, ranked: near-approaches only where the
+    /// states mix, minima inside their bracket (unless <see cref="CrossingOptions.IncludeUnrefined"/>), clean two-level
+    /// pairs (<see cref="CrossingOptions.MinimumPairWeight"/>); of the same pair within 1.5 sweep steps, the smallest gap.
+    /// </summary>
+    internal static IReadOnlyList<Crossing> Keep(IReadOnlyList<CrossingCandidate> candidates, IReadOnlyList<Crossing?> refined,
+        CrossingOptions options, double step)
+    {
+        var found = new List<Crossing>();
+        for (int c = 0; c < candidates.Count; c++)
             // a dip in the separation of two states that stay pure is a level repulsion seen from afar, not a crossing
-            found[c] = signChange || crossing is null || crossing.Purity <= options.MaximumPurityOfNearApproach ? crossing : null;
-        });
-
-        double step = x.Length > 1 ? Math.Abs(x[1] - x[0]) : 0;
+            if (refined[c] is Crossing crossing && (candidates[c].SignChange || crossing.Purity <= options.MaximumPurityOfNearApproach))
+                found.Add(crossing);
         var distinct = new List<Crossing>();
-        var kept = found.OfType<Crossing>()
-            .Where(c => (c.Refined || options.IncludeUnrefined) && !(c.PairWeight < options.MinimumPairWeight));
+        var kept = found.Where(c => (c.Refined || options.IncludeUnrefined) && !(c.PairWeight < options.MinimumPairWeight));
         foreach (var crossing in kept.OrderBy(c => c.GapGHz))
             if (!distinct.Any(d => d.LabelA == crossing.LabelA && d.LabelB == crossing.LabelB && Math.Abs(d.Bias - crossing.Bias) <= 1.5 * step))
                 distinct.Add(crossing);
@@ -75,31 +67,98 @@ public static class CrossingFinder
             .OrderBy(c => c.DistanceToOperatingPoint).ThenBy(c => c.GapGHz).ToArray();
     }
 
-    private static Crossing? Refine(DeviceSolver solver, Func<double, Device> resolve, int[] stateA, int[] stateB,
-        double lower, double upper, int count, double tolerance)
+    /// <summary>The labels paired: those of the lowest <see cref="CrossingOptions.Levels"/> states at the first point.</summary>
+    internal static int[][] SearchedStates(SweepResult sweep, CrossingOptions options)
     {
-        (double Gap, double Purity, double PairWeight) Separation(double bias)
-        {
-            var s = solver.Solve(resolve(bias), count);
-            int ia = s.Basis.IndexOf(stateA), ib = s.Basis.IndexOf(stateB);
-            if (ia < 0 || ib < 0) return (double.NaN, double.NaN, double.NaN);
-            // the two dressed states holding most of the A/B character span the pair's subspace
-            double PairShare(int k) => s.Weights[k * s.Dimension + ia] + s.Weights[k * s.Dimension + ib];
-            var pair = Enumerable.Range(0, s.Count).OrderByDescending(PairShare).Take(2).ToArray();
-            if (pair.Length < 2) return (double.NaN, double.NaN, double.NaN);
-            double purity = pair.Min(k => Math.Max(s.Weights[k * s.Dimension + ia], s.Weights[k * s.Dimension + ib]));
-            return (Math.Abs(s.Energies[pair[0]] - s.Energies[pair[1]]), purity, pair.Min(PairShare));
-        }
+        var first = sweep.Points[0].Spectrum;
+        int levels = Math.Min(first.Count, options.Levels ?? (sweep.Plan.Levels ?? Math.Max(1, first.Count - 4)));
+        return Enumerable.Range(0, levels).Select(k => first.LabelLevels(k)).ToArray();
+    }
 
+    /// <summary>Every stretch where two searched labels come close, in the order label pairs are enumerated.</summary>
+    internal static IReadOnlyList<CrossingCandidate> Candidates(SweepResult sweep, int[][] states, CrossingOptions options)
+    {
+        var points = sweep.Points;
+        var x = points.Select(p => p.AxisValues[0]).ToArray();
+        var energies = states.Select(s => points.Select(p => p.Spectrum.EnergyOf(s)).ToArray()).ToArray();
+        var candidates = new List<CrossingCandidate>();
+        for (int a = 0; a < states.Length; a++)
+            for (int b = a + 1; b < states.Length; b++)
+            {
+                var d = energies[a].Zip(energies[b], (ea, eb) => ea - eb).ToArray();
+                for (int i = 0; i + 1 < d.Length; i++)
+                    if (double.IsFinite(d[i]) && double.IsFinite(d[i + 1]) && Math.Sign(d[i]) != Math.Sign(d[i + 1]))
+                        candidates.Add(new CrossingCandidate(a, b, x[Math.Max(i - 1, 0)], x[Math.Min(i + 2, d.Length - 1)], true));
+                for (int i = 1; i + 1 < d.Length; i++)
+                {
+                    double g = Math.Abs(d[i]);
+                    if (!(g < options.MaxGapGHz) || !(g <= Math.Abs(d[i - 1])) || !(g <= Math.Abs(d[i + 1]))) continue;
+                    if (Math.Sign(d[i - 1]) != Math.Sign(d[i]) || Math.Sign(d[i + 1]) != Math.Sign(d[i])) continue;   // a sign change covers it
+                    candidates.Add(new CrossingCandidate(a, b, x[i - 1], x[i + 1], false));
+                }
+            }
+        return candidates;
+    }
+
+    /// <summary>
+    /// Each candidate refined to its closest approach (null when the separation is undefined there), before any
+    /// filtering; in bias order through one shared sampler.
+    /// </summary>
+    internal static Crossing?[] RefineAll(SweepResult sweep, Func<double, Device> resolve, int[][] states,
+        IReadOnlyList<CrossingCandidate> candidates, CrossingOptions options, DeviceSolver solver, CancellationToken cancellation = default)
+    {
+        var sampler = new SeparationSampler(solver, resolve, states, SampleCount(sweep, states));
+        foreach (var point in sweep.Points) sampler.AddSweepPoint(point.AxisValues[0], point.Spectrum);
+        var refined = new Crossing?[candidates.Count];
+        // sign changes first: they converge in a few parabolic steps and leave solves at the physical crossings, where
+        // the near-approach minima (often kinks where a third state takes over, found by slow golden-section steps) tend
+        // to lie, so those start from a much narrower bracket
+        var order = Enumerable.Range(0, candidates.Count)
+            .OrderBy(c => candidates[c].SignChange ? 0 : 1)
+            .ThenBy(c => Math.Min(candidates[c].Lower, candidates[c].Upper)).ThenBy(c => Math.Max(candidates[c].Lower, candidates[c].Upper))
+            .ThenBy(c => c);
+        foreach (int c in order)
+            refined[c] = Refine(sampler, states, candidates[c], options.BiasTolerance, cancellation);
+        return refined;
+    }
+
+    /// <summary>
+    /// Dressed states per refinement solve: up to the highest index any searched label takes along the sweep, plus a
+    /// margin, never more than the sweep computed (all of them when a label left the computed states somewhere).
+    /// </summary>
+    internal static int SampleCount(SweepResult sweep, int[][] states)
+    {
+        int available = sweep.Points[0].Spectrum.Count, highest = 0;
+        foreach (var point in sweep.Points)
+            foreach (var state in states)
+            {
+                int k = point.Spectrum.DressedIndexOf(state);
+                if (k < 0) return available;
+                highest = Math.Max(highest, k);
+            }
+        return Math.Min(available, highest + 1 + CountMargin);
+    }
+
+    private static Crossing? Refine(SeparationSampler sampler, int[][] states, CrossingCandidate candidate, double tolerance,
+        CancellationToken cancellation)
+    {
+        var (a, b) = (candidate.A, candidate.B);
+        double lower = Math.Min(candidate.Lower, candidate.Upper), upper = Math.Max(candidate.Lower, candidate.Upper);
+        double SquaredGap(double bias)
+        {
+            cancellation.ThrowIfCancellationRequested();
+            return sampler.At(bias).SquaredGap(a, b);
+        }
+        var known = sampler.Within(lower, upper).Select(s => (s.Bias, s.SquaredGap(a, b))).ToArray();
         // the squared gap of two coupled levels is a parabola in the bias near its minimum, so Brent's parabolic
         // steps converge in a few solves
-        var (bias, squared) = BrentMinimizer.Minimize(b => Separation(b).Gap is double g && double.IsFinite(g) ? g * g : double.MaxValue,
-            lower, upper, tolerance);
+        var (bias, squared) = BrentMinimizer.Minimize(SquaredGap, lower, upper, known, tolerance);
         if (squared == double.MaxValue) return null;
-        double gap = Math.Sqrt(squared);
-        var (_, purity, pairWeight) = Separation(bias);
+        // a dense solve even when the best sample is a sweep point (solved iteratively)
+        var (gap, purity, pairWeight) = sampler.At(bias).Separation(a, b);
+        if (!double.IsFinite(gap)) return null;
         string label(int[] s) => "|" + string.Join(",", s) + "⟩";
-        bool interior = bias > Math.Min(lower, upper) + 10 * tolerance && bias < Math.Max(lower, upper) - 10 * tolerance;
-        return new Crossing(label(stateA), label(stateB), stateA, stateB, bias, gap, purity, interior, PairWeight: pairWeight);
+        bool interior = bias > lower + 10 * tolerance && bias < upper - 10 * tolerance;
+        return new Crossing(label(states[a]), label(states[b]), states[a], states[b], bias, gap, purity, interior, PairWeight: pairWeight);
     }
 }
