@@ -11,20 +11,9 @@ namespace LevelDesign.Core.Sweeps;
 /// refined by Brent minimisation in the bias of the separation of the two dressed states that share the
 /// A/B character, which is the adiabatic gap 2g_eff.
 /// </summary>
-/// <remarks>
-/// Speed: one dense solve gives the separation of every label pair, and many candidates share a stretch of the
-/// sweep (the same physical crossing seen from several label pairs, spectator excitations, label hand-overs). So
-/// candidates are refined one after another in bias order with one <see cref="SeparationSampler"/>: each starts
-/// from every solve already made in its bracket and from the sweep's own points there, which narrows the bracket
-/// and gives Brent a parabola at once. Solves ask only for as many states as the searched labels occupy along the
-/// sweep (plus a margin), in the real gauge when the matrix is real up to phases. Two workers were not faster than
-/// one: the dense solver already uses both cores.
-/// </remarks>
+/// <remarks>The refinement shares its solves between candidates: see <see cref="CrossingRefiner"/>.</remarks>
 public static class CrossingFinder
 {
-    /// <summary>States above the highest searched label kept in every refinement solve (they may mix with it).</summary>
-    private const int CountMargin = 4;
-
     public static IReadOnlyList<Crossing> Find(SweepResult sweep, Func<double, Device> resolve, CrossingOptions? options = null,
         DeviceSolver? solver = null, CancellationToken cancellation = default)
     {
@@ -33,7 +22,8 @@ public static class CrossingFinder
         if (sweep.Points.Count < 3) return [];
         var states = SearchedStates(sweep, options);
         var candidates = Candidates(sweep, states, options);
-        var refined = RefineAll(sweep, resolve, states, candidates, options, solver ?? new DeviceSolver(), cancellation);
+        var refined = CrossingRefiner.RefineAll(sweep, resolve, states, candidates, options.BiasTolerance, solver ?? new DeviceSolver(),
+            Environment.ProcessorCount, cancellation);
         return Keep(candidates, refined, options, Math.Abs(sweep.Points[1].AxisValues[0] - sweep.Points[0].AxisValues[0]));
     }
 
@@ -98,67 +88,5 @@ public static class CrossingFinder
                 }
             }
         return candidates;
-    }
-
-    /// <summary>
-    /// Each candidate refined to its closest approach (null when the separation is undefined there), before any
-    /// filtering; in bias order through one shared sampler.
-    /// </summary>
-    internal static Crossing?[] RefineAll(SweepResult sweep, Func<double, Device> resolve, int[][] states,
-        IReadOnlyList<CrossingCandidate> candidates, CrossingOptions options, DeviceSolver solver, CancellationToken cancellation = default)
-    {
-        var sampler = new SeparationSampler(solver, resolve, states, SampleCount(sweep, states));
-        foreach (var point in sweep.Points) sampler.AddSweepPoint(point.AxisValues[0], point.Spectrum);
-        var refined = new Crossing?[candidates.Count];
-        // sign changes first: they converge in a few parabolic steps and leave solves at the physical crossings, where
-        // the near-approach minima (often kinks where a third state takes over, found by slow golden-section steps) tend
-        // to lie, so those start from a much narrower bracket
-        var order = Enumerable.Range(0, candidates.Count)
-            .OrderBy(c => candidates[c].SignChange ? 0 : 1)
-            .ThenBy(c => Math.Min(candidates[c].Lower, candidates[c].Upper)).ThenBy(c => Math.Max(candidates[c].Lower, candidates[c].Upper))
-            .ThenBy(c => c);
-        foreach (int c in order)
-            refined[c] = Refine(sampler, states, candidates[c], options.BiasTolerance, cancellation);
-        return refined;
-    }
-
-    /// <summary>
-    /// Dressed states per refinement solve: up to the highest index any searched label takes along the sweep, plus a
-    /// margin, never more than the sweep computed (all of them when a label left the computed states somewhere).
-    /// </summary>
-    internal static int SampleCount(SweepResult sweep, int[][] states)
-    {
-        int available = sweep.Points[0].Spectrum.Count, highest = 0;
-        foreach (var point in sweep.Points)
-            foreach (var state in states)
-            {
-                int k = point.Spectrum.DressedIndexOf(state);
-                if (k < 0) return available;
-                highest = Math.Max(highest, k);
-            }
-        return Math.Min(available, highest + 1 + CountMargin);
-    }
-
-    private static Crossing? Refine(SeparationSampler sampler, int[][] states, CrossingCandidate candidate, double tolerance,
-        CancellationToken cancellation)
-    {
-        var (a, b) = (candidate.A, candidate.B);
-        double lower = Math.Min(candidate.Lower, candidate.Upper), upper = Math.Max(candidate.Lower, candidate.Upper);
-        double SquaredGap(double bias)
-        {
-            cancellation.ThrowIfCancellationRequested();
-            return sampler.At(bias).SquaredGap(a, b);
-        }
-        var known = sampler.Within(lower, upper).Select(s => (s.Bias, s.SquaredGap(a, b))).ToArray();
-        // the squared gap of two coupled levels is a parabola in the bias near its minimum, so Brent's parabolic
-        // steps converge in a few solves
-        var (bias, squared) = BrentMinimizer.Minimize(SquaredGap, lower, upper, known, tolerance);
-        if (squared == double.MaxValue) return null;
-        // a dense solve even when the best sample is a sweep point (solved iteratively)
-        var (gap, purity, pairWeight) = sampler.At(bias).Separation(a, b);
-        if (!double.IsFinite(gap)) return null;
-        string label(int[] s) => "|" + string.Join(",", s) + "⟩";
-        bool interior = bias > lower + 10 * tolerance && bias < upper - 10 * tolerance;
-        return new Crossing(label(states[a]), label(states[b]), states[a], states[b], bias, gap, purity, interior, PairWeight: pairWeight);
     }
 }

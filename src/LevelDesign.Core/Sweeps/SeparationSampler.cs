@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.Eigen;
 using LevelDesign.Core.Model;
@@ -9,7 +10,7 @@ namespace LevelDesign.Core.Sweeps;
 /// sweep reuses them: one solve gives the separation of every pair. A complex Hamiltonian that is real up to a phase
 /// per product state (a resonator's charge operator i(a† − a)) is solved in its real gauge; the phases have unit
 /// modulus, so the weights |⟨bare|dressed⟩|² and the energies are those of the complex problem, at about a third of
-/// the cost of the complex solver. Not thread-safe.
+/// the cost of the complex solver. Thread-safe: concurrent requests for one bias share one solve.
 /// </summary>
 internal sealed class SeparationSampler
 {
@@ -17,8 +18,8 @@ internal sealed class SeparationSampler
     private readonly Func<double, Device> _resolve;
     private readonly IReadOnlyList<int[]> _labels;
     private readonly int _count;
-    private readonly Dictionary<double, SeparationSample> _exact = [];
-    private readonly List<SeparationSample> _sweepPoints = [];
+    private readonly ConcurrentDictionary<double, Lazy<SeparationSample>> _solved = new();
+    private int _solves;
 
     /// <param name="labels">The searched product states; samples keep only their weights.</param>
     /// <param name="count">Dressed states per solve: enough to hold every searched label with a margin.</param>
@@ -31,22 +32,14 @@ internal sealed class SeparationSampler
     }
 
     /// <summary>Dense solves done so far.</summary>
-    public int Solves { get; private set; }
+    public int Solves => _solves;
 
-    /// <summary>A solved sweep point, used as a starting sample (its iterative solve is accurate enough to start from, not to report).</summary>
-    public void AddSweepPoint(double bias, DressedSpectrum spectrum) =>
-        _sweepPoints.Add(Reduce(bias, spectrum.Energies, spectrum.Weights, spectrum.Basis, exact: false));
+    /// <summary>A solved sweep point as a sample: its iterative solve is accurate enough to start a refinement from, not to report.</summary>
+    public SeparationSample FromSweepPoint(double bias, DressedSpectrum spectrum) =>
+        Reduce(bias, spectrum.Energies, spectrum.Weights, spectrum.Basis, exact: false);
 
     /// <summary>The dense solve at this bias (cached).</summary>
-    public SeparationSample At(double bias)
-    {
-        if (_exact.TryGetValue(bias, out var known)) return known;
-        return _exact[bias] = Solve(bias);
-    }
-
-    /// <summary>Every sample (dense solves and sweep points) with lower ≤ bias ≤ upper.</summary>
-    public IEnumerable<SeparationSample> Within(double lower, double upper) =>
-        _exact.Values.Concat(_sweepPoints).Where(s => s.Bias >= lower && s.Bias <= upper);
+    public SeparationSample At(double bias) => _solved.GetOrAdd(bias, b => new Lazy<SeparationSample>(() => Solve(b))).Value;
 
     private SeparationSample Solve(double bias)
     {
@@ -74,7 +67,7 @@ internal sealed class SeparationSampler
                 weights[i] = z.Real * z.Real + z.Imaginary * z.Imaginary;
             }
         }
-        Solves++;
+        Interlocked.Increment(ref _solves);
         return Reduce(bias, values, weights, problem.Basis, exact: true);
     }
 

@@ -64,7 +64,7 @@ public class CrossingRefinementTests
         var states = CrossingFinder.SearchedStates(sweep, options);
         var candidates = CrossingFinder.Candidates(sweep, states, options);
         var alone = AloneAll(sweep, resolve, states, candidates, options, solver);
-        var shared = CrossingFinder.RefineAll(sweep, resolve, states, candidates, options, solver);
+        var shared = CrossingRefiner.RefineAll(sweep, resolve, states, candidates, options.BiasTolerance, solver, Environment.ProcessorCount);
 
         int clean = 0;
         for (int c = 0; c < candidates.Count; c++)
@@ -81,6 +81,21 @@ public class CrossingRefinementTests
         Assert.True(clean >= 5, $"only {clean} clean minima to compare");
     }
 
+    /// <summary>
+    /// With several workers each candidate starts only from the solves of candidates at least that many places before
+    /// it, so the result cannot depend on which worker finished first: two runs must agree bit for bit.
+    /// </summary>
+    [Fact]
+    public async Task Parallel_refinement_does_not_depend_on_timing()
+    {
+        var (sweep, resolve, options) = await CouplerSweep();
+        var states = CrossingFinder.SearchedStates(sweep, options);
+        var candidates = CrossingFinder.Candidates(sweep, states, options);
+        var first = CrossingRefiner.RefineAll(sweep, resolve, states, candidates, options.BiasTolerance, new DeviceSolver(), workers: 2);
+        var second = CrossingRefiner.RefineAll(sweep, resolve, states, candidates, options.BiasTolerance, new DeviceSolver(), workers: 2);
+        Assert.Equal(first.Select(c => (c?.Bias, c?.GapGHz, c?.Purity)), second.Select(c => (c?.Bias, c?.GapGHz, c?.Purity)));
+    }
+
     private static async Task<(SweepResult Sweep, Func<double, LevelDesign.Core.Model.Device> Resolve, CrossingOptions Options)> CouplerSweep()
     {
         var device = SweepDevices.FiveElements(levels: 4, maxExcitations: 4);
@@ -91,7 +106,7 @@ public class CrossingRefinementTests
         // the paths this checks: sweep points solved iteratively (used as starting samples), refinement solves asking
         // for fewer states than the sweep kept
         Assert.Contains(sweep.Points, p => p.Spectrum.SolverName.Contains("Davidson"));
-        Assert.True(CrossingFinder.SampleCount(sweep, CrossingFinder.SearchedStates(sweep, options)) < sweep.Points[0].Spectrum.Count);
+        Assert.True(CrossingRefiner.SampleCount(sweep, CrossingFinder.SearchedStates(sweep, options)) < sweep.Points[0].Spectrum.Count);
         return (sweep, ParameterResolver.OneAxis(resolve), options);
     }
 
