@@ -1,3 +1,4 @@
+using LevelDesign.Core.Analysis;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Model;
@@ -10,6 +11,12 @@ namespace LevelDesign.Core.Sweeps;
 /// between neighbouring points is refined by Brent's bracketing root finder. Every root is reported; a sign
 /// change that is a jump rather than a root is reported with Refined = false and its residual.
 /// </summary>
+/// <remarks>
+/// Points inside a bracket are labelled as the scan labels its points: carried, by bare character and eigenvector
+/// overlap, from the nearer end of the bracket (<see cref="LabelTracker"/>), not labelled afresh. Near an avoided
+/// crossing of the targeted state the two differ (a carried label stays with its state until another state's
+/// character wins clearly), and fresh labels would put a jump where the scan saw the quantity pass the target.
+/// </remarks>
 public static class TargetSolver
 {
     public static async Task<IReadOnlyList<TargetRoot>> FindAllAsync(Func<IReadOnlyList<double>, Device> resolve, SweepAxis axis,
@@ -20,15 +27,26 @@ public static class TargetSolver
         var solver = options.CreateSolver();
         options = options with { Solver = solver };
         if (axis.Count < 2) throw new ArgumentException($"axis '{axis.Path}': a root search needs at least 2 scan points");
-        var scan = await SweepRunner.RunAsync(resolve, new SweepPlan([axis], LabelMode.ByCharacter, levels), options, null, cancellation)
+        const LabelMode labels = LabelMode.ByCharacter;
+        var scan = await SweepRunner.RunAsync(resolve, new SweepPlan([axis], labels, levels), options, null, cancellation)
             .ConfigureAwait(false);
         var x = scan.Points.Select(p => p.AxisValues[0]).ToArray();
         var f = scan.Points.Select(p => QuantityLookup.Value(p.Quantities, quantity) - target).ToArray();
 
-        double Residual(double bias)
+        // dense solves, so a refinement point does not depend on the one before it
+        var pointSolver = new PointSolver(solver, options with { Iterative = false });
+        var scanPoints = new Dictionary<int, SolvedPoint>();
+        SolvedPoint ScanPoint(int i) =>
+            scanPoints.TryGetValue(i, out var p) ? p : scanPoints[i] = AsSolvedPoint(solver, scan.Points[i].Spectrum);
+
+        // the quantity at a bias inside [x[i], x[i+1]], its labels carried from the nearer end
+        double Residual(double bias, int i)
         {
-            var spectrum = solver.Solve(resolve([bias]), levels);
-            return QuantityLookup.Value(spectrum, quantity) - target;
+            cancellation.ThrowIfCancellationRequested();
+            int nearer = Math.Abs(bias - x[i]) <= Math.Abs(bias - x[i + 1]) ? i : i + 1;
+            var point = pointSolver.Solve(resolve([bias]), levels);
+            var (spectrum, _) = new LabelTracker(labels, options, point.Count).Next(point, ScanPoint(nearer), scan.Points[nearer].Spectrum);
+            return QuantityLookup.Value(DerivedQuantities.From(spectrum).Named(), quantity) - target;
         }
 
         var roots = new List<TargetRoot>();
@@ -38,9 +56,10 @@ public static class TargetSolver
             if (f[i] == 0) { roots.Add(new TargetRoot(quantity, target, x[i], target, 0, true)); continue; }
             if (i + 1 >= f.Length || !double.IsFinite(f[i]) || !double.IsFinite(f[i + 1]) || f[i + 1] == 0 || Math.Sign(f[i]) == Math.Sign(f[i + 1]))
                 continue;
-            if (MathNet.Numerics.RootFinding.Brent.TryFindRoot(Residual, x[i], x[i + 1], tolerance, 200, out double root))
+            int bracket = i;
+            if (MathNet.Numerics.RootFinding.Brent.TryFindRoot(b => Residual(b, bracket), x[i], x[i + 1], tolerance, 200, out double root))
             {
-                double r = Residual(root);
+                double r = Residual(root, bracket);
                 // a jump (e.g. a label moving to another state) changes sign without a root: Brent converges onto
                 // the jump and leaves a residual of the jump's size, so it is reported as not refined
                 bool isRoot = Math.Abs(r) <= Math.Max(1e-9, 1e-6 * Math.Max(Math.Abs(f[i]), Math.Abs(f[i + 1])));
@@ -55,4 +74,10 @@ public static class TargetSolver
         }
         return roots;
     }
+
+    /// <summary>A scan point's eigenpairs in the form the label tracker carries labels from (same states, same order).</summary>
+    private static SolvedPoint AsSolvedPoint(DeviceSolver solver, DressedSpectrum spectrum) =>
+        new(solver.Prepare(spectrum.Device) with { Basis = spectrum.Basis },
+            spectrum.Energies.Select(e => e + spectrum.GroundEnergy).ToArray(), spectrum.RealVectors, spectrum.ComplexVectors,
+            spectrum.SolverName);
 }
