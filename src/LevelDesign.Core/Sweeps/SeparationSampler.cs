@@ -1,16 +1,13 @@
 using System.Collections.Concurrent;
 using LevelDesign.Core.Composite;
-using LevelDesign.Core.Eigen;
 using LevelDesign.Core.Model;
 
 namespace LevelDesign.Core.Sweeps;
 
 /// <summary>
-/// Dense solves for the crossing refinement, kept by bias so every label pair refined in the same stretch of the
-/// sweep reuses them: one solve gives the separation of every pair. A complex Hamiltonian that is real up to a phase
-/// per product state (a resonator's charge operator i(a† − a)) is solved in its real gauge; the phases have unit
-/// modulus, so the weights |⟨bare|dressed⟩|² and the energies are those of the complex problem, at about a third of
-/// the cost of the complex solver. Thread-safe: concurrent requests for one bias share one solve.
+/// Dense solves for the crossing refinement (<see cref="GaugedDenseSolve"/>: in the real gauge when the matrix is
+/// real up to phases), kept by bias so every label pair refined in the same stretch of the sweep reuses them: one
+/// solve gives the separation of every pair. Thread-safe: concurrent requests for one bias share one solve.
 /// </summary>
 internal sealed class SeparationSampler
 {
@@ -44,45 +41,9 @@ internal sealed class SeparationSampler
     private SeparationSample Solve(double bias)
     {
         var problem = _solver.Prepare(_resolve(bias));
-        int n = problem.Basis.Dimension, count = Math.Min(n, _count);
-        var h = problem.Hamiltonian;
-        var eigen = _solver.EigenSolver;
-        double[] values, weights;
-        double[]? real = h.IsReal ? h.ToDenseReal() : RealGaugeDense(problem);
-        if (real is not null)
-        {
-            var result = eigen.LowestReal(real, n, count);
-            values = result.Values;
-            weights = new double[n * count];
-            for (int i = 0; i < weights.Length; i++) weights[i] = result.Vectors[i] * result.Vectors[i];
-        }
-        else
-        {
-            var result = eigen.LowestComplex(h.ToDenseComplex(), n, count);
-            values = result.Values;
-            weights = new double[n * count];
-            for (int i = 0; i < weights.Length; i++)
-            {
-                var z = result.Vectors[i];
-                weights[i] = z.Real * z.Real + z.Imaginary * z.Imaginary;
-            }
-        }
+        var point = GaugedDenseSolve.Solve(_solver.EigenSolver, problem, _count);
         Interlocked.Increment(ref _solves);
-        return Reduce(bias, values, weights, problem.Basis, exact: true);
-    }
-
-    /// <summary>D†HD as a dense real matrix when phases D making it real exist; null otherwise.</summary>
-    private static double[]? RealGaugeDense(CompositeProblem problem)
-    {
-        int n = problem.Basis.Dimension;
-        if (RealGauge.TryFind(n, problem.Hamiltonian.LowerEntries()) is not var (_, entries)) return null;
-        var dense = new double[n * n];
-        foreach (var (row, column, value) in entries)
-        {
-            dense[column * n + row] = value;
-            dense[row * n + column] = value;
-        }
-        return dense;
+        return Reduce(bias, point.Values, point.Weights(), problem.Basis, exact: true);
     }
 
     /// <summary>Keeps the energies and, per searched label, its weight in each state (weights column-major n×count).</summary>

@@ -33,8 +33,6 @@ public static class TargetSolver
         var x = scan.Points.Select(p => p.AxisValues[0]).ToArray();
         var f = scan.Points.Select(p => QuantityLookup.Value(p.Quantities, quantity) - target).ToArray();
 
-        // dense solves, so a refinement point does not depend on the one before it
-        var pointSolver = new PointSolver(solver, options with { Iterative = false });
         var scanPoints = new Dictionary<int, SolvedPoint>();
         SolvedPoint ScanPoint(int i) =>
             scanPoints.TryGetValue(i, out var p) ? p : scanPoints[i] = AsSolvedPoint(solver, scan.Points[i].Spectrum);
@@ -44,7 +42,9 @@ public static class TargetSolver
         {
             cancellation.ThrowIfCancellationRequested();
             int nearer = Math.Abs(bias - x[i]) <= Math.Abs(bias - x[i + 1]) ? i : i + 1;
-            var point = pointSolver.Solve(resolve([bias]), levels);
+            var problem = solver.Prepare(resolve([bias]));
+            // a dense solve, so a refinement point does not depend on the one before it
+            var point = GaugedDenseSolve.Solve(solver.EigenSolver, problem, levels ?? DeviceSolver.DefaultDressedCount(problem.Basis));
             var (spectrum, _) = new LabelTracker(labels, options, point.Count).Next(point, ScanPoint(nearer), scan.Points[nearer].Spectrum);
             return QuantityLookup.Value(DerivedQuantities.From(spectrum).Named(), quantity) - target;
         }
