@@ -45,7 +45,9 @@ public static class TargetSolver
             var problem = solver.Prepare(resolve([bias]));
             // a dense solve, so a refinement point does not depend on the one before it
             var point = GaugedDenseSolve.Solve(solver.EigenSolver, problem, levels ?? DeviceSolver.DefaultDressedCount(problem.Basis));
-            var (spectrum, _) = new LabelTracker(labels, options, point.Count).Next(point, ScanPoint(nearer), scan.Points[nearer].Spectrum);
+            var reference = ScanPoint(nearer);
+            var (spectrum, _) = new LabelTracker(labels, options, point.Count)
+                .Next(point, LabelTracker.Inputs(labels, point, reference), reference, scan.Points[nearer].Spectrum);
             return QuantityLookup.Value(DerivedQuantities.From(spectrum).Named(), quantity) - target;
         }
 
