@@ -1,6 +1,6 @@
 using System.Numerics;
-using System.Numerics.Tensors;
 using LevelDesign.Core.Composite;
+using LevelDesign.Core.Eigen;
 using LevelDesign.Core.Labels;
 
 namespace LevelDesign.Core.Sweeps;
@@ -24,8 +24,14 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
     /// The parts of labelling that need no neighbour's labels — bare weights and, by character, the overlaps with
     /// the neighbour's vectors — so a sweep can compute them for all points in parallel before the sequential pass.
     /// </summary>
-    public static LabelInputs Inputs(LabelMode mode, SolvedPoint point, SolvedPoint? previous) =>
-        new(point.Weights(), previous is not null && mode == LabelMode.ByCharacter ? Overlaps(previous, point) : null);
+    public static LabelInputs Inputs(LabelMode mode, SolvedPoint point, SolvedPoint? previous)
+    {
+        var weights = point.Weights();
+        int n = point.Dimension;
+        var top = new int[point.Count][];
+        for (int k = 0; k < top.Length; k++) top[k] = TopIndices(weights.AsSpan(k * n, n), TopComponents);
+        return new(weights, top, previous is not null && mode == LabelMode.ByCharacter ? Overlaps(previous, point) : null);
+    }
 
     public (DressedSpectrum Spectrum, bool Ambiguous) First(SolvedPoint point, LabelInputs inputs)
     {
@@ -46,11 +52,11 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
             previousLabels[i] = point.Problem.Basis.IndexOf(previous.Problem.Basis.States[previousSpectrum.Labels[i].BareIndex]);
 
         return mode == LabelMode.ByOrder
-            ? ByOrder(point, weights, previousLabels)
-            : ByCharacter(point, weights, previousLabels, inputs.Overlaps!);
+            ? ByOrder(point, weights, inputs.Top, previousLabels)
+            : ByCharacter(point, weights, inputs.Top, previousLabels, inputs.Overlaps!);
     }
 
-    private (DressedSpectrum, bool) ByOrder(SolvedPoint point, double[] weights, int[] previousLabels)
+    private (DressedSpectrum, bool) ByOrder(SolvedPoint point, double[] weights, int[][] top, int[] previousLabels)
     {
         int n = point.Dimension, count = point.Count;
         var taken = new HashSet<int>();
@@ -70,7 +76,7 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
         for (int k = 0; k + 1 < Math.Min(count, judgedCount + 1); k++)
             if (point.Values[k + 1] - point.Values[k] < DegenerateGHz) ambiguous = true;
         var labels = new DressedLabel[count];
-        for (int k = 0; k < count; k++) labels[k] = MakeLabel(weights, n, k, chosen[k], k < judgedCount && ambiguous && IsDegenerate(point, k));
+        for (int k = 0; k < count; k++) labels[k] = MakeLabel(weights, top[k], n, k, chosen[k], k < judgedCount && ambiguous && IsDegenerate(point, k));
         return (Build(point, weights, labels), ambiguous);
     }
 
@@ -78,7 +84,7 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
         (k > 0 && point.Values[k] - point.Values[k - 1] < DegenerateGHz) ||
         (k + 1 < point.Count && point.Values[k + 1] - point.Values[k] < DegenerateGHz);
 
-    private (DressedSpectrum, bool) ByCharacter(SolvedPoint point, double[] weights, int[] previousLabels, double[,] overlaps)
+    private (DressedSpectrum, bool) ByCharacter(SolvedPoint point, double[] weights, int[][] top, int[] previousLabels, double[,] overlaps)
     {
         int n = point.Dimension, count = point.Count;
         var candidates = new List<int>();
@@ -89,7 +95,7 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
         }
         foreach (int label in previousLabels) AddCandidate(label);
         for (int k = 0; k < count; k++)
-            foreach (int j in TopIndices(weights.AsSpan(k * n, n), 3)) AddCandidate(j);
+            foreach (int j in top[k].AsSpan(0, Math.Min(3, top[k].Length))) AddCandidate(j);
 
         var owner = new int[candidates.Count];   // neighbour state that held each candidate label, or −1
         Array.Fill(owner, -1);
@@ -117,7 +123,7 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
                 if (c != assigned[k]) runnerUp = Math.Max(runnerUp, score[k, c]);
             bool close = best - runnerUp < options.AmbiguityMargin && k < judgedCount;
             ambiguous |= close;
-            labels[k] = MakeLabel(weights, n, k, candidates[assigned[k]], close);
+            labels[k] = MakeLabel(weights, top[k], n, k, candidates[assigned[k]], close);
         }
         return (Build(point, weights, labels), ambiguous);
     }
@@ -130,16 +136,14 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
         var result = new double[previous.Count, current.Count];
         if (previous.RealVectors is double[] oldReal && current.RealVectors is double[] real)
         {
-            var gathered = new double[n];
+            // the neighbour's vectors gathered into this basis, then all dot products in one blocked product
+            var gathered = new double[n * previous.Count];
             for (int i = 0; i < previous.Count; i++)
-            {
-                for (int j = 0; j < n; j++) gathered[j] = map[j] < 0 ? 0 : oldReal[i * oldN + map[j]];
-                for (int k = 0; k < current.Count; k++)
-                {
-                    double d = TensorPrimitives.Dot(gathered, real.AsSpan(k * n, n));
-                    result[i, k] = d * d;
-                }
-            }
+                for (int j = 0; j < n; j++) gathered[i * n + j] = map[j] < 0 ? 0 : oldReal[i * oldN + map[j]];
+            var dots = new double[previous.Count * current.Count];
+            BlockProducts.Dots(gathered, n, previous.Count, real, current.Count, dots, current.Count);
+            for (int i = 0; i < previous.Count; i++)
+                for (int k = 0; k < current.Count; k++) result[i, k] = dots[i * current.Count + k] * dots[i * current.Count + k];
             return result;
         }
         Complex Old(int i, int j) => previous.ComplexVectors?[i * oldN + j] ?? previous.RealVectors![i * oldN + j];
@@ -155,9 +159,8 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
         return result;
     }
 
-    private static DressedLabel MakeLabel(double[] weights, int n, int k, int bare, bool ambiguous)
+    private static DressedLabel MakeLabel(double[] weights, int[] top, int n, int k, int bare, bool ambiguous)
     {
-        var top = TopIndices(weights.AsSpan(k * n, n), TopComponents);
         var components = top.Select(j => new Component(j, weights[k * n + j])).ToArray();
         return new DressedLabel(bare, weights[k * n + bare], ambiguous, components);
     }
