@@ -136,10 +136,15 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
         var result = new double[previous.Count, current.Count];
         if (previous.RealVectors is double[] oldReal && current.RealVectors is double[] real)
         {
-            // the neighbour's vectors gathered into this basis, then all dot products in one blocked product
-            var gathered = new double[n * previous.Count];
-            for (int i = 0; i < previous.Count; i++)
-                for (int j = 0; j < n; j++) gathered[i * n + j] = map[j] < 0 ? 0 : oldReal[i * oldN + map[j]];
+            // the neighbour's vectors in this basis (gathered only when the two bases differ), then all dot products
+            // in one blocked product
+            var gathered = oldReal;
+            if (!ReferenceEquals(previous.Problem.Basis.Structure, current.Problem.Basis.Structure))
+            {
+                gathered = new double[n * previous.Count];
+                for (int i = 0; i < previous.Count; i++)
+                    for (int j = 0; j < n; j++) gathered[i * n + j] = map[j] < 0 ? 0 : oldReal[i * oldN + map[j]];
+            }
             var dots = new double[previous.Count * current.Count];
             BlockProducts.Dots(gathered, n, previous.Count, real, current.Count, dots, current.Count);
             for (int i = 0; i < previous.Count; i++)
