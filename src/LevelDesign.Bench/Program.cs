@@ -95,16 +95,20 @@ var configurations = new (string Name, SweepOptions Options)[]
     ("2 workers, dense", new SweepOptions { Parallelism = 2, Iterative = false }),
 };
 var samples = configurations.Select(_ => new List<double>()).ToArray();
+var processor = configurations.Select(_ => new List<double>()).ToArray();
 const int rounds = 5;
 for (int round = 0; round < rounds; round++)
     for (int c = 0; c < configurations.Length; c++)
     {
         var sw = Stopwatch.StartNew();
+        var cpuBefore = Process.GetCurrentProcess().TotalProcessorTime;
         Sweep(configurations[c].Options);
         samples[c].Add(sw.Elapsed.TotalSeconds);
+        processor[c].Add((Process.GetCurrentProcess().TotalProcessorTime - cpuBefore).TotalSeconds);
     }
 double Median(List<double> values) { var v = values.Order().ToArray(); return v[v.Length / 2]; }
 var median = samples.Select(Median).ToArray();
+var medianProcessor = processor.Select(Median).ToArray();
 double sweep2 = median[0];
 double peakAfterSweeps = Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0;
 
@@ -134,6 +138,7 @@ for (int i = 0; i < iterative.Points.Count; i++)
 
 Console.WriteLine($"sweep, 201 points, labels + derived quantities, iterative (medians of {rounds} interleaved rounds):");
 Console.WriteLine($"  2 workers: {median[0]:F3} s   1 worker: {median[1]:F3} s   parallel speed-up {median[1] / median[0]:F2}x");
+Console.WriteLine($"  processor time (all threads, medians): 2 workers {medianProcessor[0]:F3} s, 1 worker {medianProcessor[1]:F3} s");
 Console.WriteLine($"  no native LAPACK anywhere (managed fallback solves): 2 workers {median[2]:F3} s   1 worker {median[3]:F3} s   speed-up {median[3] / median[2]:F2}x");
 Console.WriteLine($"  2 workers, same pipeline with dense {EigenSolvers.Active.Name} instead of iterative: {median[4]:F3} s");
 Console.WriteLine($"  one 2-worker sweep: points solved after {solvedAt:F3} s, labelled and finished at {finishedAt:F3} s; allocated {allocatedMb:F0} MB, {collections}");
