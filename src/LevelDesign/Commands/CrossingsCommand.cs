@@ -71,8 +71,8 @@ public static class CrossingsCommand
             Console.Error.WriteLine("cancelled: the crossing search needs the whole sweep");
             return (null, [], shown);
         }
-        // every candidate pair is refined by many full solves, so the default search pairs only the ground and the
-        // single-excitation states (the lowest N+1 at the first point); --levels widens it at a quadratic cost
+        // every label pair adds candidates to refine by dense solves, so the default search pairs only the ground and
+        // the single-excitation states (the lowest N+1 at the first point); --levels widens it at a quadratic cost
         int searched = levels ?? Math.Min(shown, setup.Document.Device.Elements.Count + 1);
         var axis = setup.Axes[0];
         var options = new CrossingOptions
