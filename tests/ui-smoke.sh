@@ -54,7 +54,8 @@ clear_field; keys "210 MHz" Enter
 wait_for "● unsaved" 10
 wait_for "210 MHz" 5
 keys F5; wait_for "» sweep:" 5; keys Enter
-wait_for "sweep done" 60
+wait_for "found, F3 lists them" 60   # the crossings message keeps "sweep done: …" in front of it
+wait_for "sweep done" 5
 has_braille
 keys Right Right Right
 wait_for "cursor " 5

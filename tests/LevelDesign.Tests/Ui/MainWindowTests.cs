@@ -370,6 +370,9 @@ public class MainWindowTests
         ui.WaitIdle();
         ui.Press(Key.F5, Key.Enter);
         ui.WaitFor(() => ui.Window.LastSweep is { Completed: true }, "the sweep");
+        // the crossings message does not hide the sweep's own summary (the search follows the sweep at once)
+        ui.WaitForScreen("found, F3 lists them", 120000);
+        Shows(ui.Screen, "sweep done:");
         while (ui.Window.CurrentPage != Page.Crossings) ui.Press(Key.F3);
         ui.WaitForScreen("↔", 120000);
         Shows(ui.Screen, "nearest to the file's operating points first");

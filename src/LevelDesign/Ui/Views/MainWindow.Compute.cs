@@ -183,7 +183,8 @@ public sealed partial class MainWindow
         _crossingsPending = false;
         _crossings = CrossingMark.From(crossings, sweep);
         _spectrum.Show(_series, _crossings);
-        Say($"{crossings.Count} crossing{(crossings.Count == 1 ? "" : "s")} found" + (_crossings.Count > 0 ? " (F3 → Crossings; Enter goes to one)" : ""));
+        // the crossing search follows the sweep at once: keep the sweep's own summary in view
+        Say($"{_sweepSummary} · {crossings.Count} crossing{(crossings.Count == 1 ? "" : "s")} found" + (_crossings.Count > 0 ? ", F3 lists them" : ""));
         RefreshPage();
     }
 
@@ -204,9 +205,10 @@ public sealed partial class MainWindow
         RebuildSeries();
         int total = result.Plan.Axes.Aggregate(1, (n, a) => n * Math.Max(1, a.Count));
         _spectrum.Status = result.Completed ? "" : $"cancelled: {result.Points.Count}/{total} points";
-        Say(result.Completed
+        _sweepSummary = result.Completed
             ? $"sweep done: {result.Points.Count} points in {elapsed.TotalSeconds:0.0} s"
-            : $"sweep cancelled: {result.Points.Count} of {total} points kept");
+            : $"sweep cancelled: {result.Points.Count} of {total} points kept";
+        Say(_sweepSummary);
         OnCursorMoved(_spectrum.CursorIndex);
     }
 

@@ -55,6 +55,7 @@ public sealed partial class MainWindow : Window
     private Manifold _manifold = Manifold.UpToTwo;
     private object? _resweepTimer;
     private string _progressText = "";
+    private string _sweepSummary = "";
 
     public MainWindow(EditSession session, IUiScheduler scheduler, ISweepService? sweeps = null, ITargetSolver? targets = null, IPlotExporter? plots = null)
     {
