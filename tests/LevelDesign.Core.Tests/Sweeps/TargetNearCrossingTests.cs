@@ -43,10 +43,7 @@ public class TargetNearCrossingTests
 
         var roots = await TargetSolver.FindAllAsync(resolve, axis, "q.f01", target);
 
-        var found = Assert.Single(roots);
-        Assert.True(found.Refined, $"reported as a jump at {found.Bias}, value {found.Value}");
-        Assert.Equal(root, found.Bias, 1e-9);
-        Assert.Equal(target, found.Value, 1e-9);
+        AssertOneRefinedRoot(roots, root, target);
     }
 
     /// <summary>
@@ -62,10 +59,7 @@ public class TargetNearCrossingTests
 
         var roots = await TargetSolver.FindAllAsync(resolve, axis, "q.f01", target);
 
-        var found = Assert.Single(roots);
-        Assert.True(found.Refined, $"reported as a jump at {found.Bias}, value {found.Value}");
-        Assert.Equal(root, found.Bias, 1e-9);
-        Assert.Equal(target, found.Value, 1e-9);
+        AssertOneRefinedRoot(roots, root, target);
     }
 
     /// <summary>
@@ -84,5 +78,13 @@ public class TargetNearCrossingTests
         Assert.False(jump.Refined);
         Assert.InRange(jump.Bias, 4.805, 5.205);
         if (double.IsFinite(jump.Residual)) Assert.True(Math.Abs(jump.Residual) > G / 2, $"residual {jump.Residual}");
+    }
+
+    private static void AssertOneRefinedRoot(IReadOnlyList<TargetRoot> roots, double root, double target)
+    {
+        var found = Assert.Single(roots);
+        Assert.True(found.Refined, $"reported as a jump at {found.Bias}, value {found.Value}");
+        Assert.Equal(root, found.Bias, 1e-9);
+        Assert.Equal(target, found.Value, 1e-9);
     }
 }
