@@ -58,4 +58,14 @@ public static class RealGauge
         }
         return (phases, real);
     }
+
+    /// <summary>Eigenvectors of the gauged real matrix (column-major n×count) rotated back to the original basis, phase-normalised.</summary>
+    public static Complex[] RotateBack(Complex[] phases, double[] realVectors, int n, int count)
+    {
+        var vectors = new Complex[n * count];
+        for (int c = 0; c < count; c++)
+            for (int j = 0; j < n; j++) vectors[c * n + j] = phases[j] * realVectors[c * n + j];
+        EigenvectorPhase.Normalize(vectors, n, count);
+        return vectors;
+    }
 }

@@ -31,11 +31,7 @@ internal static class GaugedDenseSolve
                 dense[row * n + column] = value;
             }
             var real = eigen.LowestReal(dense, n, count);
-            var vectors = new Complex[n * count];
-            for (int c = 0; c < count; c++)
-                for (int j = 0; j < n; j++) vectors[c * n + j] = phases[j] * real.Vectors[c * n + j];
-            EigenvectorPhase.Normalize(vectors, n, count);
-            return new SolvedPoint(problem, real.Values, null, vectors, $"{eigen.Name} (real gauge)");
+            return new SolvedPoint(problem, real.Values, null, RealGauge.RotateBack(phases, real.Vectors, n, count), $"{eigen.Name} (real gauge)");
         }
         var complex = eigen.LowestComplex(h.ToDenseComplex(), n, count);
         return new SolvedPoint(problem, complex.Values, null, complex.Vectors, eigen.Name);

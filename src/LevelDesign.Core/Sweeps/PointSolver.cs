@@ -36,48 +36,36 @@ internal sealed class PointSolver
         var problem = _solver.Prepare(device);
         int n = problem.Basis.Dimension;
         int count = Math.Min(n, levels ?? DeviceSolver.DefaultDressedCount(problem.Basis));
-        var h = problem.Hamiltonian;
-        SolvedPoint point;
-        if (h.IsReal)
+        SolvedPoint? point = _iterative is not null && n >= _options.IterativeMinimumDimension ? TryIterative(_iterative, problem, count) : null;
+        if (point is null)
         {
-            RealEigenResult? result = null;
-            string name = _solver.EigenSolver.Name;
-            if (_iterative is not null && n >= _options.IterativeMinimumDimension)
-            {
-                var (guess, columns) = WarmStart(problem.Basis, null);
-                result = _iterative.TryLowest(h.ToCsrReal(), count, guess, columns);
-                if (result is not null) { name = $"block Davidson (sparse; projected: {BlockDavidson.ProjectedName})"; IterativeSolves++; }
-            }
-            if (result is null) { result = _solver.EigenSolver.LowestReal(h.ToDenseReal(), n, count); DenseSolves++; }
-            point = new SolvedPoint(problem, result.Values, result.Vectors, null, name);
+            // complex matrices that are real up to phases are solved in their real gauge here too (about 3× faster)
+            point = GaugedDenseSolve.Solve(_solver.EigenSolver, problem, count);
+            DenseSolves++;
         }
-        else
-        {
-            ComplexEigenResult? complex = null;
-            string name = _solver.EigenSolver.Name;
-            if (_iterative is not null && n >= _options.IterativeMinimumDimension
-                && RealGauge.TryFind(n, h.LowerEntries()) is var (phases, realEntries))
-            {
-                var (guess, columns) = WarmStart(problem.Basis, phases);
-                var real = _iterative.TryLowest(CsrMatrix.FromLowerTriangle(n, realEntries), count, guess, columns);
-                if (real is not null)
-                {
-                    var vectors = new Complex[n * count];
-                    for (int c = 0; c < count; c++)
-                        for (int j = 0; j < n; j++) vectors[c * n + j] = phases[j] * real.Vectors[c * n + j];
-                    EigenvectorPhase.Normalize(vectors, n, count);
-                    complex = new ComplexEigenResult(real.Values, vectors, n);
-                    name = $"block Davidson (sparse, real gauge; projected: {BlockDavidson.ProjectedName})";
-                    IterativeSolves++;
-                }
-            }
-            if (complex is null) { complex = _solver.EigenSolver.LowestComplex(h.ToDenseComplex(), n, count); DenseSolves++; }
-            point = new SolvedPoint(problem, complex.Values, null, complex.Vectors, name);
-        }
+        else IterativeSolves++;
         _third = _beforePrevious;
         _beforePrevious = _previous;
         _previous = point;
         return point;
+    }
+
+    private SolvedPoint? TryIterative(BlockDavidson iterative, CompositeProblem problem, int count)
+    {
+        int n = problem.Basis.Dimension;
+        var h = problem.Hamiltonian;
+        if (h.IsReal)
+        {
+            var (guess, columns) = WarmStart(problem.Basis, null);
+            var result = iterative.TryLowest(h.ToCsrReal(), count, guess, columns);
+            return result is null ? null : new SolvedPoint(problem, result.Values, result.Vectors, null,
+                $"block Davidson (sparse; projected: {BlockDavidson.ProjectedName})");
+        }
+        if (RealGauge.TryFind(n, h.LowerEntries()) is not var (phases, realEntries)) return null;
+        var (gaugedGuess, gaugedColumns) = WarmStart(problem.Basis, phases);
+        var real = iterative.TryLowest(CsrMatrix.FromLowerTriangle(n, realEntries), count, gaugedGuess, gaugedColumns);
+        return real is null ? null : new SolvedPoint(problem, real.Values, null, RealGauge.RotateBack(phases, real.Vectors, n, count),
+            $"block Davidson (sparse, real gauge; projected: {BlockDavidson.ProjectedName})");
     }
 
     /// <summary>
