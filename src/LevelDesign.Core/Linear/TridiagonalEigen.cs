@@ -17,17 +17,7 @@ internal static class TridiagonalEigen
         if (offDiagonal.Length != Math.Max(0, n - 1)) throw new ArgumentException("off-diagonal needs n − 1 entries");
         if (count < 1 || count > n) throw new ArgumentException($"asked for {count} eigenpairs of a {n}×{n} matrix");
 
-        // Gershgorin interval holding the whole spectrum
-        double low = double.PositiveInfinity, high = double.NegativeInfinity, norm = 0;
-        for (int i = 0; i < n; i++)
-        {
-            double radius = (i > 0 ? Math.Abs(offDiagonal[i - 1]) : 0) + (i + 1 < n ? Math.Abs(offDiagonal[i]) : 0);
-            low = Math.Min(low, diagonal[i] - radius);
-            high = Math.Max(high, diagonal[i] + radius);
-            norm = Math.Max(norm, Math.Abs(diagonal[i]) + radius);
-        }
-        norm = Math.Max(norm, 1e-300);
-
+        var (low, high, norm) = Gershgorin(diagonal, offDiagonal);
         var values = AllByImplicitQl(diagonal, offDiagonal) is double[] all
             ? all.AsSpan(0, count).ToArray()
             : ByBisection(diagonal, offDiagonal, count, low, high, norm);
@@ -97,6 +87,28 @@ internal static class TridiagonalEigen
         }
         Array.Sort(d);
         return d;
+    }
+
+    /// <summary>An interval holding the whole spectrum, and the largest absolute row sum (a norm).</summary>
+    private static (double Low, double High, double Norm) Gershgorin(double[] diagonal, double[] offDiagonal)
+    {
+        int n = diagonal.Length;
+        double low = double.PositiveInfinity, high = double.NegativeInfinity, norm = 0;
+        for (int i = 0; i < n; i++)
+        {
+            double radius = (i > 0 ? Math.Abs(offDiagonal[i - 1]) : 0) + (i + 1 < n ? Math.Abs(offDiagonal[i]) : 0);
+            low = Math.Min(low, diagonal[i] - radius);
+            high = Math.Max(high, diagonal[i] + radius);
+            norm = Math.Max(norm, Math.Abs(diagonal[i]) + radius);
+        }
+        return (low, high, Math.Max(norm, 1e-300));
+    }
+
+    /// <summary>The lowest eigenvalues by Sturm-sequence bisection: the fallback when the QL iteration does not converge.</summary>
+    internal static double[] LowestByBisection(double[] diagonal, double[] offDiagonal, int count)
+    {
+        var (low, high, norm) = Gershgorin(diagonal, offDiagonal);
+        return ByBisection(diagonal, offDiagonal, count, low, high, norm);
     }
 
     private static double[] ByBisection(double[] diagonal, double[] offDiagonal, int count, double low, double high, double norm)

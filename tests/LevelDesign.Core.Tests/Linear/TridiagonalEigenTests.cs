@@ -71,4 +71,16 @@ public sealed class TridiagonalEigenTests
         var exact = Enumerable.Range(1, n).Select(k => 2 * Math.Cos(k * Math.PI / (n + 1))).Order().Take(5).ToArray();
         for (int k = 0; k < 5; k++) Assert.Equal(exact[k], chain[k], 1e-13);
     }
+
+    /// <summary>The bisection fallback (used only if the QL iteration fails) against the same dense solver.</summary>
+    [Theory]
+    [InlineData(0.2, 50.0, 0.25)]
+    [InlineData(1.0, 0.01, 0.0)]
+    public void Bisection_fallback_matches_a_dense_solver(double ec, double ej, double ng)
+    {
+        var (d, e) = Transmon(ec, ej, ng, 20);
+        var values = TridiagonalEigen.LowestByBisection(d, e, 8);
+        var reference = Dense(d, e).Evd(Symmetricity.Symmetric).EigenValues.Select(z => z.Real).Order().Take(8).ToArray();
+        for (int k = 0; k < 8; k++) Assert.True(Math.Abs(values[k] - reference[k]) < 1e-12 * d.Max(), $"value {k}: {values[k]:R} vs {reference[k]:R}");
+    }
 }
