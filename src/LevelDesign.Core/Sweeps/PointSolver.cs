@@ -7,10 +7,11 @@ using LevelDesign.Core.Model;
 namespace LevelDesign.Core.Sweeps;
 
 /// <summary>
-/// Solves consecutive points of one contiguous stretch of a sweep. Real matrices go to the sparse iterative
-/// solver warm-started from the previous points' vectors (mapped by product state when the basis structure
-/// differs, e.g. under an energy cutoff); when it does not converge, or the matrix is complex, the dense
-/// solver of the shared <see cref="DeviceSolver"/> is used. Not thread-safe: one per chunk.
+/// Solves consecutive points of one contiguous stretch of a sweep. Real matrices, and complex ones that are real up
+/// to a phase per product state, go to the sparse iterative solver warm-started from the previous points' vectors
+/// (mapped by product state when the basis structure differs, e.g. under an energy cutoff); when it does not
+/// converge, the device is small, or the matrix is truly complex, the dense solver of the shared
+/// <see cref="DeviceSolver"/> is used. Not thread-safe: one per chunk.
 /// </summary>
 internal sealed class PointSolver
 {
