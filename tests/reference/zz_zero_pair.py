@@ -63,7 +63,8 @@ def element(spec, levels):
 
 
 def coefficient(c, oa, ob):
-    """The coefficient of c*(opA x opB): a given g is converted through this script's bare matrix elements."""
+    """The coefficient of c*(opA x opB): a given g is converted through this script's bare matrix elements, taken
+    at the reference point (oa, ob are the operators there), so the coefficient is fixed hardware along a sweep."""
     given = c.get("given_as", {})
     if "g_ghz" in given:
         return given["g_ghz"] / abs(oa[0, 1] * ob[0, 1])
@@ -72,11 +73,11 @@ def coefficient(c, oa, ob):
     raise SystemExit(f"coupler '{c['id']}': given as {given}; not handled by this reference script")
 
 
-def check_conversions(dev):
-    """Every g-given coupler's coefficient computed here must equal the one LevelDesign reports (relative 1e-6)."""
-    ids = [e["id"] for e in dev["elements"]]
+def check_conversions(dev, reference):
+    """Every g-given coupler's coefficient, converted here at the reference point, must equal the one LevelDesign
+    reports at this bias (relative 1e-6): the coefficient is fixed hardware."""
     lv = dev["truncation"]["levels"]
-    bare = {e["id"]: element(e, lv[e["id"]]) for e in dev["elements"]}
+    bare = {e["id"]: element(e, lv[e["id"]]) for e in reference["elements"]}
     worst = 0.0
     for c in dev["couplers"]:
         a, b = c["elements"]
@@ -87,13 +88,16 @@ def check_conversions(dev):
     return worst
 
 
-def spectrum(dev):
+def spectrum(dev, reference=None):
+    """Dressed energies of dev; couplers given as g are converted with the bare operators of `reference`
+    (the device at its reference point; default dev itself)."""
     t = dev["truncation"]
     if t.get("max_bare_energy_ghz") is not None:
         raise SystemExit("a bare-energy window is not handled by this reference script")
     ids = [e["id"] for e in dev["elements"]]
     lv = [t["levels"][i] for i in ids]
     bare = [element(e, l) for e, l in zip(dev["elements"], lv)]
+    ref_bare = bare if reference is None else [element(e, l) for e, l in zip(reference["elements"], lv)]
     mx = t.get("max_excitations")
     states = [s for s in itertools.product(*[range(l) for l in lv]) if mx is None or sum(s) <= mx]
     index = {s: i for i, s in enumerate(states)}
@@ -104,7 +108,7 @@ def spectrum(dev):
     for c in dev["couplers"]:
         ia, ib = ids.index(c["elements"][0]), ids.index(c["elements"][1])
         oa, ob = bare[ia][1][c["operators"][0]], bare[ib][1][c["operators"][1]]
-        coef = coefficient(c, oa, ob)
+        coef = coefficient(c, ref_bare[ia][1][c["operators"][0]], ref_bare[ib][1][c["operators"][1]])
         exchange = c.get("form") == "exchange"
         x = oa.conj().T if exchange else oa
         term = np.zeros((dim, dim), dtype=complex)
@@ -123,8 +127,8 @@ def spectrum(dev):
     return e - e[0], np.abs(v) ** 2, states, ids
 
 
-def zz(dev, qa, qb):
-    e, w, states, ids = spectrum(dev)
+def zz(dev, qa, qb, reference=None):
+    e, w, states, ids = spectrum(dev, reference)
 
     def energy(levels):
         s = tuple(levels.get(i, 0) for i in ids)
@@ -135,7 +139,7 @@ def zz(dev, qa, qb):
 def zz_at(dev, coupler, qa, qb, flux):
     d = json.loads(json.dumps(dev))
     next(x for x in d["elements"] if x["id"] == coupler)["parameters"]["flux"] = flux
-    return zz(d, qa, qb)
+    return zz(d, qa, qb, reference=dev)  # dev is at the reference point: g converted there, once
 
 
 def roots(dev, coupler, qa, qb, lo, hi, points):
@@ -182,7 +186,8 @@ def pair_reference(path, coupler, qa, qb, lo, hi, points):
     with open(path) as f:
         wrapped = json.load(f)
     bias = wrapped["bias"]
-    worst = max(check_conversions(d["describe"]) for d in wrapped["describes"])
+    reference = wrapped["describes"][0]["describe"]  # the file's own bias value: the reference point
+    worst = max(check_conversions(d["describe"], reference) for d in wrapped["describes"])
     for d in wrapped["describes"]:  # the bias mapping of the file is the one LevelDesign applied
         flux = next(e for e in d["describe"]["elements"] if e["id"] == coupler)["parameters"]["flux"]
         assert abs(flux - (d["control_a"] - bias["offset"]) / bias["period"]) < 1e-12
@@ -192,7 +197,7 @@ def pair_reference(path, coupler, qa, qb, lo, hi, points):
     with open(out, "w") as f:
         f.write(f"# zz_zero_pair.py data/pair_describe.json {coupler} {qa} {qb} {lo} {hi} {points}  SciPy {scipy.__version__}, NumPy {np.__version__}\n")
         f.write(f"# model: describe --json of devices/pair.toml (truncation as there: levels {dev['truncation']['levels']}, max_excitations {dev['truncation']['max_excitations']}); |n| <= {N_CHARGE}\n")
-        f.write(f"# g-given couplers re-converted at each flux; checked against LevelDesign's coefficients at {len(wrapped['describes'])} biases (worst relative difference {worst:.1e})\n")
+        f.write(f"# g-given couplers converted once at the reference point (the file's bias values) and held fixed; checked against LevelDesign's coefficients at {len(wrapped['describes'])} biases (worst relative difference {worst:.1e})\n")
         f.write(f"# ZZ = E11 - E10 - E01 + E00 (largest-overlap labels); roots of ZZ({coupler}.flux) on [{lo}, {hi}] Phi0 by brentq; control = flux*period + offset (A)\n")
         f.write("root,flux_phi0,control_a\n")
         for i, x in enumerate(found):

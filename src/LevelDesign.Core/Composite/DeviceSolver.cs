@@ -34,7 +34,8 @@ public sealed class DeviceSolver
         if (problems.Count > 0) throw new InvalidDeviceException(problems);
         var t = device.Truncation;
         var bare = device.Elements.Select(e => Cache.Get(e, t.LevelsOf(e.Id), t.BasisSizeOf(e.Id))).ToArray();
-        var couplers = device.Couplers.Select(c => CouplerResolver.Resolve(c, device.Elements, bare)).ToArray();
+        var couplers = device.Couplers.Select(c => CouplerResolver.Resolve(c, device.Elements, bare,
+            (i, e) => Cache.Get(e, t.LevelsOf(device.Elements[i].Id), t.BasisSizeOf(device.Elements[i].Id)))).ToArray();
         var energies = bare.Select(b => b.Energies).ToArray();
         var basis = new CompositeBasis(StructureFor(energies, t), energies);
         var hamiltonian = HamiltonianAssembler.Assemble(basis, couplers, _plans);

@@ -26,6 +26,10 @@ public sealed record Coupler(
         return new Coupler(id, elementA, operatorA ?? opA, elementB, operatorB ?? opB, kind, form, strength);
     }
 
+    /// <summary>A copy whose g (if given as g) is converted at <paramref name="at"/>.</summary>
+    public Coupler WithGReference(GReference at) =>
+        Strength is CouplingStrength.TargetG g ? this with { Strength = g with { At = at } } : this;
+
     public double? CoefficientIfGiven => Strength is CouplingStrength.Coefficient c ? c.GHz : null;
 
     /// <summary>A copy with the strength replaced by a plain coefficient (used by sweeps of "coefficient").</summary>
@@ -35,7 +39,7 @@ public sealed record Coupler(
     public Coupler WithParameter(string name, double value) => name switch
     {
         "coefficient" => WithCoefficient(value),
-        "g" => this with { Strength = new CouplingStrength.TargetG(value) },
+        "g" => this with { Strength = new CouplingStrength.TargetG(value, (Strength as CouplingStrength.TargetG)?.At) },
         "capacitance" => this with { Strength = new CouplingStrength.Capacitance(value) },
         _ => throw new ArgumentException($"coupler '{Id}' has no parameter '{name}' (it has: coefficient, g, capacitance)"),
     };

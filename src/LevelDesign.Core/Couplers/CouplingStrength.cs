@@ -9,9 +9,11 @@ public abstract record CouplingStrength
     public sealed record Coefficient(double GHz) : CouplingStrength;
 
     /// <summary>
-    /// A target g (GHz) between the lowest transitions: c = g / |⟨0|op_A|1⟩·⟨0|op_B|1⟩| using the bare matrix elements.
+    /// A target g (GHz) between the lowest transitions: c = g / |⟨0|op_A|1⟩·⟨0|op_B|1⟩| using the bare matrix elements
+    /// at the point <paramref name="At"/> (see <see cref="GReference"/>), so c stays fixed while biases move. A device
+    /// fills in a missing point with its elements as given.
     /// </summary>
-    public sealed record TargetG(double GHz) : CouplingStrength;
+    public sealed record TargetG(double GHz, GReference? At = null) : CouplingStrength;
 
     /// <summary>
     /// A coupling capacitance (farad) between the two nodes; with node capacitances C_A, C_B taken from the

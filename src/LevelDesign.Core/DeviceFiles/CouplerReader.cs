@@ -11,7 +11,7 @@ namespace LevelDesign.Core.DeviceFiles;
 /// </summary>
 public static class CouplerReader
 {
-    public static readonly IReadOnlyList<string> Keys = ["kind", "between", "operators", "form", "g", "coefficient", "capacitance"];
+    public static readonly IReadOnlyList<string> Keys = ["kind", "between", "operators", "form", "g", "g_at", "coefficient", "capacitance"];
 
     private static readonly Dictionary<string, CouplerKind> Kinds = new()
     {
@@ -74,6 +74,8 @@ public static class CouplerReader
                     errors.At(value, path + ".capacitance", $"element '{name}' has no charging energy (ec or capacitance), so a coupling capacitance cannot be converted; give g or coefficient");
         }
 
+        if (r.Has("g_at") && strength is not CouplingStrength.TargetG && strengths.Count == 1)
+            r.Error("g_at", "g_at names the point where a g is converted; this coupler is not given by g");
         if (errors.Count > before || strength is null) return null;
         var coupler = Coupler.Create(id, kind, between[0].Text, between[1].Text, strength, operators?[0].Text, operators?[1].Text);
         if (formText is not null) coupler = coupler with { Form = formText == "exchange" ? CouplerForm.Exchange : CouplerForm.Full };

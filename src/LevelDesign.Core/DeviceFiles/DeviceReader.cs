@@ -167,6 +167,7 @@ public static partial class DeviceReader
         var points = new List<OperatingPoint>();
         foreach (var (id, table) in sections["points"])
             if (PointReader.Read(id, table, errors, biasMap) is OperatingPoint p) points.Add(p);
+        if (errors.Count == 0) device = GReferenceReader.Fix(device, sections["couplers"], points, biases, errors);
         var sweeps = new List<SweepDefinition>();
         foreach (var (id, table) in sections["sweeps"])
             if (SweepReader.Read(id, table, errors, device, biasMap) is SweepDefinition s) sweeps.Add(s);

@@ -20,6 +20,12 @@ public abstract record Element(string Id)
     /// <summary>Numeric parameters by symbol (ec, ej, flux, ...), for output and sweeps.</summary>
     public abstract IReadOnlyDictionary<string, double> Parameters { get; }
 
+    /// <summary>
+    /// Parameters set from outside the chip by a bias line (flux through a loop, gate offset charge), as opposed to
+    /// fabricated ones: a coupling given as g is converted with these held at the reference point.
+    /// </summary>
+    public virtual IReadOnlyList<string> BiasParameters => [];
+
     /// <summary>A copy with one parameter changed; throws for an unknown name.</summary>
     public abstract Element WithParameter(string name, double value);
 

@@ -5,6 +5,8 @@ public sealed record Fluxonium(string Id, double Ec, double Ej, double El, doubl
 {
     public override ElementKind Kind => ElementKind.Fluxonium;
 
+    public override IReadOnlyList<string> BiasParameters => ["flux"];
+
     public override IReadOnlyList<string> OperatorNames { get; } = ["n", "phi", "cos_phi", "sin_phi", "a", "adag"];
 
     public override IReadOnlyDictionary<string, double> Parameters =>

@@ -60,14 +60,8 @@ public sealed record LevelList(
         }
         var ops = new Dictionary<string, OperatorMatrix>();
         foreach (var (name, m) in OperatorMatrices) ops[name] = OperatorMatrix.FromReal(m).InBasis(vectors, n, levels);
-        var withLadder = LadderOperators.Add(new BareSpectrum(Id, values, ops, new BasisInfo(Overlap is null ? "given" : "given, non-orthogonal", n)));
-        if (OperatorMatrices.ContainsKey("a"))
-        {
-            // a user-defined "a" wins over the generic ladder
-            var merged = new Dictionary<string, OperatorMatrix>(withLadder.Operators) { ["a"] = ops["a"], ["adag"] = ops["a"].Adjoint() };
-            return new BareSpectrum(Id, values, merged, withLadder.Basis);
-        }
-        return withLadder;
+        // a user-defined "a" is kept (and rephased with the other operators); otherwise the generic ladder is added
+        return LadderOperators.Add(new BareSpectrum(Id, values, ops, new BasisInfo(Overlap is null ? "given" : "given, non-orthogonal", n)));
     }
 
     public override IReadOnlyList<string> Validate()

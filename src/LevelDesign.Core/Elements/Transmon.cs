@@ -5,6 +5,8 @@ public sealed record Transmon(string Id, double Ec, double Ej, double Ng = 0) : 
 {
     public override ElementKind Kind => ElementKind.Transmon;
 
+    public override IReadOnlyList<string> BiasParameters => ["ng"];
+
     public override IReadOnlyList<string> OperatorNames { get; } = ["n", "cos_phi", "sin_phi", "a", "adag"];
 
     public override IReadOnlyDictionary<string, double> Parameters =>

@@ -5,6 +5,8 @@ public sealed record TunableTransmon(string Id, double Ec, double EjSum, double 
 {
     public override ElementKind Kind => ElementKind.TunableTransmon;
 
+    public override IReadOnlyList<string> BiasParameters => ["flux", "ng"];
+
     public override IReadOnlyList<string> OperatorNames { get; } = ["n", "cos_phi", "sin_phi", "a", "adag"];
 
     public double EffectiveEj => SquidJosephsonEnergy.At(EjSum, Asymmetry, Flux);

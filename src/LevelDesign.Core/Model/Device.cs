@@ -6,6 +6,31 @@ namespace LevelDesign.Core.Model;
 /// <summary>A chip as a network of elements and couplers, with its truncation. Immutable.</summary>
 public sealed record Device(string Name, IReadOnlyList<Element> Elements, IReadOnlyList<Coupler> Couplers, Truncation Truncation)
 {
+    /// <summary>The couplers; a g without a conversion point is given one: its elements as they are here.</summary>
+    public IReadOnlyList<Coupler> Couplers { get; init; } = WithMissingGReferences(Couplers, Elements);
+
+    /// <summary>
+    /// A copy whose couplers given as g are converted at this device's present values (the file's reference point
+    /// when called on the device read from a file); <paramref name="biasedPaths"/> adds parameters that biases move.
+    /// </summary>
+    public Device WithGReferencesHere(string pointName, IReadOnlyCollection<string>? biasedPaths = null) =>
+        this with { Couplers = Couplers.Select(c => ReferenceHere(c, Elements, pointName, biasedPaths) is GReference at ? c.WithGReference(at) : c).ToArray() };
+
+    private static IReadOnlyList<Coupler> WithMissingGReferences(IReadOnlyList<Coupler> couplers, IReadOnlyList<Element> elements)
+    {
+        if (!couplers.Any(c => c.Strength is CouplingStrength.TargetG { At: null })) return couplers;
+        return couplers.Select(c => c.Strength is CouplingStrength.TargetG { At: null } && ReferenceHere(c, elements, GReference.ReferencePoint, null) is GReference at
+            ? c.WithGReference(at) : c).ToArray();
+    }
+
+    private static GReference? ReferenceHere(Coupler c, IReadOnlyList<Element> elements, string pointName, IReadOnlyCollection<string>? biasedPaths)
+    {
+        if (c.Strength is not CouplingStrength.TargetG) return null;
+        var a = elements.FirstOrDefault(e => e.Id == c.ElementA);
+        var b = elements.FirstOrDefault(e => e.Id == c.ElementB);
+        return a is null || b is null ? null : GReference.Of(pointName, a, b, biasedPaths);
+    }
+
     public int IndexOf(string elementId)
     {
         for (int i = 0; i < Elements.Count; i++) if (Elements[i].Id == elementId) return i;

@@ -16,7 +16,7 @@ public class GaugedDenseSolveTests
     {
         var solver = new DeviceSolver();
         var problem = solver.Prepare(SweepDevices.FiveElements(levels: 4, maxExcitations: 3, couplerFlux: 0.3));
-        Assert.False(problem.Hamiltonian.IsReal);   // resonator charge i(a† − a) in capacitive couplings
+        Assert.False(problem.Hamiltonian.IsReal);   // qubit charge (imaginary by the phase convention) on resonator phi
         int n = problem.Basis.Dimension, count = 20;
 
         var gauged = GaugedDenseSolve.Solve(solver.EigenSolver, problem, count);

@@ -36,8 +36,10 @@ internal static class SweepDevices
             Coupler.Create("g_qa_c", CouplerKind.Capacitive, "qa", "c", new CouplingStrength.TargetG(0.09)),
             Coupler.Create("g_qb_c", CouplerKind.Capacitive, "qb", "c", new CouplingStrength.TargetG(0.09)),
             Coupler.Create("g_qa_qb", CouplerKind.Capacitive, "qa", "qb", new CouplingStrength.TargetG(0.006)),
-            Coupler.Create("g_qa_ra", CouplerKind.Capacitive, "qa", "ra", new CouplingStrength.TargetG(0.08)),
-            Coupler.Create("g_qb_rb", CouplerKind.Capacitive, "qb", "rb", new CouplingStrength.TargetG(0.08)),
+            // qubit charge n (imaginary off the diagonal by the phase convention) on the resonators' real phi: a complex
+            // Hamiltonian that is real in a gauge, so the real-gauge paths are exercised
+            Coupler.Create("g_qa_ra", CouplerKind.Custom, "qa", "ra", new CouplingStrength.TargetG(0.08), "n", "phi"),
+            Coupler.Create("g_qb_rb", CouplerKind.Custom, "qb", "rb", new CouplingStrength.TargetG(0.08), "n", "phi"),
         ],
         new Truncation { DefaultLevels = levels, MaxExcitations = maxExcitations });
 }
