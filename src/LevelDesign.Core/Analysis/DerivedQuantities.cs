@@ -40,7 +40,9 @@ public sealed class DerivedQuantities
             double e1 = s.EnergyOfExcitation((i, 1));
             double e2 = bare.Levels > 2 ? s.EnergyOfExcitation((i, 2)) : double.NaN;
             double f01 = e1 - e0, f12 = e2 - e1;
-            transitions.Add(new ElementTransitions(elements[i].Id, bare01, f01, bare12, f12, f12 - f01, f01 - bare01));
+            double p01 = Lowest(s.PurityOfExcitation(), s.PurityOfExcitation((i, 1)));
+            double p12 = bare.Levels > 2 ? Lowest(p01, s.PurityOfExcitation((i, 2))) : double.NaN;
+            transitions.Add(new ElementTransitions(elements[i].Id, bare01, f01, bare12, f12, f12 - f01, f01 - bare01, p01, p12));
         }
 
         var chi = new List<PairValue>();
@@ -52,12 +54,12 @@ public sealed class DerivedQuantities
             for (int r = 0; r < elements.Count; r++)
             {
                 if (elements[r] is not Resonator resonator) continue;
-                chi.Add(new PairValue(elements[q].Id, elements[r].Id, ExchangeShift(s, q, r)));
+                chi.Add(new PairValue(elements[q].Id, elements[r].Id, ExchangeShift(s, q, r), ExchangePurity(s, q, r)));
                 if (resonator.Kappa is double kappa)
-                    purcell.Add(new PurcellEstimate(elements[q].Id, elements[r].Id, kappa, ExcitedWeight(s, q, r)));
+                    purcell.Add(new PurcellEstimate(elements[q].Id, elements[r].Id, kappa, ExcitedWeight(s, q, r), s.PurityOfExcitation((q, 1))));
             }
             for (int p = q + 1; p < elements.Count; p++)
-                if (elements[p].IsQubitLike) zz.Add(new PairValue(elements[q].Id, elements[p].Id, ExchangeShift(s, q, p)));
+                if (elements[p].IsQubitLike) zz.Add(new PairValue(elements[q].Id, elements[p].Id, ExchangeShift(s, q, p), ExchangePurity(s, q, p)));
         }
         return new DerivedQuantities(transitions, chi, zz, purcell);
     }
@@ -65,6 +67,12 @@ public sealed class DerivedQuantities
     /// <summary>E11 − E10 − E01 + E00: this is both ZZ (two qubits) and 2χ (qubit, resonator).</summary>
     private static double ExchangeShift(DressedSpectrum s, int a, int b) =>
         s.EnergyOfExcitation((a, 1), (b, 1)) - s.EnergyOfExcitation((a, 1)) - s.EnergyOfExcitation((b, 1)) + s.EnergyOfExcitation();
+
+    private static double ExchangePurity(DressedSpectrum s, int a, int b) =>
+        Lowest(s.PurityOfExcitation((a, 1), (b, 1)), s.PurityOfExcitation((a, 1)), s.PurityOfExcitation((b, 1)), s.PurityOfExcitation());
+
+    /// <summary>The smallest of the purities; NaN when any is missing (a state not computed).</summary>
+    private static double Lowest(params double[] purities) => purities.Any(double.IsNaN) ? double.NaN : purities.Min();
 
     private static double ExcitedWeight(DressedSpectrum s, int qubit, int resonator)
     {
@@ -97,6 +105,23 @@ public sealed class DerivedQuantities
         foreach (var c in DispersiveShifts) d[$"chi2:{c.First}:{c.Second}"] = c.Value;
         foreach (var z in ZZ) d[$"zz:{z.First}:{z.Second}"] = z.Value;
         foreach (var p in Purcell) d[$"purcell:{p.Qubit}:{p.Resonator}"] = p.RateGHz;
+        return d;
+    }
+
+    /// <summary>For each name of <see cref="Named"/>, the lowest purity of the labelled states its value is read from.</summary>
+    public IReadOnlyDictionary<string, double> NamedPurities()
+    {
+        var d = new Dictionary<string, double>();
+        foreach (var t in Transitions)
+        {
+            d[$"{t.ElementId}.f01"] = t.F01Purity;
+            d[$"{t.ElementId}.f12"] = t.F12Purity;
+            d[$"{t.ElementId}.anharmonicity"] = t.F12Purity;
+            d[$"{t.ElementId}.lamb_shift"] = t.F01Purity;
+        }
+        foreach (var c in DispersiveShifts) d[$"chi2:{c.First}:{c.Second}"] = c.Purity;
+        foreach (var z in ZZ) d[$"zz:{z.First}:{z.Second}"] = z.Purity;
+        foreach (var p in Purcell) d[$"purcell:{p.Qubit}:{p.Resonator}"] = p.Purity;
         return d;
     }
 }

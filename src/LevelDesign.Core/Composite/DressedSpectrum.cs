@@ -85,6 +85,18 @@ public sealed class DressedSpectrum
         return EnergyOf(state);
     }
 
+    /// <summary>
+    /// Purity of the dressed state labelled with the given element levels (every other element in 0); NaN if absent.
+    /// A derived quantity is only as trustworthy as the least pure state it is read from.
+    /// </summary>
+    public double PurityOfExcitation(params (int Element, int Level)[] levels)
+    {
+        var state = new int[Basis.ElementCount];
+        foreach (var (e, l) in levels) state[e] = l;
+        int k = DressedIndexOf(state);
+        return k < 0 ? double.NaN : Labels[k].Purity;
+    }
+
     /// <summary>Human label such as "qa1 ra0" → written as |qa:1, ra:0⟩ by formatters; here the raw levels.</summary>
     public int[] LabelLevels(int dressedIndex) => Basis.States[Labels[dressedIndex].BareIndex];
 

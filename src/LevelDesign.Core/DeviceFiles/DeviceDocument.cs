@@ -39,6 +39,7 @@ public sealed partial class DeviceDocument
             Points = content.Points,
             Sweeps = content.Sweeps,
             CompositeDimension = content.CompositeDimension,
+            PurityThreshold = content.PurityThreshold,
             _source = content.Source,
             _options = options,
         };
@@ -99,6 +100,9 @@ public sealed partial class DeviceDocument
 
     /// <summary>Number of product states in the composite basis (computed before anything large is built).</summary>
     public long CompositeDimension { get; private init; }
+
+    /// <summary>Below this purity a quantity's labels count as hybridized (the file's [device] purity_threshold, default 0.9).</summary>
+    public double PurityThreshold { get; private init; } = Analysis.Conventions.DefaultPurityThreshold;
 
     public BiasDefinition? Bias(string name) => Biases.FirstOrDefault(b => b.Name == name);
 

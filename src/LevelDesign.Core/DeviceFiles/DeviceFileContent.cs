@@ -10,4 +10,8 @@ public sealed record DeviceFileContent(
     IReadOnlyList<BiasDefinition> Biases,
     IReadOnlyList<OperatingPoint> Points,
     IReadOnlyList<SweepDefinition> Sweeps,
-    long CompositeDimension);
+    long CompositeDimension)
+{
+    /// <summary>Below this purity a quantity's labels count as hybridized ([device] purity_threshold; default 0.9).</summary>
+    public double PurityThreshold { get; init; } = Analysis.Conventions.DefaultPurityThreshold;
+}

@@ -16,7 +16,7 @@ public static partial class DeviceReader
     public static readonly IReadOnlyList<string> Sections =
         ["device", "truncation", "capacitance_matrix", "elements", "couplers", "biases", "points", "sweeps"];
 
-    private static readonly IReadOnlyList<string> DeviceKeys = ["name", "description"];
+    private static readonly IReadOnlyList<string> DeviceKeys = ["name", "description", "purity_threshold"];
 
     [GeneratedRegex("^[A-Za-z][A-Za-z0-9_-]*$")]
     private static partial Regex IdPattern();
@@ -88,11 +88,14 @@ public static partial class DeviceReader
         }
 
         string name = "device";
+        double purityThreshold = Analysis.Conventions.DefaultPurityThreshold;
         if (deviceTable is not null)
         {
             var r = new TableReader(deviceTable, "device", errors, DeviceKeys.ToHashSet());
             name = r.Text("name") ?? name;
             r.Text("description");
+            purityThreshold = r.Checked("purity_threshold", UnitKind.Dimensionless, x => x > 0 && x <= 1,
+                "purity_threshold must be in (0, 1], e.g. 0.9") ?? purityThreshold;
         }
         var truncation = TruncationReader.Read(truncationTable, errors);
         var matrix = CapacitanceMatrixReader.Read(matrixTable, errors);
@@ -184,7 +187,7 @@ public static partial class DeviceReader
                 "lower 'levels' or set max_excitations / max_bare_energy in [truncation], or override with allow_large = true in [truncation] (command line: --allow-large)");
             return (null, errors.Items);
         }
-        return (new DeviceFileContent(source, device, biases, points, sweeps, dimension), errors.Items);
+        return (new DeviceFileContent(source, device, biases, points, sweeps, dimension) { PurityThreshold = purityThreshold }, errors.Items);
     }
 
     /// <summary>Puts a model-level problem at the table of the element or coupler it names.</summary>

@@ -7,7 +7,7 @@ namespace LevelDesign.Core.Sweeps;
 public sealed record HybridizationMap(IReadOnlyList<string> Labels, IReadOnlyList<IReadOnlyList<double>> AxisValues,
     IReadOnlyList<double[]> Purity, IReadOnlyList<int> FlaggedPoints, double Threshold)
 {
-    public static HybridizationMap From(SweepResult sweep, IReadOnlyList<int[]> states, double threshold = 0.99)
+    public static HybridizationMap From(SweepResult sweep, IReadOnlyList<int[]> states, double threshold = Analysis.Conventions.DefaultPurityThreshold)
     {
         var purity = sweep.Points.Select(p => states.Select(s =>
         {

@@ -22,7 +22,7 @@ public sealed record SweepOptions
     public int IterativeMinimumDimension { get; init; } = 60;
 
     /// <summary>Points whose chosen states have a purity below this are flagged in hybridization maps.</summary>
-    public double PurityThreshold { get; init; } = 0.99;
+    public double PurityThreshold { get; init; } = Analysis.Conventions.DefaultPurityThreshold;
 
     /// <summary>
     /// How much continuity with the neighbouring point counts when carrying a label by character (in units of

@@ -7,4 +7,8 @@ namespace LevelDesign.Core.Sweeps;
 /// (see DerivedQuantities.Named), and whether label carrying from the neighbour was ambiguous here.
 /// </summary>
 public sealed record SweepPoint(int Index, IReadOnlyList<double> AxisValues, DressedSpectrum Spectrum,
-    IReadOnlyDictionary<string, double> Quantities, bool Ambiguous);
+    IReadOnlyDictionary<string, double> Quantities, bool Ambiguous)
+{
+    /// <summary>For each quantity, the lowest purity of the labelled states it is read from (DerivedQuantities.NamedPurities).</summary>
+    public IReadOnlyDictionary<string, double> QuantityPurities { get; init; } = new Dictionary<string, double>();
+}

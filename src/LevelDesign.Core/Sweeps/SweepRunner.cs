@@ -97,15 +97,16 @@ public static class SweepRunner
                 : tracker.Next(point, inputs[i]!, solved[previous]!, spectra[previous]!);
         }
 
-        var quantities = new IReadOnlyDictionary<string, double>?[total];
+        var quantities = new DerivedQuantities?[total];
         Parallel.For(0, total, parallel, i =>
         {
-            if (spectra[i] is DressedSpectrum spectrum) quantities[i] = DerivedQuantities.From(spectrum).Named();
+            if (spectra[i] is DressedSpectrum spectrum) quantities[i] = DerivedQuantities.From(spectrum);
         });
         var points = new List<SweepPoint>();
         for (int i = 0; i < total; i++)
             if (spectra[i] is DressedSpectrum spectrum)
-                points.Add(new SweepPoint(i, axisValues[i], spectrum, quantities[i]!, ambiguous[i]));
+                points.Add(new SweepPoint(i, axisValues[i], spectrum, quantities[i]!.Named(), ambiguous[i])
+                    { QuantityPurities = quantities[i]!.NamedPurities() });
         return points;
     }
 }

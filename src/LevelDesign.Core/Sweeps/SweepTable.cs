@@ -10,7 +10,7 @@ public sealed record SweepTable(IReadOnlyList<string> AxisPaths, IReadOnlyList<s
     IReadOnlyList<string> QuantityNames, double PurityThreshold, IReadOnlyList<SweepTableRow> Rows)
 {
     /// <param name="levels">Labels of the lowest this many states at the first point are tracked (default: the plan's, or 12).</param>
-    public static SweepTable From(SweepResult sweep, int? levels = null, double purityThreshold = 0.99)
+    public static SweepTable From(SweepResult sweep, int? levels = null, double purityThreshold = Analysis.Conventions.DefaultPurityThreshold)
     {
         if (sweep.Points.Count == 0)
             return new SweepTable(sweep.Plan.Axes.Select(a => a.Path).ToArray(), [], [], [], purityThreshold, []);
@@ -23,8 +23,9 @@ public sealed record SweepTable(IReadOnlyList<string> AxisPaths, IReadOnlyList<s
             var energies = states.Select(s => p.Spectrum.EnergyOf(s)).ToArray();
             var purities = states.Select(s => Purity(p.Spectrum, s)).ToArray();
             var quantities = names.Select(n => p.Quantities.TryGetValue(n, out double v) ? v : double.NaN).ToArray();
+            var quantityPurities = names.Select(n => p.QuantityPurities.TryGetValue(n, out double v) ? v : double.NaN).ToArray();
             bool low = purities.Any(x => x < purityThreshold);
-            return new SweepTableRow(p.Index, p.AxisValues, energies, purities, quantities, p.Ambiguous, low);
+            return new SweepTableRow(p.Index, p.AxisValues, energies, purities, quantities, p.Ambiguous, low) { QuantityPurities = quantityPurities };
         }).ToArray();
         return new SweepTable(sweep.Plan.Axes.Select(a => a.Path).ToArray(), first.Device.Elements.Select(e => e.Id).ToArray(),
             states.Select(LabelText).ToArray(), names, purityThreshold, rows);

@@ -37,8 +37,9 @@ public static class TargetSolver
         SolvedPoint ScanPoint(int i) =>
             scanPoints.TryGetValue(i, out var p) ? p : scanPoints[i] = AsSolvedPoint(solver, scan.Points[i].Spectrum);
 
-        // the quantity at a bias inside [x[i], x[i+1]], its labels carried from the nearer end
-        double Residual(double bias, int i)
+        // the quantity at a bias inside [x[i], x[i+1]], its labels carried from the nearer end, with the lowest purity
+        // of the labelled states it is read from
+        (double Residual, double Purity) Evaluate(double bias, int i)
         {
             cancellation.ThrowIfCancellationRequested();
             int nearer = Math.Abs(bias - x[i]) <= Math.Abs(bias - x[i + 1]) ? i : i + 1;
@@ -48,24 +49,30 @@ public static class TargetSolver
             var reference = ScanPoint(nearer);
             var (spectrum, _) = new LabelTracker(labels, options, point.Count)
                 .Next(point, LabelTracker.Inputs(labels, point, reference), reference, scan.Points[nearer].Spectrum);
-            return QuantityLookup.Value(DerivedQuantities.From(spectrum).Named(), quantity) - target;
+            var derived = DerivedQuantities.From(spectrum);
+            return (QuantityLookup.Value(derived.Named(), quantity) - target, derived.NamedPurities().GetValueOrDefault(quantity, double.NaN));
         }
+        double Residual(double bias, int i) => Evaluate(bias, i).Residual;
 
         var roots = new List<TargetRoot>();
         for (int i = 0; i < f.Length; i++)
         {
             cancellation.ThrowIfCancellationRequested();
-            if (f[i] == 0) { roots.Add(new TargetRoot(quantity, target, x[i], target, 0, true)); continue; }
+            if (f[i] == 0)
+            {
+                roots.Add(new TargetRoot(quantity, target, x[i], target, 0, true) { Purity = scan.Points[i].QuantityPurities.GetValueOrDefault(quantity, double.NaN) });
+                continue;
+            }
             if (i + 1 >= f.Length || !double.IsFinite(f[i]) || !double.IsFinite(f[i + 1]) || f[i + 1] == 0 || Math.Sign(f[i]) == Math.Sign(f[i + 1]))
                 continue;
             int bracket = i;
             if (MathNet.Numerics.RootFinding.Brent.TryFindRoot(b => Residual(b, bracket), x[i], x[i + 1], tolerance, 200, out double root))
             {
-                double r = Residual(root, bracket);
+                var (r, purity) = Evaluate(root, bracket);
                 // a jump (e.g. a label moving to another state) changes sign without a root: Brent converges onto
                 // the jump and leaves a residual of the jump's size, so it is reported as not refined
                 bool isRoot = Math.Abs(r) <= Math.Max(1e-9, 1e-6 * Math.Max(Math.Abs(f[i]), Math.Abs(f[i + 1])));
-                roots.Add(new TargetRoot(quantity, target, root, target + r, r, isRoot));
+                roots.Add(new TargetRoot(quantity, target, root, target + r, r, isRoot) { Purity = purity });
             }
             else
             {

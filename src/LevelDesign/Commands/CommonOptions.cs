@@ -24,5 +24,18 @@ public static class CommonOptions
         Description = "compute even when the composite matrix is estimated not to fit in memory (same as allow_large = true in [truncation])",
     };
 
+    /// <summary>--purity: one threshold shared with the terminal UI and the file's [device] purity_threshold.</summary>
+    public static Option<double?> Purity(string what) => new("--purity")
+    {
+        Description = $"purity threshold: {what} (default: the file's [device] purity_threshold, else {Core.Analysis.Conventions.DefaultPurityThreshold})",
+    };
+
+    /// <summary>The threshold in force: the option if given (checked), else the file's.</summary>
+    public static double PurityThreshold(double? option, Core.DeviceFiles.DeviceDocument document)
+    {
+        if (option is double p && !(p > 0 && p <= 1)) throw new UsageException($"--purity {p}: give a purity in (0, 1], e.g. 0.9");
+        return option ?? document.PurityThreshold;
+    }
+
     public static Option<int?> Levels() => new("--levels") { Description = "number of dressed states to report" };
 }

@@ -18,26 +18,28 @@ public static class SolveCommand
     {
         var file = CommonOptions.File();
         var vary = SweepCommand.Vary($"the range BIAS=START:STOP[:SCAN] to search (SCAN scan points, default {DefaultScan})");
-        var target = new Option<string?>("--target") { Description = "QUANTITY=VALUE, e.g. qa.f01=5.25GHz or zz:qa:qb=0 (values in Hz units; a bare number is GHz)" };
+        var target = new Option<string?>("--target") { Description = "QUANTITY=VALUE, e.g. qa.f01=5.25GHz or zz:qa:qb=0 (a frequency with its unit, e.g. 5.2GHz; a bare number is GHz)" };
         var link = SweepCommand.Link();
         var at = CommonOptions.At();
         var point = CommonOptions.Point();
         var levels = CommonOptions.Levels();
         var json = CommonOptions.Json();
         var allowLarge = CommonOptions.AllowLarge();
+        var purity = CommonOptions.Purity("list roots whose states are less pure than this apart, as inside a hybridized region");
         var command = new Command("solve", "every bias in a range where a quantity meets a target (e.g. the coupler flux of zero ZZ)")
-            { file, vary, target, link, at, point, levels, json, allowLarge };
+            { file, vary, target, link, at, point, levels, json, allowLarge, purity };
         command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(vary), parse.GetValue(target), parse.GetValue(link), parse.GetValue(at),
-            parse.GetValue(point), parse.GetValue(levels), parse.GetValue(json), parse.GetValue(allowLarge)));
+            parse.GetValue(point), parse.GetValue(levels), parse.GetValue(json), parse.GetValue(allowLarge), parse.GetValue(purity)));
         return command;
     }
 
     public static int Run(string path, string[]? vary, string? target, string[]? links, string[]? at, string? point, int? levels, bool json,
-        bool allowLarge) => CommandGuard.Run(path, () =>
+        bool allowLarge, double? purity = null) => CommandGuard.Run(path, () =>
     {
         if (vary is not { Length: > 0 }) throw new UsageException("give the range: --vary BIAS=START:STOP[:SCAN]");
         if (target is null) throw new UsageException("give --target QUANTITY=VALUE, e.g. zz:qa:qb=0");
         var document = CommandGuard.Load(path, allowLarge);
+        double threshold = CommonOptions.PurityThreshold(purity, document);
         var setup = SweepSetup.Create(document, point, at, vary, links, null, maxAxes: 1, defaultCount: DefaultScan);
         var axis = setup.Axes[0];
         if (axis.Count < 2) throw new UsageException($"--vary: a root search needs at least 2 scan points (got {axis.Count})");
@@ -48,7 +50,9 @@ public static class SolveCommand
         var options = new SweepOptions { Solver = solver };
         var roots = SweepExecution.WithCancel(token =>
             TargetSolver.FindAllAsync(setup.Resolve, axis, quantity, value, options, planLevels, ToleranceFor(axis), token));
-        Console.Write(json ? TargetReport.Json(document, axis, quantity, value, roots) : TargetReport.Table(document, axis, quantity, value, roots));
+        Console.Write(json ? TargetReport.Json(document, axis, quantity, value, roots, threshold) : TargetReport.Table(document, axis, quantity, value, roots, threshold));
+        if (roots.Any(r => r.Refined && r.IsHybridized(threshold)))
+            Console.Error.WriteLine($"warning: {roots.Count(r => r.Refined && r.IsHybridized(threshold))} root(s) lie inside a hybridized region (purity below {threshold:G3})");
         if (!roots.Any(r => r.Refined)) Console.Error.WriteLine($"no root of {quantity} = target between {axis.Start:G6} and {axis.Stop:G6}");
         return ExitCodes.Ok;
     });

@@ -16,15 +16,17 @@ public static class SpectrumCommand
         var json = CommonOptions.Json();
         var csv = CommonOptions.Csv();
         var allowLarge = CommonOptions.AllowLarge();
+        var purity = CommonOptions.Purity("flag derived quantities read from states less pure than this");
         var command = new Command("spectrum", "dressed states (label, energy, purity, components) and derived quantities at one bias point")
-            { file, at, point, levels, json, csv, allowLarge };
+            { file, at, point, levels, json, csv, allowLarge, purity };
         command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(at), parse.GetValue(point), parse.GetValue(levels),
-            parse.GetValue(json), parse.GetValue(csv), parse.GetValue(allowLarge)));
+            parse.GetValue(json), parse.GetValue(csv), parse.GetValue(allowLarge), parse.GetValue(purity)));
         return command;
     }
 
-    public static int Run(string path, string[]? at, string? point, int? levels, bool json, bool csv, bool allowLarge)
+    public static int Run(string path, string[]? at, string? point, int? levels, bool json, bool csv, bool allowLarge, double? purity = null)
     {
+        if (purity is double p && !(p > 0 && p <= 1)) { Console.Error.WriteLine($"--purity {p}: give a purity in (0, 1], e.g. 0.9"); return ExitCodes.InvalidInput; }
         if (json && csv) { Console.Error.WriteLine("choose one of --json and --csv"); return ExitCodes.InvalidInput; }
         if (levels is < 1) { Console.Error.WriteLine("--levels must be at least 1"); return ExitCodes.InvalidInput; }
         var document = DeviceInput.Load(path, allowLarge);
@@ -34,9 +36,10 @@ public static class SpectrumCommand
         try
         {
             var (spectrum, shown) = Compute(new DeviceSolver(), device, levels);
-            if (json) Console.WriteLine(JsonValues.Write(SpectrumFormatter.Report(device.Name, spectrum, shown, applied)));
+            double threshold = purity ?? document.PurityThreshold;
+            if (json) Console.WriteLine(JsonValues.Write(SpectrumFormatter.Report(device.Name, spectrum, shown, applied, threshold)));
             else if (csv) Console.Write(SpectrumFormatter.StatesCsv(spectrum, shown));
-            else Console.Write(SpectrumFormatter.Table(device.Name, spectrum, shown));
+            else Console.Write(SpectrumFormatter.Table(device.Name, spectrum, shown, threshold));
             return ExitCodes.Ok;
         }
         catch (Exception e) when (ComputationErrors.IsExpected(e))

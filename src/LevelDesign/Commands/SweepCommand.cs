@@ -35,7 +35,7 @@ public static class SweepCommand
         var point = CommonOptions.Point();
         var levels = CommonOptions.Levels();
         var labels = Labels();
-        var purity = new Option<double?>("--purity") { Description = "flag points where a tracked state's purity is below this (default 0.99)" };
+        var purity = CommonOptions.Purity("flag points where a tracked state's purity is below this");
         var json = CommonOptions.Json();
         var csv = CommonOptions.Csv();
         var output = new Option<string?>("--out") { Description = "write the result to this file instead of stdout" };
@@ -53,13 +53,13 @@ public static class SweepCommand
     {
         CommandGuard.OneFormat(json, csv);
         var mode = CommandGuard.LabelMode(labels);
-        if (purity is double p && !(p > 0 && p <= 1)) throw new UsageException($"--purity {p}: give a purity in (0, 1], e.g. 0.99");
         var document = CommandGuard.Load(path, allowLarge);
+        double threshold = CommonOptions.PurityThreshold(purity, document);
         var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 2);
         var solver = new DeviceSolver();
         var (planLevels, shown) = SweepExecution.Levels(setup, levels, solver);
         var result = SweepExecution.Run(setup, mode, planLevels, solver);
-        var table = SweepTable.From(result, shown, purity ?? 0.99);
+        var table = SweepTable.From(result, shown, threshold);
         int total = SweepGrid.PointCount(result.Plan);
         if (!result.Completed) Console.Error.WriteLine($"cancelled: keeping the {result.Points.Count} of {total} points computed");
         Write(json ? SweepReport.Json(document, result, table) : SweepReport.Csv(document, result, table), output, result.Points.Count);

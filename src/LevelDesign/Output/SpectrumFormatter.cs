@@ -24,7 +24,24 @@ public static class SpectrumFormatter
         ["zz"] = Core.Analysis.Conventions.ZZ,
         ["purity"] = Core.Analysis.Conventions.Purity,
         ["purcell"] = Core.Analysis.Conventions.Purcell,
+        ["quantity_purity"] = Core.Analysis.Conventions.QuantityPurity,
+        ["couplings"] = Core.Analysis.Conventions.Coupling,
     };
+
+    /// <summary>Each coupler's fixed coefficient, where a g was converted, and g at this point.</summary>
+    public static JsonArray Couplings(DressedSpectrum s)
+    {
+        var list = new JsonArray();
+        foreach (var c in s.Couplers)
+            list.Add(new JsonObject
+            {
+                ["id"] = c.Id,
+                ["coefficient_ghz"] = JsonValues.Number(c.CoefficientGHz),
+                ["converted_at"] = c.ConvertedAt?.PointName,
+                ["g_here_ghz"] = JsonValues.Number(c.GHereGHz),
+            });
+        return list;
+    }
 
     /// <summary>The lowest <paramref name="shown"/> dressed states with labels, energies, purity and top components.</summary>
     public static JsonArray States(DressedSpectrum s, int shown)
@@ -55,8 +72,9 @@ public static class SpectrumFormatter
         return states;
     }
 
-    public static JsonObject Derived(DerivedQuantities d)
+    public static JsonObject Derived(DerivedQuantities d, double purityThreshold = Core.Analysis.Conventions.DefaultPurityThreshold)
     {
+        JsonNode? Low(double purity) => purity < purityThreshold;
         var transitions = new JsonArray();
         foreach (var t in d.Transitions)
             transitions.Add(new JsonObject
@@ -68,13 +86,19 @@ public static class SpectrumFormatter
                 ["f12_ghz"] = JsonValues.Number(t.DressedF12),
                 ["anharmonicity_ghz"] = JsonValues.Number(t.Anharmonicity),
                 ["lamb_shift_ghz"] = JsonValues.Number(t.LambShift),
+                ["f01_purity"] = JsonValues.Number(t.F01Purity),
+                ["f12_purity"] = JsonValues.Number(t.F12Purity),
+                ["f01_hybridized"] = Low(t.F01Purity),
+                ["f12_hybridized"] = Low(t.F12Purity),
             });
         var chi = new JsonArray();
         foreach (var c in d.DispersiveShifts)
-            chi.Add(new JsonObject { ["qubit"] = c.First, ["resonator"] = c.Second, ["chi2_ghz"] = JsonValues.Number(c.Value) });
+            chi.Add(new JsonObject { ["qubit"] = c.First, ["resonator"] = c.Second, ["chi2_ghz"] = JsonValues.Number(c.Value),
+                ["purity"] = JsonValues.Number(c.Purity), ["hybridized"] = Low(c.Purity) });
         var zz = new JsonArray();
         foreach (var z in d.ZZ)
-            zz.Add(new JsonObject { ["first"] = z.First, ["second"] = z.Second, ["zz_ghz"] = JsonValues.Number(z.Value) });
+            zz.Add(new JsonObject { ["first"] = z.First, ["second"] = z.Second, ["zz_ghz"] = JsonValues.Number(z.Value),
+                ["purity"] = JsonValues.Number(z.Purity), ["hybridized"] = Low(z.Purity) });
         var purcell = new JsonArray();
         foreach (var p in d.Purcell)
             purcell.Add(new JsonObject
@@ -85,18 +109,26 @@ public static class SpectrumFormatter
                 ["resonator_weight"] = JsonValues.Number(p.ResonatorWeight),
                 ["rate_ghz"] = JsonValues.Number(p.RateGHz),
                 ["t1_limit_s"] = JsonValues.Number(p.T1LimitSeconds),
+                ["purity"] = JsonValues.Number(p.Purity),
+                ["hybridized"] = Low(p.Purity),
             });
-        return new JsonObject { ["transitions"] = transitions, ["dispersive_shifts"] = chi, ["zz"] = zz, ["purcell"] = purcell };
+        return new JsonObject
+        {
+            ["purity_threshold"] = JsonValues.Number(purityThreshold),
+            ["transitions"] = transitions, ["dispersive_shifts"] = chi, ["zz"] = zz, ["purcell"] = purcell,
+        };
     }
 
     /// <summary>The whole report of one point: states, derived quantities, conventions, solver, limits.</summary>
-    public static JsonObject Report(string deviceName, DressedSpectrum s, int shown, JsonObject? at = null)
+    public static JsonObject Report(string deviceName, DressedSpectrum s, int shown, JsonObject? at = null,
+        double purityThreshold = Core.Analysis.Conventions.DefaultPurityThreshold)
     {
         var o = new JsonObject { ["device"] = deviceName };
         if (at is not null) o["at"] = at;
         o["composite_dimension"] = s.Dimension;
         o["states"] = States(s, shown);
-        o["derived"] = Derived(DerivedQuantities.From(s));
+        o["derived"] = Derived(DerivedQuantities.From(s), purityThreshold);
+        o["couplings"] = Couplings(s);
         o["conventions"] = Conventions();
         o["eigensolver"] = EigenSolvers.Describe();
         o["limits_of_model"] = Core.Analysis.Conventions.LimitsOfModel;
@@ -104,8 +136,10 @@ public static class SpectrumFormatter
     }
 
     /// <summary>A readable terminal table: energies in GHz, shifts in MHz, ZZ in kHz.</summary>
-    public static string Table(string deviceName, DressedSpectrum s, int shown)
+    public static string Table(string deviceName, DressedSpectrum s, int shown, double purityThreshold = Core.Analysis.Conventions.DefaultPurityThreshold)
     {
+        string Flag(double purity) => purity < purityThreshold ? " !" : "";
+        string P(double purity) => double.IsFinite(purity) ? purity.ToString("0.0000", Inv) : "—";
         var b = new StringBuilder();
         var d = DerivedQuantities.From(s);
         b.AppendLine($"device {deviceName}: {s.Dimension} product states, {s.Count} dressed states computed");
@@ -121,27 +155,36 @@ public static class SpectrumFormatter
         }
         b.AppendLine();
         b.AppendLine("Transitions (" + Core.Analysis.Conventions.Transitions + "; " + Core.Analysis.Conventions.LambShift + ")");
-        b.AppendLine($"{"element",-10} {"f01 GHz",12} {"f12 GHz",12} {"α MHz",10} {"Lamb MHz",10}");
+        b.AppendLine($"{"element",-10} {"f01 GHz",12} {"f12 GHz",12} {"α MHz",10} {"Lamb MHz",10} {"purity 01",10} {"purity 012",10}");
         foreach (var t in d.Transitions)
-            b.AppendLine(string.Create(Inv, $"{t.ElementId,-10} {Num(t.DressedF01, 1, "0.000000"),12} {Num(t.DressedF12, 1, "0.000000"),12} {Num(t.Anharmonicity, 1e3, "0.000"),10} {Num(t.LambShift, 1e3, "0.000"),10}"));
+            b.AppendLine(string.Create(Inv, $"{t.ElementId,-10} {Num(t.DressedF01, 1, "0.000000"),12} {Num(t.DressedF12, 1, "0.000000"),12} {Num(t.Anharmonicity, 1e3, "0.000"),10} {Num(t.LambShift, 1e3, "0.000"),10} {P(t.F01Purity),10} {P(t.F12Purity),10}{Flag(Math.Min(t.F01Purity, t.F12Purity))}"));
         if (d.DispersiveShifts.Count > 0)
         {
             b.AppendLine();
             b.AppendLine("Dispersive shifts (" + Core.Analysis.Conventions.DispersiveShift + ")");
-            foreach (var c in d.DispersiveShifts) b.AppendLine(string.Create(Inv, $"  2χ {c.First}–{c.Second}: {Num(c.Value, 1e3, "0.0000")} MHz"));
+            foreach (var c in d.DispersiveShifts) b.AppendLine(string.Create(Inv, $"  2χ {c.First}–{c.Second}: {Num(c.Value, 1e3, "0.0000")} MHz   purity {P(c.Purity)}{Flag(c.Purity)}"));
         }
         if (d.ZZ.Count > 0)
         {
             b.AppendLine();
             b.AppendLine("ZZ (" + Core.Analysis.Conventions.ZZ + ")");
-            foreach (var z in d.ZZ) b.AppendLine(string.Create(Inv, $"  ζ {z.First}–{z.Second}: {Num(z.Value, 1e6, "0.000")} kHz"));
+            foreach (var z in d.ZZ) b.AppendLine(string.Create(Inv, $"  ζ {z.First}–{z.Second}: {Num(z.Value, 1e6, "0.000")} kHz   purity {P(z.Purity)}{Flag(z.Purity)}"));
         }
         if (d.Purcell.Count > 0)
         {
             b.AppendLine();
             b.AppendLine("Purcell estimates (" + Core.Analysis.Conventions.Purcell + ")");
             foreach (var p in d.Purcell)
-                b.AppendLine(string.Create(Inv, $"  {p.Qubit} via {p.Resonator}: γ = {Num(p.RateGHz, 1e6, "0.000")} kHz, T1 limit {Num(p.T1LimitSeconds, 1e3, "0.000")} ms"));
+                b.AppendLine(string.Create(Inv, $"  {p.Qubit} via {p.Resonator}: γ = {Num(p.RateGHz, 1e6, "0.000")} kHz, T1 limit {Num(p.T1LimitSeconds, 1e3, "0.000")} ms   purity {P(p.Purity)}{Flag(p.Purity)}"));
+        }
+        b.AppendLine();
+        b.AppendLine(string.Create(Inv, $"Purity ({Core.Analysis.Conventions.QuantityPurity}; threshold here {purityThreshold:G3})"));
+        if (s.Couplers.Count > 0)
+        {
+            b.AppendLine();
+            b.AppendLine("Couplings (" + Core.Analysis.Conventions.Coupling + ")");
+            foreach (var c in s.Couplers)
+                b.AppendLine(string.Create(Inv, $"  {c.Id,-12} coefficient {Num(c.CoefficientGHz, 1e3, "0.000")} MHz{(c.ConvertedAt is { } at ? $" (g converted at the {at.PointName} point)" : "")}, g here {Num(c.GHereGHz, 1e3, "0.000")} MHz"));
         }
         b.AppendLine();
         b.AppendLine(EigenSolvers.Describe());

@@ -14,25 +14,38 @@ public static class TargetReport
 
     public const string JumpNote = "the quantity changes sign here by a jump (e.g. a label moving to another state), not through a root";
 
-    public static string Table(DeviceDocument document, SweepAxis axis, string quantity, double target, IReadOnlyList<TargetRoot> roots)
+    public const string HybridizedNote = "inside a hybridized region: a state this quantity is read from has purity below the threshold, so its label (and the value) cannot be trusted";
+
+    public static string Table(DeviceDocument document, SweepAxis axis, string quantity, double target, IReadOnlyList<TargetRoot> roots, double purityThreshold)
     {
         string unit = AxisUnitText.Of(document, axis.Path);
         var (path, _) = AxisUnitText.Parameter(document, axis.Path, 0);
         var b = new StringBuilder();
         b.AppendLine($"device {document.Device.Name}: {quantity} = {QuantityFormatter.Format(target, UnitKind.Frequency)} along {axis.Path} from {axis.Start.ToString("G6", Inv)} to {axis.Stop.ToString("G6", Inv)} {unit} ({axis.Count} scan points)");
-        int real = roots.Count(r => r.Refined);
-        b.AppendLine(real == 0 ? "no root in this range" : $"{real} root(s)");
-        foreach (var r in roots)
+        var clean = roots.Where(r => r.Refined && !r.IsHybridized(purityThreshold)).ToList();
+        var hybridized = roots.Where(r => r.Refined && r.IsHybridized(purityThreshold)).ToList();
+        b.AppendLine(clean.Count == 0 ? "no clean root in this range" : $"{clean.Count} root(s)");
+        string Root(TargetRoot r)
         {
             var (_, parameter) = AxisUnitText.Parameter(document, axis.Path, r.Bias);
-            b.AppendLine(r.Refined
-                ? string.Create(Inv, $"  {axis.Path} = {r.Bias:G10} {unit}   ({path} = {parameter:G10})   {quantity} = {Hz(r.Value)}, residual {Hz(r.Residual)}")
-                : string.Create(Inv, $"  {axis.Path} ≈ {r.Bias:G10} {unit}   ({path} = {parameter:G10})   not a root: {JumpNote}"));
+            return string.Create(Inv, $"  {axis.Path} = {r.Bias:G10} {unit}   ({path} = {parameter:G10})   {quantity} = {Hz(r.Value)}, residual {Hz(r.Residual)}, purity {r.Purity:F4}");
         }
+        foreach (var r in clean) b.AppendLine(Root(r));
+        if (hybridized.Count > 0)
+        {
+            b.AppendLine(string.Create(Inv, $"{hybridized.Count} root(s) {HybridizedNote} ({purityThreshold:G3}):"));
+            foreach (var r in hybridized) b.AppendLine(Root(r) + " !");
+        }
+        foreach (var r in roots.Where(r => !r.Refined))
+        {
+            var (_, parameter) = AxisUnitText.Parameter(document, axis.Path, r.Bias);
+            b.AppendLine(string.Create(Inv, $"  {axis.Path} ≈ {r.Bias:G10} {unit}   ({path} = {parameter:G10})   not a root: {JumpNote}"));
+        }
+        b.AppendLine(Core.Analysis.Conventions.QuantityPurity);
         return b.ToString();
     }
 
-    public static string Json(DeviceDocument document, SweepAxis axis, string quantity, double target, IReadOnlyList<TargetRoot> roots)
+    public static string Json(DeviceDocument document, SweepAxis axis, string quantity, double target, IReadOnlyList<TargetRoot> roots, double purityThreshold)
     {
         var list = new JsonArray();
         foreach (var r in roots)
@@ -45,8 +58,11 @@ public static class TargetReport
                 ["value_ghz"] = JsonValues.Number(r.Value),
                 ["residual_ghz"] = JsonValues.Number(r.Residual),
                 ["root"] = r.Refined,
+                ["purity"] = JsonValues.Number(r.Purity),
+                ["hybridized"] = r.Refined && r.IsHybridized(purityThreshold),
             };
             if (!r.Refined) o["note"] = JumpNote;
+            else if (r.IsHybridized(purityThreshold)) o["note"] = HybridizedNote;
             list.Add(o);
         }
         return JsonValues.Write(new JsonObject
@@ -55,6 +71,7 @@ public static class TargetReport
             ["quantity"] = quantity,
             ["target_ghz"] = JsonValues.Number(target),
             ["axis"] = AxisUnitText.Describe(document, axis),
+            ["purity_threshold"] = JsonValues.Number(purityThreshold),
             ["roots"] = list,
             ["conventions"] = SpectrumFormatter.Conventions(),
         }) + Environment.NewLine;

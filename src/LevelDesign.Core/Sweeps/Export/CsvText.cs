@@ -9,12 +9,13 @@ public static class CsvText
     public static string Sweep(SweepTable table)
     {
         var sb = new StringBuilder();
-        sb.AppendLine($"# energies: GHz above the dressed ground; labels list levels of: {string.Join(",", table.ElementOrder)}; purity flag below {table.PurityThreshold}");
+        sb.AppendLine($"# energies: GHz above the dressed ground; labels list levels of: {string.Join(",", table.ElementOrder)}; purity flag below {table.PurityThreshold}; 'purity Q' = lowest purity of the labelled states quantity Q is read from");
         var header = new List<string> { "point" };
         header.AddRange(table.AxisPaths);
         header.AddRange(table.Labels.Select(l => $"E {l}"));
         header.AddRange(table.Labels.Select(l => $"purity {l}"));
         header.AddRange(table.QuantityNames);
+        header.AddRange(table.QuantityNames.Select(n => $"purity {n}"));
         header.AddRange(["ambiguous", "low_purity"]);
         sb.AppendLine(string.Join(",", header.Select(Quote)));
         foreach (var row in table.Rows)
@@ -24,6 +25,7 @@ public static class CsvText
             cells.AddRange(row.Energies.Select(Number));
             cells.AddRange(row.Purities.Select(Number));
             cells.AddRange(row.Quantities.Select(Number));
+            cells.AddRange(table.QuantityNames.Select((_, i) => i < row.QuantityPurities.Count ? Number(row.QuantityPurities[i]) : ""));
             cells.Add(row.Ambiguous ? "1" : "0");
             cells.Add(row.LowPurity ? "1" : "0");
             sb.AppendLine(string.Join(",", cells));

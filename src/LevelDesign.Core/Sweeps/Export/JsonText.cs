@@ -27,6 +27,7 @@ public static class JsonText
             Numbers(w, "energies", row.Energies);
             Numbers(w, "purities", row.Purities);
             Numbers(w, "quantities", row.Quantities);
+            Numbers(w, "quantity_purities", row.QuantityPurities);
             w.WriteBoolean("ambiguous", row.Ambiguous);
             w.WriteBoolean("low_purity", row.LowPurity);
             w.WriteEndObject();
