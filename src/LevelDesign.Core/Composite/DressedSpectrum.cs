@@ -27,11 +27,32 @@ public sealed class DressedSpectrum
         Weights = weights;
         ComplexVectors = complexVectors;
         RealVectors = realVectors;
-        Labels = labels;
+        Labels = MarkDegenerate(labels, eigenvalues);
         SolverName = solverName;
         IsComplex = isComplex;
         _dressedOfBare = Enumerable.Repeat(-1, basis.Dimension).ToArray();
         for (int k = 0; k < labels.Length; k++) _dressedOfBare[labels[k].BareIndex] = k;
+    }
+
+    /// <summary>Dressed states closer than this (GHz, 1 Hz) count as exactly degenerate.</summary>
+    public const double DegenerateGHz = 1e-9;
+
+    /// <summary>
+    /// Exactly degenerate dressed states have no preferred basis inside their multiplet, so the label each one carries is
+    /// arbitrary: they are marked ambiguous.
+    /// </summary>
+    private static DressedLabel[] MarkDegenerate(DressedLabel[] labels, double[] eigenvalues)
+    {
+        DressedLabel[]? marked = null;
+        for (int k = 0; k < labels.Length; k++)
+        {
+            bool degenerate = (k > 0 && eigenvalues[k] - eigenvalues[k - 1] < DegenerateGHz)
+                              || (k + 1 < eigenvalues.Length && eigenvalues[k + 1] - eigenvalues[k] < DegenerateGHz);
+            if (!degenerate || labels[k].Ambiguous) continue;
+            marked ??= (DressedLabel[])labels.Clone();
+            marked[k] = labels[k] with { Ambiguous = true };
+        }
+        return marked ?? labels;
     }
 
     public Device Device { get; }

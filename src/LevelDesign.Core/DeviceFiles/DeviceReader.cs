@@ -121,6 +121,8 @@ public static partial class DeviceReader
             var result = ElementReader.Read(id, table, operatorTables.GetValueOrDefault(id), errors, ec);
             if (result.Element is not null) elements.Add(result.Element);
             if (result.Levels is int l) levels[id] = l;
+            // a level list with fewer states than [truncation] default_levels keeps all of its states
+            else if (result.Element?.MaxLevels is int most && most < truncation.DefaultLevels) levels[id] = most;
             if (result.BasisSize is int b) basisSizes[id] = b;
         }
         var byId = elements.ToDictionary(e => e.Id);
@@ -170,7 +172,6 @@ public static partial class DeviceReader
         var points = new List<OperatingPoint>();
         foreach (var (id, table) in sections["points"])
             if (PointReader.Read(id, table, errors, biasMap) is OperatingPoint p) points.Add(p);
-        if (errors.Count == 0) device = GReferenceReader.Fix(device, sections["couplers"], points, biases, errors);
         var sweeps = new List<SweepDefinition>();
         foreach (var (id, table) in sections["sweeps"])
             if (SweepReader.Read(id, table, errors, device, biasMap) is SweepDefinition s) sweeps.Add(s);
@@ -187,6 +188,10 @@ public static partial class DeviceReader
                 "lower 'levels' or set max_excitations / max_bare_energy in [truncation], or override with allow_large = true in [truncation] (command line: --allow-large)");
             return (null, errors.Items);
         }
+        // after the size guard, so a device refused for its size is refused at once
+        BareSpectrumCheck.Run(device, sections["elements"], errors);
+        if (errors.Count == 0) device = GReferenceReader.Fix(device, sections["couplers"], points, biases, errors);
+        if (errors.Count > 0) return (null, errors.Items);
         return (new DeviceFileContent(source, device, biases, points, sweeps, dimension) { PurityThreshold = purityThreshold }, errors.Items);
     }
 

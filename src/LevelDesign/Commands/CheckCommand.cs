@@ -32,6 +32,7 @@ public static class CheckCommand
             // Building the problem also checks what only the bare spectra can tell (g conversions, basis convergence).
             var problem = new DeviceSolver().Prepare(document.Device);
             Console.WriteLine($"ok: {document.Device.Elements.Count} elements, {document.Device.Couplers.Count} couplers, composite dimension {problem.Basis.Dimension}");
+            foreach (string w in Core.Analysis.TruncationWarnings.For(document.Device)) Console.WriteLine($"{path}: warning: {w}");
             return ExitCodes.Ok;
         }
         catch (Exception e) when (ComputationErrors.IsExpected(e))

@@ -29,8 +29,11 @@ public static class DescribeCommand
         try
         {
             var problem = new DeviceSolver().Prepare(device);
+            var warnings = DeviceWarnings.Print(path, device);
             // JSON is the only output form: the model is data for another program.
-            Console.WriteLine(JsonValues.Write(DescribeFormatter.Describe(problem, applied)));
+            var report = DescribeFormatter.Describe(problem, applied);
+            report["warnings"] = new System.Text.Json.Nodes.JsonArray(warnings.Select(w => (System.Text.Json.Nodes.JsonNode?)w).ToArray());
+            Console.WriteLine(JsonValues.Write(report));
             return ExitCodes.Ok;
         }
         catch (Exception e) when (ComputationErrors.IsExpected(e))

@@ -52,7 +52,7 @@ public static class SolveCommand
             TargetSolver.FindAllAsync(setup.Resolve, axis, quantity, value, options, planLevels, ToleranceFor(axis), token));
         Console.Write(json ? TargetReport.Json(document, axis, quantity, value, roots, threshold) : TargetReport.Table(document, axis, quantity, value, roots, threshold));
         if (roots.Any(r => r.Refined && r.IsHybridized(threshold)))
-            Console.Error.WriteLine($"warning: {roots.Count(r => r.Refined && r.IsHybridized(threshold))} root(s) lie inside a hybridized region (purity below {threshold:G3})");
+            Console.Error.WriteLine(string.Create(System.Globalization.CultureInfo.InvariantCulture, $"warning: {roots.Count(r => r.Refined && r.IsHybridized(threshold))} root(s) lie inside a hybridized region (purity below {threshold:G3})"));
         if (!roots.Any(r => r.Refined)) Console.Error.WriteLine($"no root of {quantity} = target between {axis.Start:G6} and {axis.Stop:G6}");
         return ExitCodes.Ok;
     });

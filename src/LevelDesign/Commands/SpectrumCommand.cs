@@ -36,8 +36,14 @@ public static class SpectrumCommand
         try
         {
             var (spectrum, shown) = Compute(new DeviceSolver(), device, levels);
+            var warnings = DeviceWarnings.Print(path, device);
             double threshold = purity ?? document.PurityThreshold;
-            if (json) Console.WriteLine(JsonValues.Write(SpectrumFormatter.Report(device.Name, spectrum, shown, applied, threshold)));
+            if (json)
+            {
+                var report = SpectrumFormatter.Report(device.Name, spectrum, shown, applied, threshold);
+                report["warnings"] = new System.Text.Json.Nodes.JsonArray(warnings.Select(w => (System.Text.Json.Nodes.JsonNode?)w).ToArray());
+                Console.WriteLine(JsonValues.Write(report));
+            }
             else if (csv) Console.Write(SpectrumFormatter.StatesCsv(spectrum, shown));
             else Console.Write(SpectrumFormatter.Table(device.Name, spectrum, shown, threshold));
             return ExitCodes.Ok;

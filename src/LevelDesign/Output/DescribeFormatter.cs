@@ -48,6 +48,8 @@ public static class DescribeFormatter
                 ["form"] = c.Form == CouplerForm.Exchange ? "exchange" : "full",
                 ["coefficient_ghz"] = JsonValues.Number(c.CoefficientGHz),
                 ["given_as"] = Given(c.Source.Strength),
+                ["converted_at"] = c.ConvertedAt?.PointName,
+                ["g_here_ghz"] = JsonValues.Number(c.GHereGHz),
                 ["adds_conjugate"] = c.Form == CouplerForm.Exchange || !(c.OperatorA.IsHermitian() && c.OperatorB.IsHermitian()),
             });
         }
@@ -71,8 +73,9 @@ public static class DescribeFormatter
         switch (e)
         {
             case LevelList list:
+                // the level energies are the eigenvalues of the given hamiltonian (with its overlap, if any), not its diagonal
                 var energies = new JsonArray();
-                for (int i = 0; i < list.BasisSize; i++) energies.Add(JsonValues.Number(list.Hamiltonian[i, i]));
+                foreach (double energy in list.Diagonalise(list.BasisSize).Energies) energies.Add(JsonValues.Number(energy));
                 p["energies"] = energies;
                 p["hamiltonian"] = JsonValues.Matrix(list.Hamiltonian);
                 var ops = new JsonObject();

@@ -23,15 +23,22 @@ public static class SweepReport
             ["label_mode"] = sweep.Plan.Labels == LabelMode.ByCharacter ? "character" : "order",
             ["axis_details"] = new JsonArray(sweep.Plan.Axes.Select(a => (JsonNode)AxisUnitText.Describe(document, a)).ToArray()),
         };
-        // the parameter each bias axis moves (e.g. qc.flux in Φ0), beside its control value
+        // the parameter each bias axis moves (e.g. qc.flux in Φ0), beside its control value, and every linked target
         foreach (var point in o["points"]!.AsArray())
         {
             var values = point!["axis_values"]!.AsArray();
             var parameters = new JsonObject();
             for (int a = 0; a < sweep.Plan.Axes.Count; a++)
             {
-                var (path, value) = AxisUnitText.Parameter(document, sweep.Plan.Axes[a].Path, (double)values[a]!);
+                var axis = sweep.Plan.Axes[a];
+                double x = (double)values[a]!;
+                var (path, value) = AxisUnitText.Parameter(document, axis.Path, x);
                 parameters[path] = JsonValues.Number(value);
+                foreach (var link in axis.Links)
+                {
+                    var (linkedPath, linkedValue) = AxisUnitText.Parameter(document, link.Path, link.Scale * x + link.Shift);
+                    parameters[linkedPath] = JsonValues.Number(linkedValue);
+                }
             }
             point["parameters"] = parameters;
         }

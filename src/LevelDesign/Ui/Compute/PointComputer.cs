@@ -24,7 +24,8 @@ public static class PointComputer
             try { convergence = TruncationConvergence.Check(solver, device); }
             catch (Exception e) when (e is ArgumentException or InvalidOperationException) { convergenceProblem = e.Message; }
         }
-        return new PointSnapshot(spectrum, quantities, convergence, DateTime.Now, clock.Elapsed) { ConvergenceProblem = convergenceProblem };
+        return new PointSnapshot(spectrum, quantities, convergence, DateTime.Now, clock.Elapsed)
+            { ConvergenceProblem = convergenceProblem, Warnings = TruncationWarnings.For(device) };
     }
 
     /// <summary>A snapshot of an already computed spectrum (a sweep point), without convergence.</summary>

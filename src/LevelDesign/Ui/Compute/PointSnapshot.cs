@@ -14,6 +14,9 @@ public sealed record PointSnapshot(
     /// <summary>Why the truncation check could not run (e.g. a level list cannot grow), or null.</summary>
     public string? ConvergenceProblem { get; init; }
 
+    /// <summary>Warnings about the device at this point (levels cut inside a degenerate multiplet, ...).</summary>
+    public IReadOnlyList<string> Warnings { get; init; } = [];
+
     /// <summary>Convergence of the key values only (see <see cref="ConvergenceSummary"/>), or "not checked".</summary>
     public string ConvergenceText => ConvergenceProblem is not null
         ? "not checked (F3 shifts says why)"

@@ -45,7 +45,8 @@ public static class BoardOutline
     private static string ControlUnitHint(BiasDefinition bias) =>
         bias.ControlKind == UnitKind.Dimensionless ? ", a plain number" : $", {bias.ControlKind.WithArticle()} such as {bias.ControlKind.ExampleText()}";
 
-    public static IReadOnlyList<FieldRow> Fields(DeviceDocument document, BoardNode node)
+    /// <param name="here">The couplers as resolved at the point last computed (for the fixed coefficient and g here), if any.</param>
+    public static IReadOnlyList<FieldRow> Fields(DeviceDocument document, BoardNode node, IReadOnlyList<ResolvedCoupler>? here = null)
     {
         var device = document.Device;
         switch (node.Kind)
@@ -102,6 +103,13 @@ public static class BoardOutline
                 rows.Add(document.ValueTextOf(strengthPath) is string written
                     ? new FieldRow(name, FieldUnits.Display(value, unit), strengthPath, unit.ExampleText(), written)
                     : new FieldRow(name, FieldUnits.Display(value, unit), null, "", Note: "(from [capacitance_matrix])", ShortNote: ""));
+                if (here?.FirstOrDefault(r => r.Id == c.Id) is ResolvedCoupler resolved)
+                {
+                    // the coefficient is fixed hardware; g follows the elements' matrix elements at this point
+                    string at = resolved.ConvertedAt is { } point ? $"(g converted at the {point.PointName} point)" : "";
+                    rows.Add(new FieldRow("coefficient", FieldUnits.Display(resolved.CoefficientGHz, UnitKind.Frequency), null, "", Note: at, ShortNote: ""));
+                    rows.Add(new FieldRow("g here", FieldUnits.Display(resolved.GHereGHz, UnitKind.Frequency), null, "", Note: "(at the point computed)", ShortNote: ""));
+                }
                 return rows;
             }
             case BoardNodeKind.Bias:

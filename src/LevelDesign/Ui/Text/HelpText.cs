@@ -20,7 +20,7 @@ public static class HelpText
         lines.Add(new TextLine(""));
         lines.Add(new TextLine("Marks", Heading: true));
         lines.AddRange(Indented("● unsaved changes   ⚠ file changed on disk   ⟳ computing", width));
-        lines.AddRange(Indented(StatesTableText.Legend, width));
+        lines.AddRange(Indented(StatesTableText.Legend(Core.Analysis.Conventions.DefaultPurityThreshold) + " (the file's [device] purity_threshold)", width));
         lines.AddRange(Indented("× crossing on the spectrum   ┊ bias cursor   … text cut to fit (Enter on a row, or a wider terminal, shows it whole)", width));
         lines.Add(new TextLine(""));
         lines.Add(new TextLine("Press L for the limits of the model and the conventions used.", Heading: true));

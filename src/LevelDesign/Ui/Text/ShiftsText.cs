@@ -10,32 +10,33 @@ public static class ShiftsText
 {
     /// <param name="width">Columns of the page: conventions wrap, and columns narrow to their contents.</param>
     public static IReadOnlyList<TextLine> Build(DerivedQuantities q, string where, IReadOnlyList<ConvergenceEntry>? convergence = null, Device? device = null,
-        string? convergenceProblem = null, int width = 100)
+        string? convergenceProblem = null, int width = 100, double purityThreshold = Conventions.DefaultPurityThreshold)
     {
         var lines = new List<TextLine>();
         lines.AddRange(Wrapped($"At {where}; all in MHz", width, heading: true));
+        lines.AddRange(Wrapped(string.Create(CultureInfo.InvariantCulture, $"! = read from a state below purity {purityThreshold:0.##} (hybridized labels)"), width));
 
         lines.Add(new TextLine(""));
         lines.Add(new TextLine("2χ  qubit ↓ × resonator →", Heading: true));
         lines.AddRange(Wrapped(Conventions.DispersiveShift, width));
         lines.AddRange(Matrix(q.DispersiveShifts.Select(p => p.First).Distinct().ToList(),
-            q.DispersiveShifts.Select(p => p.Second).Distinct().ToList(), q.DispersiveShifts, symmetric: false));
+            q.DispersiveShifts.Select(p => p.Second).Distinct().ToList(), q.DispersiveShifts, symmetric: false, purityThreshold));
 
         lines.Add(new TextLine(""));
         lines.Add(new TextLine("ZZ  ζ/h", Heading: true));
         lines.AddRange(Wrapped(Conventions.ZZ, width));
         var qubits = q.ZZ.SelectMany(p => new[] { p.First, p.Second }).Distinct().ToList();
-        lines.AddRange(Matrix(qubits, qubits, q.ZZ, symmetric: true));
+        lines.AddRange(Matrix(qubits, qubits, q.ZZ, symmetric: true, purityThreshold));
 
         lines.Add(new TextLine(""));
-        lines.AddRange(Transitions(q, width));
+        lines.AddRange(Transitions(q, width, purityThreshold));
         if (q.Purcell.Count > 0)
         {
             lines.Add(new TextLine(""));
             lines.Add(new TextLine("Purcell", Heading: true));
             lines.AddRange(Wrapped(Conventions.Purcell, width));
             foreach (var p in q.Purcell)
-                lines.AddRange(Wrapped($"  {p.Qubit} via {p.Resonator}: γ = {Numbers.MHz(p.RateGHz, 6)} MHz", width));
+                lines.AddRange(Wrapped($"  {p.Qubit} via {p.Resonator}: γ = {Numbers.MHz(p.RateGHz, 6)} MHz{(p.Purity < purityThreshold ? " !" : "")}", width));
         }
         if (convergence is not null && device is not null) lines.AddRange(Convergence(convergence, device, width));
         if (convergenceProblem is not null)
@@ -51,14 +52,17 @@ public static class ShiftsText
         TextFit.WrapLines(text, width, indent: "  ").Select(l => new TextLine(l, Warning: warning, Heading: heading));
 
     /// <summary>Dressed f01 (GHz), α and Lamb shift (MHz) per element; the element column is as wide as the longest id.</summary>
-    private static IEnumerable<TextLine> Transitions(DerivedQuantities q, int width)
+    private static IEnumerable<TextLine> Transitions(DerivedQuantities q, int width, double purityThreshold)
     {
         int idWidth = Math.Max(7, q.Transitions.Select(t => t.ElementId.Length).DefaultIfEmpty(0).Max());
         yield return new TextLine("Transitions (dressed)", Heading: true);
         foreach (var line in Wrapped(Conventions.Transitions, width)) yield return line;
         yield return new TextLine($"  {"element".PadRight(idWidth)} {"f01 GHz",11} {"α MHz",10} {"Lamb MHz",11}", Heading: true);
         foreach (var t in q.Transitions)
-            yield return new TextLine($"  {t.ElementId.PadRight(idWidth)} {Numbers.GHz(t.DressedF01),11} {Numbers.MHz(t.Anharmonicity, 2),10} {Numbers.MHz(t.LambShift, 3),11}");
+        {
+            bool low = Math.Min(t.F01Purity, t.F12Purity) < purityThreshold;
+            yield return new TextLine($"  {t.ElementId.PadRight(idWidth)} {Numbers.GHz(t.DressedF01),11} {Numbers.MHz(t.Anharmonicity, 2),10} {Numbers.MHz(t.LambShift, 3),11}{(low ? " !" : "")}", Warning: low);
+        }
     }
 
     /// <summary>Each key value's change when every cutoff is raised, in kHz; the other flagged values on one line.</summary>
@@ -81,7 +85,8 @@ public static class ShiftsText
     /// A matrix of values in MHz; columns are as wide as their widest entry (at most 12), so three or four
     /// fit a narrow page. Ids longer than the row-name column are cut with "…".
     /// </summary>
-    private static IEnumerable<TextLine> Matrix(IReadOnlyList<string> rows, IReadOnlyList<string> columns, IReadOnlyList<PairValue> values, bool symmetric)
+    private static IEnumerable<TextLine> Matrix(IReadOnlyList<string> rows, IReadOnlyList<string> columns, IReadOnlyList<PairValue> values, bool symmetric,
+        double purityThreshold)
     {
         if (rows.Count == 0 || columns.Count == 0)
         {
@@ -92,7 +97,7 @@ public static class ShiftsText
         {
             if (symmetric && r == c) return "·";
             var v = values.FirstOrDefault(p => (p.First == r && p.Second == c) || (symmetric && p.First == c && p.Second == r));
-            return v is null ? "" : Numbers.MHz(v.Value, 4);
+            return v is null ? "" : Numbers.MHz(v.Value, 4) + (v.Purity < purityThreshold ? "!" : "");
         }
         int cellWidth = Math.Min(12, 2 + Math.Max(columns.Max(c => Cut(c).Length), rows.SelectMany(r => columns.Select(c => Cell(r, c).Length)).Max()));
         yield return new TextLine("  " + new string(' ', 8) + string.Concat(columns.Select(c => Cut(c).PadLeft(cellWidth))));

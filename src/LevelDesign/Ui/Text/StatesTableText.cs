@@ -10,26 +10,27 @@ namespace LevelDesign.Ui.Text;
 /// </summary>
 public static class StatesTableText
 {
-    public const double LowPurity = 0.9;
-    public const string Legend = "! purity < 0.90   ? label ambiguous";
+    public static string Legend(double threshold) => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"! purity < {threshold:0.00##}   ? label ambiguous");
 
     /// <summary>Components shown at most, and the smallest weight shown.</summary>
     private const int MaxComponents = 3;
     private const double MinWeight = 0.005;
 
     /// <param name="width">Columns of the page; notes wrap and components are left out rather than cut.</param>
-    public static IReadOnlyList<TextLine> Build(DressedSpectrum spectrum, string where, int width = 100)
+    public static IReadOnlyList<TextLine> Build(DressedSpectrum spectrum, string where, int width = 100,
+        double purityThreshold = Conventions.DefaultPurityThreshold)
     {
+        string legend = Legend(purityThreshold);
         var lines = new List<TextLine>();
         lines.AddRange(TextFit.Wrap($"At {where}", width).Select(l => new TextLine(l, Heading: true)));
         const string Unit = "f = E/h above the dressed ground, GHz";
-        string notes = $"{Unit}; {Legend}".Length <= width ? $"{Unit}; {Legend}" : $"{Unit}\n{Legend}";
+        string notes = $"{Unit}; {legend}".Length <= width ? $"{Unit}; {legend}" : $"{Unit}\n{legend}";
         lines.AddRange(TextFit.WrapLines(notes, width, indent: "  ").Select(l => new TextLine(l)));
         lines.Add(new TextLine($"  {"#",2} {"label",-10} {"f (GHz)",8} {"purity",6}  {(width >= 47 ? "top components" : "components")}", Heading: true));
         for (int k = 0; k < spectrum.Count; k++)
         {
             var label = spectrum.Labels[k];
-            bool low = label.Purity < LowPurity;
+            bool low = label.Purity < purityThreshold;
             string mark = (low ? "!" : " ") + (label.Ambiguous ? "?" : " ");
             string row = $"{mark}{k,2} {TextFit.Cut(LabelNames.OfDressed(spectrum, k), 10),-10} {Numbers.GHz(spectrum.Energies[k]),8} {label.Purity,6:0.000}";
             var components = label.Components.Where(c => c.Weight >= MinWeight).Take(MaxComponents).ToList();

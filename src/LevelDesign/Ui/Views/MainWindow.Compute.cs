@@ -45,6 +45,8 @@ public sealed partial class MainWindow
         _snapshot = snapshot;
         _eigenPath = eigen;
         _computing = !final;
+        ShowFields();   // the coupler form shows g at the point just computed
+        if (final && snapshot.Warnings.Count > 0) Say("⚠ " + string.Join("; ", snapshot.Warnings), warning: true);
         RefreshPage();
         UpdateStatus();
     }
@@ -274,11 +276,12 @@ public sealed partial class MainWindow
         switch (page)
         {
             case Page.States:
-                _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")] : StatesTableText.Build(shown.Spectrum, Where(), width));
+                _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")] : StatesTableText.Build(shown.Spectrum, Where(), width, _session.Document?.PurityThreshold ?? Core.Analysis.Conventions.DefaultPurityThreshold));
                 break;
             case Page.Shifts:
                 _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")]
-                    : ShiftsText.Build(shown.Quantities, Where(), _snapshot?.Convergence, _snapshot?.Spectrum.Device, _snapshot?.ConvergenceProblem, width));
+                    : ShiftsText.Build(shown.Quantities, Where(), _snapshot?.Convergence, _snapshot?.Spectrum.Device, _snapshot?.ConvergenceProblem, width,
+                        _session.Document?.PurityThreshold ?? Core.Analysis.Conventions.DefaultPurityThreshold));
                 break;
             case Page.Help:
                 _page.SetLines(_showLimits ? HelpText.Limits(width) : HelpText.Keys(width));

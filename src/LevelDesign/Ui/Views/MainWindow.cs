@@ -371,7 +371,7 @@ public sealed partial class MainWindow : Window
         var document = _session.Document;
         if (document is null || _board.SelectedIndex >= _nodes.Count) { _form.SetLines([]); return; }
         var node = _nodes[_board.SelectedIndex];
-        _fields = BoardOutline.Fields(document, node);
+        _fields = BoardOutline.Fields(document, node, _snapshot?.Spectrum.Couplers);
         _formFrame.Title = node.Kind switch
         {
             BoardNodeKind.Element => $"Parameters: {node.Id}",

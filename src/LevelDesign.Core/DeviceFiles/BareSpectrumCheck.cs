@@ -1,0 +1,34 @@
+using LevelDesign.Core.DeviceFiles.Source;
+using LevelDesign.Core.Elements;
+using LevelDesign.Core.Model;
+
+namespace LevelDesign.Core.DeviceFiles;
+
+/// <summary>
+/// Diagonalises every element at the reference point while reading, so that what only the bare spectra can tell (a
+/// basis that does not converge, levels a solver cannot give) is reported at the element's own table with line and
+/// column instead of failing later without a location.
+/// </summary>
+internal static class BareSpectrumCheck
+{
+    public static void Run(Device device, IReadOnlyList<(string Id, SourceTable Table)> elementTables, ErrorList errors)
+    {
+        var tables = elementTables.ToDictionary(t => t.Id, t => t.Table);
+        foreach (var element in device.Elements)
+        {
+            try
+            {
+                element.Diagonalise(device.Truncation.LevelsOf(element.Id), device.Truncation.BasisSizeOf(element.Id));
+            }
+            catch (Exception e) when (e is ArgumentException or InvalidOperationException or ArithmeticException or IndexOutOfRangeException)
+            {
+                if (!tables.TryGetValue(element.Id, out var table)) continue;
+                var at = table.Find("levels") ?? table.Find("basis_size");
+                string field = $"elements.{element.Id}" + (at is null ? "" : "." + at.Key);
+                string message = e.Message.StartsWith("element '") ? e.Message : $"element '{element.Id}': {e.Message}";
+                if (at is not null) errors.At(at, field, message);
+                else errors.At(table, field, message);
+            }
+        }
+    }
+}
