@@ -31,6 +31,7 @@ public static class ParameterFit
         int np = parameters.Count, nt = targets.Count;
         double[] ToValues(double[] u) => parameters.Select((p, i) => p.Lower + Math.Clamp(u[i], 0, 1) * (p.Upper - p.Lower)).ToArray();
 
+        var purities = new double[nt];   // of the last evaluation, read at the end for the fitted point
         double[] Achieved(double[] u)
         {
             var values = ToValues(u);
@@ -43,8 +44,14 @@ public static class ParameterFit
                 var at = fitted;
                 foreach (var (path, value) in targets[group.First()].Settings ?? new Dictionary<string, double>()) at = at.WithParameter(path, value);
                 var spectrum = solver.Solve(at, levels);
-                var quantities = Analysis.DerivedQuantities.From(spectrum).Named();
-                foreach (int j in group) achieved[j] = QuantityLookup.Value(quantities, targets[j].Quantity);
+                var derived = Analysis.DerivedQuantities.From(spectrum);
+                var quantities = derived.Named();
+                var quantityPurities = derived.NamedPurities();
+                foreach (int j in group)
+                {
+                    achieved[j] = QuantityLookup.Value(quantities, targets[j].Quantity);
+                    purities[j] = quantityPurities.GetValueOrDefault(targets[j].Quantity, double.NaN);
+                }
             }
             return achieved;
         }
@@ -109,7 +116,7 @@ public static class ParameterFit
 
         var final = ToValues(u);
         var achievedFinal = Achieved(u);
-        var residuals = targets.Select((t, j) => new FitResidual(t, achievedFinal[j], achievedFinal[j] - t.Value)).ToArray();
+        var residuals = targets.Select((t, j) => new FitResidual(t, achievedFinal[j], achievedFinal[j] - t.Value, purities[j])).ToArray();
         var atBounds = parameters.Where((p, i) => u[i] <= 1e-9 || u[i] >= 1 - 1e-9).Select(p => p.Path).ToArray();
         var values = parameters.Select((p, i) => (p.Path, final[i])).ToDictionary(x => x.Path, x => x.Item2);
         return new FitResult(values, residuals, iteration, converged, message) { AtBounds = atBounds };

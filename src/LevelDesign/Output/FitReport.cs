@@ -25,9 +25,11 @@ public static class FitReport
             b.AppendLine($"{p.Path,-16} {f.Display(p.Initial),-18} {f.Display(result.Values[p.Path]),-20} {f.Display(p.Lower) + " … " + f.Display(p.Upper),-30} {note}");
         }
         b.AppendLine();
-        b.AppendLine($"{"target",-20} {"wanted",-16} {"achieved",-22} residual");
+        b.AppendLine($"{"target",-20} {"wanted",-16} {"achieved",-22} {"residual",-16} purity");
         foreach (var r in result.Residuals)
-            b.AppendLine($"{Name(r.Target),-20} {Freq(r.Target.Value),-16} {Freq(r.Achieved),-22} {Freq(r.Residual)}");
+            b.AppendLine($"{Name(r.Target),-20} {Freq(r.Target.Value),-16} {Freq(r.Achieved),-22} {Freq(r.Residual),-16} " +
+                         (double.IsFinite(r.Purity) ? r.Purity.ToString("0.0000", System.Globalization.CultureInfo.InvariantCulture) : "—") +
+                         (r.Purity < document.PurityThreshold ? " ! hybridized: the label of a state it is read from cannot be trusted" : ""));
         return b.ToString();
     }
 
@@ -61,6 +63,8 @@ public static class FitReport
                 ["target_ghz"] = JsonValues.Number(r.Target.Value),
                 ["achieved_ghz"] = JsonValues.Number(r.Achieved),
                 ["residual_ghz"] = JsonValues.Number(r.Residual),
+                ["purity"] = JsonValues.Number(r.Purity),
+                ["hybridized"] = r.Purity < document.PurityThreshold,
             });
         return JsonValues.Write(new JsonObject
         {
