@@ -48,7 +48,8 @@ public static class SpectrumPlot
                 if (a < 0 || b < 0) continue;
                 double mid = 0.5 * (table.Rows[nearest].Energies[a] + table.Rows[nearest].Energies[b]) + ground[nearest];
                 var marker = plot.Add.Marker(c.Bias, mid, MarkerShape.OpenCircle, 9, Colors.Black);
-                var text = plot.Add.Text($"{c.LabelA}↔{c.LabelB} gap {c.GapGHz * 1e3:F2} MHz", c.Bias, mid);
+                var text = plot.Add.Text(string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                    $"{c.LabelA}↔{c.LabelB} gap {c.GapGHz * 1e3:F2} MHz, purity {c.Purity:F2}"), c.Bias, mid);
                 text.LabelFontSize = 10;
                 text.LabelAlignment = Alignment.LowerLeft;
             }

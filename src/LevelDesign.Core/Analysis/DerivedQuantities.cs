@@ -92,36 +92,22 @@ public sealed class DerivedQuantities
     }
 
     /// <summary>Flat named values ("qa.f01", "qa.anharmonicity", "chi2:qa:ra", "zz:qa:qb", ...) for tables, sweeps and targets.</summary>
-    public IReadOnlyDictionary<string, double> Named()
-    {
-        var d = new Dictionary<string, double>();
-        foreach (var t in Transitions)
-        {
-            d[$"{t.ElementId}.f01"] = t.DressedF01;
-            d[$"{t.ElementId}.f12"] = t.DressedF12;
-            d[$"{t.ElementId}.anharmonicity"] = t.Anharmonicity;
-            d[$"{t.ElementId}.lamb_shift"] = t.LambShift;
-        }
-        foreach (var c in DispersiveShifts) d[$"chi2:{c.First}:{c.Second}"] = c.Value;
-        foreach (var z in ZZ) d[$"zz:{z.First}:{z.Second}"] = z.Value;
-        foreach (var p in Purcell) d[$"purcell:{p.Qubit}:{p.Resonator}"] = p.RateGHz;
-        return d;
-    }
+    public IReadOnlyDictionary<string, double> Named() => Entries().ToDictionary(e => e.Name, e => e.Value);
 
     /// <summary>For each name of <see cref="Named"/>, the lowest purity of the labelled states its value is read from.</summary>
-    public IReadOnlyDictionary<string, double> NamedPurities()
+    public IReadOnlyDictionary<string, double> NamedPurities() => Entries().ToDictionary(e => e.Name, e => e.Purity);
+
+    private IEnumerable<(string Name, double Value, double Purity)> Entries()
     {
-        var d = new Dictionary<string, double>();
         foreach (var t in Transitions)
         {
-            d[$"{t.ElementId}.f01"] = t.F01Purity;
-            d[$"{t.ElementId}.f12"] = t.F12Purity;
-            d[$"{t.ElementId}.anharmonicity"] = t.F12Purity;
-            d[$"{t.ElementId}.lamb_shift"] = t.F01Purity;
+            yield return ($"{t.ElementId}.f01", t.DressedF01, t.F01Purity);
+            yield return ($"{t.ElementId}.f12", t.DressedF12, t.F12Purity);
+            yield return ($"{t.ElementId}.anharmonicity", t.Anharmonicity, t.F12Purity);
+            yield return ($"{t.ElementId}.lamb_shift", t.LambShift, t.F01Purity);
         }
-        foreach (var c in DispersiveShifts) d[$"chi2:{c.First}:{c.Second}"] = c.Purity;
-        foreach (var z in ZZ) d[$"zz:{z.First}:{z.Second}"] = z.Purity;
-        foreach (var p in Purcell) d[$"purcell:{p.Qubit}:{p.Resonator}"] = p.Purity;
-        return d;
+        foreach (var c in DispersiveShifts) yield return ($"chi2:{c.First}:{c.Second}", c.Value, c.Purity);
+        foreach (var z in ZZ) yield return ($"zz:{z.First}:{z.Second}", z.Value, z.Purity);
+        foreach (var p in Purcell) yield return ($"purcell:{p.Qubit}:{p.Resonator}", p.RateGHz, p.Purity);
     }
 }

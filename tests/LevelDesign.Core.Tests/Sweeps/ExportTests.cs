@@ -22,7 +22,7 @@ public class ExportTests
     public async Task Hybridization_flags_follow_the_two_level_mixing_angle()
     {
         var sweep = await KerrSweep();
-        var map = HybridizationMap.From(sweep, [[1, 0]]);
+        var map = HybridizationMap.From(sweep, [[1, 0]], threshold: 0.99);
         foreach (var point in sweep.Points)
         {
             double delta = 5.0 - point.AxisValues[0], j = 0.005;
@@ -42,7 +42,7 @@ public class ExportTests
         Assert.Equal(1 + 1 + 21, csv.Length);   // comment, header, rows
         int columns = CsvFields(csv[1]);
         Assert.All(csv.Skip(2), line => Assert.Equal(columns, CsvFields(line)));
-        Assert.Equal(1 + 1 + 3 + 3 + table.QuantityNames.Count + 2, columns);
+        Assert.Equal(1 + 1 + 3 + 3 + 2 * table.QuantityNames.Count + 2, columns);   // each quantity and its purity
         using var json = JsonDocument.Parse(JsonText.Sweep(table));
         Assert.Equal(21, json.RootElement.GetProperty("points").GetArrayLength());
         Assert.Contains("zz:a:b", json.RootElement.GetProperty("quantities").EnumerateArray().Select(e => e.GetString()));
