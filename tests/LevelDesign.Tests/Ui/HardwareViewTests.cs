@@ -1,0 +1,44 @@
+using LevelDesign.Tests.Support;
+using LevelDesign.Ui.Views;
+using Terminal.Gui.Input;
+
+namespace LevelDesign.Tests.Ui;
+
+/// <summary>The terminal UI shows couplings as hardware (fixed coefficient, g here) and flags hybridized quantities.</summary>
+[Collection("terminal ui")]
+public class HardwareViewTests
+{
+    [Fact]
+    public void Coupler_form_shows_the_fixed_coefficient_and_g_here()
+    {
+        using var ui = new UiHarness(100, 30, device: "pair.toml");
+        ui.WaitIdle();
+        ui.Press(Key.Home);
+        for (int i = 0; i < 30 && !ui.Screen.Contains("Coupler: qa_qc"); i++) ui.Press(Key.CursorDown);
+        string screen = ui.Screen;
+        Assert.True(screen.Contains("coefficient") && screen.Contains("42.6092 MHz"), screen);
+        Assert.True(screen.Contains("g here") && screen.Contains("100 MHz"), screen);
+    }
+
+    /// <summary>At the file's biases ZZ qa–qc is read from states of purity 0.937: flagged at a threshold of 0.95 set in the file.</summary>
+    [Fact]
+    public void Shifts_page_flags_quantities_below_the_file_threshold()
+    {
+        string folder = Directory.CreateTempSubdirectory("ld-ui-threshold").FullName;
+        try
+        {
+            string path = Path.Combine(folder, "pair.toml");
+            File.WriteAllText(path, File.ReadAllText(Path.Combine(RepositoryPaths.Devices, "pair.toml"))
+                .Replace("name = \"pair\"", "name = \"pair\"\npurity_threshold = 0.95"));
+            using var ui = new UiHarness(100, 40, open: s => s.OpenFile(path));
+            ui.WaitIdle();
+            ui.Window.ShowPage(Page.Shifts);
+            ui.Draw();
+            string screen = ui.Screen;
+            Assert.True(screen.Contains("! = read from a state below purity 0.95"), screen);
+            Assert.True(screen.Contains("-9.3358!"), screen);
+            Assert.False(screen.Contains("-2.0114!"), screen);   // 2χ qa–ra: purity 0.972
+        }
+        finally { Directory.Delete(folder, true); }
+    }
+}
