@@ -115,4 +115,22 @@ public sealed class HardwareSemanticsTests
         }
         finally { Directory.Delete(dir, true); }
     }
+
+    /// <summary>A relative target: qb tuned 700 MHz below qa; the root's own spectrum must show that difference.</summary>
+    [Fact]
+    public void Solve_takes_a_difference_of_quantities()
+    {
+        var run = Executable.Run(["solve", Pair, "--vary", "qb_flux=0:0.3:21", "--target", "qa.f01 - qb.f01=700MHz", "--json"], TimeSpan.FromMinutes(5));
+        Assert.True(run.ExitCode == 0, run.ToString());
+        var o = JsonNode.Parse(run.Stdout)!;
+        Assert.Equal("qa.f01 - qb.f01", (string)o["quantity"]!);
+        var root = o["roots"]!.AsArray().Single(r => (bool)r!["root"]!)!;
+        double flux = (double)root["parameter"]!["qb.flux"]!;
+        var spectrum = JsonNode.Parse(Executable.Run("spectrum", Pair, "--at", $"qb.flux={flux.ToString("R", System.Globalization.CultureInfo.InvariantCulture)}", "--json").Stdout)!;
+        double F01(string id) => (double)spectrum["derived"]!["transitions"]!.AsArray().Single(t => (string)t!["element"]! == id)!["f01_ghz"]!;
+        Assert.Equal(0.7, F01("qa") - F01("qb"), 1e-9);
+        var bad = Executable.Run("solve", Pair, "--vary", "qb_flux=0:0.3:5", "--target", "qa.f01 - qz.f01=700MHz");
+        Assert.Equal(2, bad.ExitCode);
+        Assert.Contains("no quantity 'qz.f01'", bad.Stderr);
+    }
 }

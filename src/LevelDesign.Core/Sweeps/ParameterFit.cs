@@ -50,7 +50,7 @@ public static class ParameterFit
                 foreach (int j in group)
                 {
                     achieved[j] = QuantityLookup.Value(quantities, targets[j].Quantity);
-                    purities[j] = quantityPurities.GetValueOrDefault(targets[j].Quantity, double.NaN);
+                    purities[j] = QuantityLookup.Purity(quantityPurities, targets[j].Quantity);
                 }
             }
             return achieved;

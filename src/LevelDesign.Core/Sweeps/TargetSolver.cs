@@ -50,7 +50,7 @@ public static class TargetSolver
             var (spectrum, _) = new LabelTracker(labels, options, point.Count)
                 .Next(point, LabelTracker.Inputs(labels, point, reference), reference, scan.Points[nearer].Spectrum);
             var derived = DerivedQuantities.From(spectrum);
-            return (QuantityLookup.Value(derived.Named(), quantity) - target, derived.NamedPurities().GetValueOrDefault(quantity, double.NaN));
+            return (QuantityLookup.Value(derived.Named(), quantity) - target, QuantityLookup.Purity(derived.NamedPurities(), quantity));
         }
         double Residual(double bias, int i) => Evaluate(bias, i).Residual;
 
@@ -60,7 +60,7 @@ public static class TargetSolver
             cancellation.ThrowIfCancellationRequested();
             if (f[i] == 0)
             {
-                roots.Add(new TargetRoot(quantity, target, x[i], target, 0, true) { Purity = scan.Points[i].QuantityPurities.GetValueOrDefault(quantity, double.NaN) });
+                roots.Add(new TargetRoot(quantity, target, x[i], target, 0, true) { Purity = QuantityLookup.Purity(scan.Points[i].QuantityPurities, quantity) });
                 continue;
             }
             if (i + 1 >= f.Length || !double.IsFinite(f[i]) || !double.IsFinite(f[i + 1]) || f[i + 1] == 0 || Math.Sign(f[i]) == Math.Sign(f[i + 1]))

@@ -1,11 +1,11 @@
-using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Sweeps;
 using LevelDesign.Core.Units;
 
 namespace LevelDesign.Commands;
 
 /// <summary>
 /// Reads --target QUANTITY=VALUE: QUANTITY is a derived quantity name ("qa.f01", "qa.anharmonicity",
-/// "chi2:qa:ra", "zz:qa:qb", "purcell:qa:ra"; every one is a frequency), VALUE a frequency in the file's unit
+/// "chi2:qa:ra", "zz:qa:qb", "purcell:qa:ra"; every one is a frequency) or a sum of them ("qa.f01 - qb.f01"), VALUE a frequency in the file's unit
 /// syntax ("5.25 GHz", "5250MHz", "-120kHz"; a bare number is GHz).
 /// </summary>
 public static class TargetArguments
@@ -14,9 +14,9 @@ public static class TargetArguments
     {
         int eq = text.IndexOf('=');
         if (eq <= 0) throw new UsageException($"{option} {text}: write QUANTITY=VALUE, e.g. qa.f01=5.25GHz or zz:qa:qb=0");
-        string quantity = text[..eq].Trim();
-        if (!available.Contains(quantity))
-            throw new UsageException($"{option} {text}: no quantity '{quantity}'{EditDistance.Suggestion(quantity, available)} (quantities of this device: {string.Join(", ", available.OrderBy(x => x, StringComparer.Ordinal))})");
+        var expression = QuantityExpression.Parse(text[..eq], available, out string? problem)
+            ?? throw new UsageException($"{option} {text}: {problem} (quantities of this device: {string.Join(", ", available.OrderBy(x => x, StringComparer.Ordinal))}; a difference or sum such as qa.f01 - qb.f01 works too)");
+        string quantity = expression.ToString();
         if (!QuantityParser.TryParse(text[(eq + 1)..], UnitKind.Frequency, out double value, out string error))
             throw new UsageException($"{option} {text}: {error}");
         return (quantity, value);

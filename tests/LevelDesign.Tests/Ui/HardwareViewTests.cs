@@ -41,4 +41,16 @@ public class HardwareViewTests
         }
         finally { Directory.Delete(folder, true); }
     }
+
+    [Fact]
+    public void F9_takes_a_relative_target()
+    {
+        using var ui = new UiHarness(100, 30, device: "pair.toml");
+        ui.WaitIdle();
+        ui.Press(Key.F9);
+        ui.Replace("qa.f01 - qb.f01 = 700 MHz by qb_flux 0 to 0.3");
+        ui.Press(Key.Enter);
+        ui.WaitForScreen("digit applies", 120000);
+        Assert.Contains("qa.f01 - qb.f01", ui.Screen);
+    }
 }

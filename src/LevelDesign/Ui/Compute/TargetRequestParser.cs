@@ -19,13 +19,14 @@ public static class TargetRequestParser
         error = "write " + Syntax;
         int equals = text.IndexOf('='), by = text.IndexOf(" by ", StringComparison.Ordinal);
         if (equals < 0 || by < equals) return null;
-        string quantity = text[..equals].Trim();
         var known = knownQuantities?.ToList();
-        if (known is { Count: > 0 } && !known.Contains(quantity))
+        var expression = Core.Sweeps.QuantityExpression.Parse(text[..equals], known is { Count: > 0 } ? known : null, out string? problem);
+        if (expression is null)
         {
-            error = $"no quantity '{quantity}'{EditDistance.Suggestion(quantity, known)}; names look like {string.Join(", ", known.Take(4))}";
+            error = known is { Count: > 0 } ? $"{problem}; names look like {string.Join(", ", known.Take(4))} (or a difference: qa.f01 - qb.f01)" : problem;
             return null;
         }
+        string quantity = expression.ToString();
         if (!QuantityParser.TryParse(text[(equals + 1)..by].Trim(), UnitKind.Frequency, out double goal, out string unitError)) { error = unitError; return null; }
         string rest = text[(by + 4)..].Trim();
         int space = rest.IndexOf(' ');
