@@ -53,4 +53,22 @@ public class HardwareViewTests
         ui.WaitForScreen("digit applies", 120000);
         Assert.Contains("qa.f01 - qb.f01", ui.Screen);
     }
+
+    [Fact]
+    public void Tab_and_shift_tab_cycle_board_form_and_page()
+    {
+        using var ui = new UiHarness(80, 24);
+        ui.WaitIdle();
+        Assert.Equal("board", ui.Window.FocusedPanel);
+        ui.Press(Key.Tab);
+        Assert.Equal("form", ui.Window.FocusedPanel);
+        ui.Press(Key.Tab);
+        Assert.Equal("page", ui.Window.FocusedPanel);
+        ui.Press(Key.Tab);
+        Assert.Equal("board", ui.Window.FocusedPanel);
+        ui.Press(Key.Tab.WithShift);
+        Assert.Equal("page", ui.Window.FocusedPanel);
+        ui.Press(Key.Tab.WithShift);
+        Assert.Equal("form", ui.Window.FocusedPanel);
+    }
 }

@@ -193,6 +193,11 @@ public sealed partial class MainWindow : Window
         KeyBindings.ReplaceCommands(Key.L.WithCtrl, Command.Refresh);
         KeyBindings.ReplaceCommands(Key.Q.WithCtrl, Command.Quit);
         KeyBindings.ReplaceCommands(Key.Esc, Command.Cancel);
+        // Tab and Shift+Tab cycle board → form → page (the whole window, not Terminal.Gui's per-frame tab order)
+        AddCommand(Command.NextTabStop, () => { CycleFocus(+1); return true; });
+        AddCommand(Command.PreviousTabStop, () => { CycleFocus(-1); return true; });
+        KeyBindings.ReplaceCommands(Key.Tab, Command.NextTabStop);
+        KeyBindings.ReplaceCommands(Key.Tab.WithShift, Command.PreviousTabStop);
         _page.Bind(Key.L, Command.Context, () => { ToggleLimits(); return true; });
     }
 
@@ -262,6 +267,24 @@ public sealed partial class MainWindow : Window
         _wideOff = !_wideOff;
         if (_wideOff && (_board.HasFocus || _form.HasFocus)) FocusPage();
         ApplyLayout();
+    }
+
+    /// <summary>Which panel has the keyboard: "board", "form", "page" (spectrum, crossings or text page) or "" (a prompt).</summary>
+    public string FocusedPanel => _board.HasFocus ? "board" : _form.HasFocus ? "form"
+        : _spectrum.HasFocus || _crossingList.HasFocus || _page.HasFocus ? "page" : "";
+
+    /// <summary>Moves focus to the next (or previous) of board, form and page that is on screen.</summary>
+    private void CycleFocus(int direction)
+    {
+        if (_prompt.IsOpen) return;
+        var order = new List<View>();
+        if (_boardFrame.Visible) { order.Add(_board); order.Add(_form); }
+        View page = _plotFrame.Visible && _pageShown == Page.Spectrum ? _spectrum : _crossingList.Visible ? _crossingList : _page;
+        order.Add(page);
+        int current = order.FindIndex(v => v.HasFocus);
+        int next = current < 0 ? 0 : (current + direction + order.Count) % order.Count;
+        order[next].SetFocus();
+        UpdateKeyBar();
     }
 
     private void FocusPage()
