@@ -71,4 +71,25 @@ public class HardwareViewTests
         ui.Press(Key.Tab.WithShift);
         Assert.Equal("form", ui.Window.FocusedPanel);
     }
+
+    [Fact]
+    public void Capital_L_shows_the_limits_as_the_help_says()
+    {
+        using var ui = new UiHarness(120, 40);
+        ui.WaitIdle();
+        ui.Press(Key.F1);
+        Assert.DoesNotContain("Limits of the model", ui.Screen);
+        ui.Press(Key.L.WithShift);
+        Assert.Contains("Limits of the model", ui.Screen);
+    }
+
+    [Fact]
+    public void Shifts_page_gives_the_purcell_t1_limit()
+    {
+        using var ui = new UiHarness(100, 60, device: "pair.toml");
+        ui.WaitIdle();
+        ui.Window.ShowPage(Page.Shifts);
+        ui.Draw();
+        Assert.Contains("qa via ra: γ = 0.004015 MHz, T1 limit 39.6 µs", ui.Screen);
+    }
 }

@@ -199,6 +199,7 @@ public sealed partial class MainWindow : Window
         KeyBindings.ReplaceCommands(Key.Tab, Command.NextTabStop);
         KeyBindings.ReplaceCommands(Key.Tab.WithShift, Command.PreviousTabStop);
         _page.Bind(Key.L, Command.Context, () => { ToggleLimits(); return true; });
+        _page.Bind(Key.L.WithShift, Command.Context, () => { ToggleLimits(); return true; });   // the help writes "L"
     }
 
     private void BindBoardKeys()
