@@ -21,7 +21,9 @@ public static class CouplerReader
         ["custom"] = CouplerKind.Custom,
     };
 
-    public static Coupler? Read(string id, SourceTable table, ErrorList errors, IReadOnlyDictionary<string, Element> elements)
+    /// <param name="declared">Every element id of the file, also those whose table had errors (already reported).</param>
+    public static Coupler? Read(string id, SourceTable table, ErrorList errors, IReadOnlyDictionary<string, Element> elements,
+        IReadOnlySet<string>? declared = null)
     {
         string path = "couplers." + id;
         int before = errors.Count;
@@ -40,6 +42,8 @@ public static class CouplerReader
             var (name, value) = between[side];
             if (!elements.TryGetValue(name, out var element))
             {
+                // an element whose own table failed a check still exists for references: its error is already reported
+                if (declared?.Contains(name) == true) continue;
                 errors.At(value, path + ".between", $"no element '{name}'{EditDistance.Suggestion(name, elements.Keys)} (elements: {string.Join(", ", elements.Keys)})");
                 continue;
             }

@@ -132,7 +132,7 @@ public static partial class DeviceReader
         {
             if (elementIds.Contains(id))
                 errors.At(table, "couplers." + id, $"id '{id}' is already used by an element; ids must be unique");
-            if (CouplerReader.Read(id, table, errors, byId) is Coupler c) couplers.Add(c);
+            if (CouplerReader.Read(id, table, errors, byId, elementIds) is Coupler c) couplers.Add(c);
         }
         if (matrix is not null)
             couplers.AddRange(MatrixCouplers(matrix, byId, errors, matrixTable!));
