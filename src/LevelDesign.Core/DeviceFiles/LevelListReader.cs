@@ -11,6 +11,9 @@ namespace LevelDesign.Core.DeviceFiles;
 /// </summary>
 internal static class LevelListReader
 {
+    /// <summary>Most states of a level list: its Hamiltonian and operators are dense n×n (500: 2 MB each, a solve well under a second).</summary>
+    public const int MaxStates = 500;
+
     public static Element? Read(string id, TableReader r, SourceTable? operatorTable, int? levels)
     {
         double[,]? h;
@@ -24,11 +27,21 @@ internal static class LevelListReader
         {
             var e = r.QuantityArray("energies", UnitKind.Frequency, true);
             if (e is null) return null;
+            if (e.Length > MaxStates)
+            {
+                r.Error("energies", $"{e.Length:N0} energies; a level list holds at most {MaxStates} states (its matrices are dense)");
+                return null;
+            }
             h = new double[e.Length, e.Length];
             for (int i = 0; i < e.Length; i++) h[i, i] = e[i];
         }
         if (h is null) return null;
         int n = h.GetLength(0);
+        if (n > MaxStates)
+        {
+            r.Error("hamiltonian", $"a {n}×{n} hamiltonian; a level list holds at most {MaxStates} states (its matrices are dense)");
+            return null;
+        }
         if (n < 2)
         {
             r.Error(r.Has("energies") ? "energies" : "hamiltonian", "a level list needs at least 2 levels");

@@ -142,6 +142,12 @@ public sealed class TableReader
             _errors.At(entry.Value, Field(key), $"expected a text in quotes, found {entry.Value.Describe()}");
             return null;
         }
+        if (entry.Value.Text is string t && t.Any(TerminalText.Unsafe))
+        {
+            // they would reach terminals (names and kinds are printed) as escape sequences
+            _errors.At(entry.Value, Field(key), $"control characters are not allowed in a text value (found in \"{TerminalText.Clean(t)}\")");
+            return null;
+        }
         return entry.Value.Text;
     }
 

@@ -15,6 +15,12 @@ namespace LevelDesign.Core.Units;
 public static class QuantityParser
 {
     /// <summary>Parses <paramref name="text"/>; on failure returns false and a one-line message saying what was expected.</summary>
+    /// <summary>
+    /// Largest magnitude accepted in a base unit (GHz, F, H, A, Ω, Φ0): far beyond any circuit, small enough that
+    /// products in a Hamiltonian (E·n², E·cos, a sweep's stop − start) stay finite instead of turning into NaN.
+    /// </summary>
+    public const double MaxMagnitude = 1e15;
+
     public static bool TryParse(string? text, UnitKind expected, out double valueInBaseUnit, out string error)
     {
         bool ok = TryParseQuantity(text, expected, out var quantity, out error);
@@ -97,6 +103,11 @@ public static class QuantityParser
         if (!double.IsFinite(value))
         {
             error = $"\"{s}\" is out of range; {expectation}";
+            return false;
+        }
+        if (Math.Abs(value) > MaxMagnitude)
+        {
+            error = $"\"{s}\" is too large to compute with (magnitude above {MaxMagnitude:0e0} in base units: GHz, Φ0, F, H, A, Ω); {expectation}";
             return false;
         }
         if (value == 0 && !number.IsZero)

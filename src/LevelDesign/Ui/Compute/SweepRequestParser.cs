@@ -42,7 +42,9 @@ public static class SweepRequestParser
             { error = "a linked path is written: link PATH SCALE SHIFT"; return null; }
             links.Add(new LinkedPath(words[i + 1], scale, shift));
         }
-        return new SweepRequest(text.Trim(), [new SweepAxis(path, start, stop, count, links)]);
+        var axis = new SweepAxis(path, start, stop, count, links);
+        if (Core.Sweeps.SweepGrid.AxisProblems([axis]) is { Count: > 0 } problems) { error = string.Join("; ", problems); return null; }
+        return new SweepRequest(text.Trim(), [axis]);
     }
 
     /// <summary>A sensible first sweep: the first bias (or the first flux) over one period in 61 points.</summary>
