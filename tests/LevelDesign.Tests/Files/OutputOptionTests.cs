@@ -82,4 +82,17 @@ public sealed class OutputOptionTests : IDisposable
         Assert.Equal(UnixFileMode.UserRead | UnixFileMode.UserWrite, File.GetUnixFileMode(output));
         Assert.Empty(_dir.Temporaries());
     }
+
+    [Fact]
+    public void Fit_write_on_a_read_only_device_is_refused_before_fitting()
+    {
+        string device = Device();
+        string before = File.ReadAllText(device);
+        File.SetUnixFileMode(device, UnixFileMode.UserRead | UnixFileMode.GroupRead);
+        var run = Executable.Run(["fit", device, "--param", "r.frequency=6GHz:8GHz", "--target", "r.f01=7GHz", "--write"]);
+        Assert.True(run.ExitCode == 2, run.ToString());
+        Assert.Contains("read-only", run.Stderr);
+        Assert.Equal("", run.Stdout);   // no fit report: nothing was computed
+        Assert.Equal(before, File.ReadAllText(device));
+    }
 }
