@@ -27,8 +27,16 @@ public sealed class ErrorList(string file)
     public static IReadOnlyList<DeviceFileError> Capped(IReadOnlyList<DeviceFileError> errors) =>
         errors.Count <= MaxListed ? errors : [.. errors.Take(MaxListed), More(errors[0].File, errors.Count - MaxListed)];
 
+    /// <summary>"N problem(s)" for a summary line, counting those left out of a capped list.</summary>
+    public static string CountText(IReadOnlyList<DeviceFileError> errors) =>
+        errors.Count > 0 && errors[^1].Field == MoreField && errors[^1].Line == 0
+            ? $"more than {errors.Count - 1} problems"
+            : $"{errors.Count} problem(s)";
+
+    private const string MoreField = "file (list cut)";
+
     private static DeviceFileError More(string file, int more) =>
-        new(file, 0, 0, "file", $"and {more:N0} more problem(s) not listed; fix the first ones and check again");
+        new(file, 0, 0, MoreField, $"and {more:N0} more problem(s) not listed; fix the first ones and check again");
 
     public void At(SourceValue value, string field, string message) => Add(value.Line, value.Column, field, message);
 

@@ -75,7 +75,7 @@ public sealed class TableReader
             _errors.At(value, field, $"expected {kind.WithArticle()} such as {kind.ExampleText()}, found {value.Describe()}");
             return null;
         }
-        if (!QuantityParser.TryParse(text, kind, out double result, out string error))
+        if (!QuantityParser.TryParseModelValue(text, kind, out double result, out string error))
         {
             _errors.At(value, field, error);
             return null;

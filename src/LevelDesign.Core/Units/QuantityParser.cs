@@ -21,6 +21,15 @@ public static class QuantityParser
     /// </summary>
     public const double MaxMagnitude = 1e15;
 
+    /// <summary>As <see cref="TryParse"/>, and refuses magnitudes above <see cref="MaxMagnitude"/>: for values that reach a model.</summary>
+    public static bool TryParseModelValue(string? text, UnitKind expected, out double valueInBaseUnit, out string error)
+    {
+        if (!TryParse(text, expected, out valueInBaseUnit, out error)) return false;
+        if (Math.Abs(valueInBaseUnit) <= MaxMagnitude) return true;
+        error = $"\"{text!.Trim()}\" is too large to compute with (magnitude above {MaxMagnitude:0e0} in base units: GHz, Φ0, F, H, A, Ω)";
+        return false;
+    }
+
     public static bool TryParse(string? text, UnitKind expected, out double valueInBaseUnit, out string error)
     {
         bool ok = TryParseQuantity(text, expected, out var quantity, out error);
@@ -105,11 +114,7 @@ public static class QuantityParser
             error = $"\"{s}\" is out of range; {expectation}";
             return false;
         }
-        if (Math.Abs(value) > MaxMagnitude)
-        {
-            error = $"\"{s}\" is too large to compute with (magnitude above {MaxMagnitude:0e0} in base units: GHz, Φ0, F, H, A, Ω); {expectation}";
-            return false;
-        }
+
         if (value == 0 && !number.IsZero)
         {
             error = $"\"{s}\" is too small to represent; {expectation}";

@@ -96,8 +96,8 @@ public static class FitCommand
         {
             var parts = text[(eq + 1)..].Split(':');
             if (parts.Length != 2) throw new UsageException($"--param {text}: write PATH=LOW:HIGH, e.g. qa.ec=150MHz:300MHz");
-            if (!QuantityParser.TryParse(parts[0], kind, out lower, out string e1)) throw new UsageException($"--param {text}: LOW: {e1}");
-            if (!QuantityParser.TryParse(parts[1], kind, out upper, out string e2)) throw new UsageException($"--param {text}: HIGH: {e2}");
+            if (!QuantityParser.TryParseModelValue(parts[0], kind, out lower, out string e1)) throw new UsageException($"--param {text}: LOW: {e1}");
+            if (!QuantityParser.TryParseModelValue(parts[1], kind, out upper, out string e2)) throw new UsageException($"--param {text}: HIGH: {e2}");
             if (!(lower < upper)) throw new UsageException($"--param {text}: LOW must be below HIGH");
         }
         return new FitParameter(path, Math.Clamp(initial, lower, upper), lower, upper);

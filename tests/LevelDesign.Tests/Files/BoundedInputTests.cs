@@ -99,6 +99,8 @@ public sealed class BoundedInputTests : IDisposable
         Assert.True(run.ExitCode == 2, run.ToString());
         int lines = (run.Stdout + run.Stderr).Split('\n').Length;
         Assert.True(lines <= ErrorList.MaxListed + 5, $"{lines} lines of errors");
+        Assert.Contains("more problem(s) not listed", run.Stdout);
+        Assert.Contains($"more than {ErrorList.MaxListed} problems", run.Stderr);
         Assert.DoesNotContain("Unhandled", run.Stderr);
     }
 

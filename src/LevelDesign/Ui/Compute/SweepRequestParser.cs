@@ -80,7 +80,7 @@ public static class SweepRequestParser
         if (Number(text, out value)) { error = ""; return true; }
         bool ok = document.Bias(path) is { } bias
             ? bias.TryParseControl(text, out value, out error)
-            : QuantityParser.TryParse(text, ParameterKinds.Of(path[(path.LastIndexOf('.') + 1)..]), out value, out error);
+            : QuantityParser.TryParseModelValue(text, ParameterKinds.Of(path[(path.LastIndexOf('.') + 1)..]), out value, out error);
         return ok;
     }
 
