@@ -24,8 +24,11 @@ public sealed class ErrorList(string file)
     }
 
     /// <summary>The first <see cref="MaxListed"/> of a list made elsewhere (the TOML syntax errors), then the count of the rest.</summary>
-    public static IReadOnlyList<DeviceFileError> Capped(IReadOnlyList<DeviceFileError> errors) =>
-        errors.Count <= MaxListed ? errors : [.. errors.Take(MaxListed), More(errors[0].File, errors.Count - MaxListed)];
+    public static IReadOnlyList<DeviceFileError> Capped(IReadOnlyList<DeviceFileError> errors)
+    {
+        var listed = errors.Take(MaxListed).Select(e => e with { Message = TerminalText.Clean(e.Message) });
+        return errors.Count <= MaxListed ? [.. listed] : [.. listed, More(errors[0].File, errors.Count - MaxListed)];
+    }
 
     /// <summary>"N problem(s)" for a summary line, counting those left out of a capped list.</summary>
     public static string CountText(IReadOnlyList<DeviceFileError> errors) =>
