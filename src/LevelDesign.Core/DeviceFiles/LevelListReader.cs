@@ -22,16 +22,22 @@ internal static class LevelListReader
             r.Error("hamiltonian", "give either energies or hamiltonian, not both");
             return null;
         }
+        if (r.Entry("hamiltonian")?.Value is { Kind: SourceValueKind.Array } rows && rows.Items.Count > MaxStates)
+        {
+            r.Error("hamiltonian", $"a hamiltonian of {rows.Items.Count:N0} rows; a level list holds at most {MaxStates} states (its matrices are dense)");
+            return null;
+        }
         if (r.Has("hamiltonian")) h = r.Matrix("hamiltonian", UnitKind.Frequency);
         else
         {
-            var e = r.QuantityArray("energies", UnitKind.Frequency, true);
-            if (e is null) return null;
-            if (e.Length > MaxStates)
+            // counted before each value is parsed: a 4 MB file holds 400,000 numbers
+            if (r.Entry("energies")?.Value is { Kind: SourceValueKind.Array } list && list.Items.Count > MaxStates)
             {
-                r.Error("energies", $"{e.Length:N0} energies; a level list holds at most {MaxStates} states (its matrices are dense)");
+                r.Error("energies", $"{list.Items.Count:N0} energies; a level list holds at most {MaxStates} states (its matrices are dense)");
                 return null;
             }
+            var e = r.QuantityArray("energies", UnitKind.Frequency, true);
+            if (e is null) return null;
             h = new double[e.Length, e.Length];
             for (int i = 0; i < e.Length; i++) h[i, i] = e[i];
         }
