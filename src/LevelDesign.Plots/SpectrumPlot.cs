@@ -1,4 +1,5 @@
 using LevelDesign.Core.Analysis;
+using LevelDesign.Core.Files;
 using LevelDesign.Core.Sweeps;
 using ScottPlot;
 
@@ -63,9 +64,11 @@ public static class SpectrumPlot
         return plot;
     }
 
-    public static void SavePng(Plot plot, string path, int width = 1200, int height = 800) => plot.SavePng(path, width, height);
+    // rendered in memory and written by the one atomic writer (never through a planted link, previous file as .bak)
+    public static void SavePng(Plot plot, string path, int width = 1200, int height = 800) =>
+        AtomicFile.Write(path, plot.GetImageBytes(width, height, ImageFormat.Png));
 
-    public static void SaveSvg(Plot plot, string path, int width = 1200, int height = 800) => plot.SaveSvg(path, width, height);
+    public static void SaveSvg(Plot plot, string path, int width = 1200, int height = 800) => AtomicFile.Write(path, plot.GetSvgXml(width, height));
 
     private static int IndexOf(IReadOnlyList<string> labels, string label)
     {

@@ -27,6 +27,7 @@ public static class Program
         };
         root.SetAction(parse => OpenInteractive(parse.GetValue(file)));
         var parse = root.Parse(args);
+        if (parse.CommandResult.Command != root) Output.SafeConsole.Install();
         if (parse.Errors.Count > 0)
         {
             foreach (var e in parse.Errors) Console.Error.WriteLine(e.Message);

@@ -20,6 +20,6 @@ public sealed record BiasDefinition(string Name, string Target, double Value, do
     {
         var kind = ControlKind == UnitKind.Dimensionless ? UnitKind.Flux : ControlKind;
         // A dimensionless control accepts a plain number; flux parsing also allows "Φ0" for clarity.
-        return QuantityParser.TryParse(text, kind, out control, out error);
+        return QuantityParser.TryParseModelValue(text, kind, out control, out error);
     }
 }

@@ -1,6 +1,7 @@
 using System.Reflection;
 using System.Text;
 using LevelDesign.Core.DeviceFiles.Source;
+using LevelDesign.Core.Files;
 using LevelDesign.Core.Model;
 using Tomlyn.Parsing;
 
@@ -51,23 +52,8 @@ public sealed partial class DeviceDocument
 
     public static DeviceLoadResult Load(string path, DeviceLoadOptions options)
     {
-        string text;
-        try
-        {
-            text = File.ReadAllText(path, Encoding.UTF8);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
-        {
-            string why = e switch
-            {
-                FileNotFoundException => "no such file",
-                DirectoryNotFoundException => "no such directory",
-                UnauthorizedAccessException => "permission denied",
-                _ => e.Message,
-            };
-            return new DeviceLoadResult(null, [new DeviceFileError(path, 0, 0, "file", $"cannot read the device file: {why}")]);
-        }
-        return Parse(text, path, options);
+        string? text = DeviceFileText.Read(path, out var error);
+        return text is null ? new DeviceLoadResult(null, [error!]) : Parse(text, path, options);
     }
 
     /// <summary>The built-in demo device (text of devices/pair.toml embedded in the assembly).</summary>
@@ -196,7 +182,7 @@ public sealed partial class DeviceDocument
     /// <summary>The file text, with comments and layout of the original and only edited values changed.</summary>
     public string ToText() => Text;
 
-    /// <summary>Writes atomically (temporary file, flush, rename), keeping the previous file as PATH.bak.</summary>
+    /// <summary>Writes atomically (temporary file, flush, rename), keeping the previous file as PATH.bak (see <see cref="AtomicFile"/>).</summary>
     public void Save(string? path = null) => AtomicFile.Write(path ?? Path, Text);
 
     private (SourceTable Table, string Key)? Locate(string fieldPath)

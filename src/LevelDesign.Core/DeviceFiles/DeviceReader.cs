@@ -34,7 +34,7 @@ public static partial class DeviceReader
             errors.Add(1, 1, "syntax", "the file could not be read as TOML: " + e.Message);
             return (null, errors.Items);
         }
-        if (source.SyntaxErrors.Count > 0) return (null, source.SyntaxErrors);
+        if (source.SyntaxErrors.Count > 0) return (null, ErrorList.Capped(source.SyntaxErrors));
 
         foreach (var entry in source.Root.Entries)
             errors.At(entry, entry.Key, $"unknown top-level key '{entry.Key}'; values belong inside a table such as [device] or [elements.<id>]");

@@ -11,6 +11,9 @@ namespace LevelDesign.Core.DeviceFiles;
 /// </summary>
 internal static class LevelListReader
 {
+    /// <summary>Most states of a level list: its Hamiltonian and operators are dense n×n (500: 2 MB each, a solve well under a second).</summary>
+    public const int MaxStates = 500;
+
     public static Element? Read(string id, TableReader r, SourceTable? operatorTable, int? levels)
     {
         double[,]? h;
@@ -19,9 +22,20 @@ internal static class LevelListReader
             r.Error("hamiltonian", "give either energies or hamiltonian, not both");
             return null;
         }
+        if (r.Entry("hamiltonian")?.Value is { Kind: SourceValueKind.Array } rows && rows.Items.Count > MaxStates)
+        {
+            r.Error("hamiltonian", $"a hamiltonian of {rows.Items.Count:N0} rows; a level list holds at most {MaxStates} states (its matrices are dense)");
+            return null;
+        }
         if (r.Has("hamiltonian")) h = r.Matrix("hamiltonian", UnitKind.Frequency);
         else
         {
+            // counted before each value is parsed: a 4 MB file holds 400,000 numbers
+            if (r.Entry("energies")?.Value is { Kind: SourceValueKind.Array } list && list.Items.Count > MaxStates)
+            {
+                r.Error("energies", $"{list.Items.Count:N0} energies; a level list holds at most {MaxStates} states (its matrices are dense)");
+                return null;
+            }
             var e = r.QuantityArray("energies", UnitKind.Frequency, true);
             if (e is null) return null;
             h = new double[e.Length, e.Length];
@@ -29,6 +43,11 @@ internal static class LevelListReader
         }
         if (h is null) return null;
         int n = h.GetLength(0);
+        if (n > MaxStates)
+        {
+            r.Error("hamiltonian", $"a {n}×{n} hamiltonian; a level list holds at most {MaxStates} states (its matrices are dense)");
+            return null;
+        }
         if (n < 2)
         {
             r.Error(r.Has("energies") ? "energies" : "hamiltonian", "a level list needs at least 2 levels");

@@ -28,6 +28,8 @@ public static class SweepReader
             else if (Axis(new TableReader(second.Value.Table!, r.Field("second"), errors, AxisKeys.ToHashSet()), device, biases) is SweepAxis axis2)
                 axes.Add(axis2);
         }
+        if (errors.Count == before)
+            foreach (string problem in Sweeps.SweepGrid.AxisProblems(axes)) errors.At(table, path, problem);
         return errors.Count > before ? null : new SweepDefinition(name, axes);
     }
 

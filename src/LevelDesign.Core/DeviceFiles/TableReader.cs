@@ -75,7 +75,7 @@ public sealed class TableReader
             _errors.At(value, field, $"expected {kind.WithArticle()} such as {kind.ExampleText()}, found {value.Describe()}");
             return null;
         }
-        if (!QuantityParser.TryParse(text, kind, out double result, out string error))
+        if (!QuantityParser.TryParseModelValue(text, kind, out double result, out string error))
         {
             _errors.At(value, field, error);
             return null;
@@ -140,6 +140,12 @@ public sealed class TableReader
         if (entry.Value.Kind != SourceValueKind.String)
         {
             _errors.At(entry.Value, Field(key), $"expected a text in quotes, found {entry.Value.Describe()}");
+            return null;
+        }
+        if (entry.Value.Text is string t && t.Any(TerminalText.Unsafe))
+        {
+            // they would reach terminals (names and kinds are printed) as escape sequences
+            _errors.At(entry.Value, Field(key), $"control characters are not allowed in a text value (found in \"{TerminalText.Clean(t)}\")");
             return null;
         }
         return entry.Value.Text;

@@ -14,6 +14,10 @@ public static class SmallEigen
     {
         int n = matrix.GetLength(0);
         if (count > n) throw new ArgumentException($"asked for {count} levels of a {n}-state basis");
+        // MathNet's managed solver indexes out of its arrays on NaN/∞ input; say what is wrong instead
+        foreach (double x in matrix)
+            if (!double.IsFinite(x))
+                throw new ArgumentException($"a {n}-state Hamiltonian has entries that are not finite numbers (parameters too large for the basis, or a basis too large for this element)");
         if (IsTridiagonal(matrix))
         {
             var d = new double[n];
@@ -24,7 +28,13 @@ public static class SmallEigen
             EigenvectorPhase.Normalize(tridiagonalVectors, n, count);
             return (tridiagonalValues, tridiagonalVectors);
         }
-        var evd = Matrix<double>.Build.DenseOfArray(matrix).Evd(Symmetricity.Symmetric);
+        MathNet.Numerics.LinearAlgebra.Factorization.Evd<double> evd;
+        try { evd = Matrix<double>.Build.DenseOfArray(matrix).Evd(Symmetricity.Symmetric); }
+        catch (IndexOutOfRangeException e)
+        {
+            // a backstop: seen only on non-finite input, which is refused above
+            throw new ArgumentException($"the {n}-state eigenproblem could not be solved ({e.Message})", e);
+        }
         var allValues = evd.EigenValues.Select(z => z.Real).ToArray();
         var order = Enumerable.Range(0, n).OrderBy(i => allValues[i]).Take(count).ToArray();
         var values = new double[count];

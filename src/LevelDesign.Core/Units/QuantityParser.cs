@@ -15,6 +15,21 @@ namespace LevelDesign.Core.Units;
 public static class QuantityParser
 {
     /// <summary>Parses <paramref name="text"/>; on failure returns false and a one-line message saying what was expected.</summary>
+    /// <summary>
+    /// Largest magnitude accepted in a base unit (GHz, F, H, A, Ω, Φ0): far beyond any circuit, small enough that
+    /// products in a Hamiltonian (E·n², E·cos, a sweep's stop − start) stay finite instead of turning into NaN.
+    /// </summary>
+    public const double MaxMagnitude = 1e15;
+
+    /// <summary>As <see cref="TryParse"/>, and refuses magnitudes above <see cref="MaxMagnitude"/>: for values that reach a model.</summary>
+    public static bool TryParseModelValue(string? text, UnitKind expected, out double valueInBaseUnit, out string error)
+    {
+        if (!TryParse(text, expected, out valueInBaseUnit, out error)) return false;
+        if (Math.Abs(valueInBaseUnit) <= MaxMagnitude) return true;
+        error = $"\"{text!.Trim()}\" is too large to compute with (magnitude above {MaxMagnitude:0e0} in base units: GHz, Φ0, F, H, A, Ω)";
+        return false;
+    }
+
     public static bool TryParse(string? text, UnitKind expected, out double valueInBaseUnit, out string error)
     {
         bool ok = TryParseQuantity(text, expected, out var quantity, out error);
@@ -99,6 +114,7 @@ public static class QuantityParser
             error = $"\"{s}\" is out of range; {expectation}";
             return false;
         }
+
         if (value == 0 && !number.IsZero)
         {
             error = $"\"{s}\" is too small to represent; {expectation}";

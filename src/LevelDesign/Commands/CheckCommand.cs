@@ -23,7 +23,7 @@ public static class CheckCommand
         {
             // Errors are the result of a check, so they go to stdout; the count goes to stderr.
             foreach (var e in result.Errors) Console.WriteLine(e.ToString());
-            Console.Error.WriteLine($"{path}: {result.Errors.Count} problem(s)");
+            Console.Error.WriteLine($"{path}: {ErrorList.CountText(result.Errors)}");
             return ExitCodes.InvalidInput;
         }
         var document = result.Document!;

@@ -13,7 +13,7 @@ public static class DeviceInput
         var result = DeviceDocument.Load(path, new DeviceLoadOptions(AllowLarge: allowLarge));
         if (result.Ok) return result.Document;
         foreach (var e in result.Errors) Console.Error.WriteLine(e.ToString());
-        Console.Error.WriteLine($"{path}: {result.Errors.Count} problem(s); nothing computed");
+        Console.Error.WriteLine($"{path}: {ErrorList.CountText(result.Errors)}; nothing computed");
         return null;
     }
 
@@ -42,7 +42,7 @@ public static class DeviceInput
             try { document.Device.GetParameter(name); }
             catch (ArgumentException e) { error = e.Message; return false; }
             var kind = ParameterKinds.Of(name[(name.LastIndexOf('.') + 1)..]);
-            return QuantityParser.TryParse(text, kind, out value, out error) || Fail($"{name}: {error}", out error);
+            return QuantityParser.TryParseModelValue(text, kind, out value, out error) || Fail($"{name}: {error}", out error);
         }
         error = $"no bias '{name}'{EditDistance.Suggestion(name, document.Biases.Select(b => b.Name))}; biases in this file: {string.Join(", ", document.Biases.Select(b => b.Name))} (or give a parameter path such as qa.flux)";
         return false;

@@ -2,6 +2,7 @@ using System.CommandLine;
 using LevelDesign.Core.Analysis;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Files;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Core.Units;
 using LevelDesign.Output;
@@ -48,6 +49,8 @@ public static class FitCommand
         var fields = fitParameters.Select(p => FitField.Of(document, p.Path)).ToArray();
         if (write && fields.FirstOrDefault(f => f.Refusal is not null) is FitField refused)
             throw new UsageException($"--write refused for {refused.DevicePath}: {refused.Refusal}");
+        // a file that cannot be saved (read-only, unwritable folder) is said before the fit runs
+        if (write && AtomicFile.Problem(path) is string problem) throw new UsageException($"--write: {problem}");
 
         var solver = new DeviceSolver();
         var available = DerivedQuantities.From(solver.Solve(device, levels)).Named().Keys.ToArray();
@@ -64,7 +67,10 @@ public static class FitCommand
                 if (error is not null) throw new UsageException($"--write: {error}");
             }
             try { edited.Save(); }
-            catch (Exception e) when (e is IOException or UnauthorizedAccessException) { throw new UsageException($"--write: cannot write {document.Path}: {e.Message}"); }
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+            {
+                throw new UsageException(e is FileWriteException ? $"--write: {e.Message}" : $"--write: cannot write {document.Path}: {e.Message}");
+            }
             Console.Error.WriteLine($"wrote {fields.Length} value(s) to {document.Path} (previous file kept as {document.Path}.bak)");
         }
         return ExitCodes.Ok;
@@ -90,8 +96,8 @@ public static class FitCommand
         {
             var parts = text[(eq + 1)..].Split(':');
             if (parts.Length != 2) throw new UsageException($"--param {text}: write PATH=LOW:HIGH, e.g. qa.ec=150MHz:300MHz");
-            if (!QuantityParser.TryParse(parts[0], kind, out lower, out string e1)) throw new UsageException($"--param {text}: LOW: {e1}");
-            if (!QuantityParser.TryParse(parts[1], kind, out upper, out string e2)) throw new UsageException($"--param {text}: HIGH: {e2}");
+            if (!QuantityParser.TryParseModelValue(parts[0], kind, out lower, out string e1)) throw new UsageException($"--param {text}: LOW: {e1}");
+            if (!QuantityParser.TryParseModelValue(parts[1], kind, out upper, out string e2)) throw new UsageException($"--param {text}: HIGH: {e2}");
             if (!(lower < upper)) throw new UsageException($"--param {text}: LOW must be below HIGH");
         }
         return new FitParameter(path, Math.Clamp(initial, lower, upper), lower, upper);

@@ -50,6 +50,7 @@ public static class PlotCommand
             _ => throw new UsageException($"--manifold {manifoldText}: choose 1, 2 or all"),
         };
         var mode = CommandGuard.LabelMode(labels);
+        OutputFile.Check(output, path);
         var document = CommandGuard.Load(path, allowLarge);
         var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 1);
         if (setup.Axes[0].Count < 3) throw new UsageException($"--vary: a plot needs at least 3 points (got {setup.Axes[0].Count})");
@@ -65,15 +66,11 @@ public static class PlotCommand
         PlotManifold.Apply(plot, manifold);
         // the caption from the axis name alone cannot know a bias's control unit; say it, and what the bias moves
         plot.XLabel(XCaption(document, setup.Axes[0]));
-        try
+        OutputFile.Write(output, () =>
         {
             if (extension == ".svg") SpectrumPlot.SaveSvg(plot, output, w, h);
             else SpectrumPlot.SavePng(plot, output, w, h);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            throw new UsageException($"--out {output}: cannot write: {e.Message}");
-        }
+        });
         Console.Error.WriteLine($"wrote {output} ({result.Points.Count} points, {crossings.Count} crossing(s))");
         return ExitCodes.Ok;
     });

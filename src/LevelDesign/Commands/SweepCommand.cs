@@ -1,6 +1,7 @@
 using System.CommandLine;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Files;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Output;
 
@@ -53,6 +54,8 @@ public static class SweepCommand
     {
         CommandGuard.OneFormat(json, csv);
         var mode = CommandGuard.LabelMode(labels);
+        if (purity is double p && !(p > 0 && p <= 1)) throw new UsageException($"--purity {p}: give a purity in (0, 1], e.g. 0.9");
+        OutputFile.Check(output, path);
         var document = CommandGuard.Load(path, allowLarge);
         double threshold = CommonOptions.PurityThreshold(purity, document);
         var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 2);
@@ -69,12 +72,11 @@ public static class SweepCommand
         return result.Completed ? ExitCodes.Ok : ExitCodes.Cancelled;
     });
 
-    /// <summary>Writes to stdout, or atomically to a file (keeping a previous file as .bak).</summary>
+    /// <summary>Writes to stdout, or to a file by <see cref="OutputFile"/> (a previous regular file kept as .bak).</summary>
     public static void Write(string text, string? output, int points)
     {
         if (output is null) { Console.Write(text); return; }
-        try { AtomicFile.Write(output, text); }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException) { throw new UsageException($"--out {output}: cannot write: {e.Message}"); }
+        OutputFile.Write(output, () => AtomicFile.Write(output, text));
         Console.Error.WriteLine($"wrote {points} points to {output}");
     }
 }

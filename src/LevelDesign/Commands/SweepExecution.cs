@@ -45,9 +45,26 @@ public static class SweepExecution
         int needed = DeviceSolver.DefaultDressedCount(problem.Basis);
         // the default count carries 4 states of margin at the top, where states mix with ones not computed
         int judged = Math.Max(1, needed - 4);
+        int solved = levels is int l && l > judged ? Math.Min(l, problem.Basis.Dimension) : needed;
+        CheckMemory(setup, problem.Basis.Dimension, solved);
         if (levels is null) return (null, judged);
         if (levels <= judged) return (null, levels.Value);
-        int count = Math.Min(levels.Value, problem.Basis.Dimension);
-        return (count, count);
+        return (solved, solved);
+    }
+
+    /// <summary>Most memory the kept points of one sweep may take (the machine this runs on has a few tens of GB).</summary>
+    public const long MaxSweepBytes = 8L << 30;
+
+    /// <summary>
+    /// Refuses, before computing, a sweep whose kept states would not fit: every point keeps its dressed vectors
+    /// (complex, 16 bytes per entry) and weights (8 bytes), so about points × dimension × states × 24 bytes.
+    /// </summary>
+    private static void CheckMemory(SweepSetup setup, int dimension, int states)
+    {
+        long points = setup.Axes.Aggregate(1L, (n, a) => n * Math.Max(1, a.Count));
+        double bytes = (double)points * dimension * states * 24;
+        if (bytes > MaxSweepBytes)
+            throw new UsageException($"this sweep would keep about {bytes / (1L << 30):N1} GiB of dressed states ({points:N0} points × {dimension:N0} states × {states} levels; " +
+                                     $"limit {MaxSweepBytes >> 30} GiB); use fewer points, fewer --levels or a smaller truncation");
     }
 }

@@ -38,6 +38,8 @@ public sealed record SweepSetup(DeviceDocument Document, IReadOnlyDictionary<str
             axes = chosen.Axes;
         }
         axes = AxisArguments.WithLinks(document, axes, links);
+        // sizes and ends are refused here, before the first point is computed
+        if (Core.Sweeps.SweepGrid.AxisProblems(axes) is { Count: > 0 } problems) throw new UsageException(string.Join("; ", problems));
         var setup = new SweepSetup(document, start, axes);
         setup.CheckEnds();
         return setup;

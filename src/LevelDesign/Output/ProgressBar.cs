@@ -6,7 +6,7 @@ namespace LevelDesign.Output;
 /// </summary>
 public sealed class ProgressBar(int total, TextWriter? writer = null) : IProgress<Core.Sweeps.SweepProgress>
 {
-    private readonly TextWriter _out = writer ?? Console.Error;
+    private readonly TextWriter _out = writer ?? SafeConsole.RawError;
     private readonly bool _interactive = writer is null && !Console.IsErrorRedirected;
     private readonly object _gate = new();
     private int _lastDecile = -1;

@@ -42,7 +42,9 @@ public static class SweepRequestParser
             { error = "a linked path is written: link PATH SCALE SHIFT"; return null; }
             links.Add(new LinkedPath(words[i + 1], scale, shift));
         }
-        return new SweepRequest(text.Trim(), [new SweepAxis(path, start, stop, count, links)]);
+        var axis = new SweepAxis(path, start, stop, count, links);
+        if (Core.Sweeps.SweepGrid.AxisProblems([axis]) is { Count: > 0 } problems) { error = string.Join("; ", problems); return null; }
+        return new SweepRequest(text.Trim(), [axis]);
     }
 
     /// <summary>A sensible first sweep: the first bias (or the first flux) over one period in 61 points.</summary>
@@ -78,7 +80,7 @@ public static class SweepRequestParser
         if (Number(text, out value)) { error = ""; return true; }
         bool ok = document.Bias(path) is { } bias
             ? bias.TryParseControl(text, out value, out error)
-            : QuantityParser.TryParse(text, ParameterKinds.Of(path[(path.LastIndexOf('.') + 1)..]), out value, out error);
+            : QuantityParser.TryParseModelValue(text, ParameterKinds.Of(path[(path.LastIndexOf('.') + 1)..]), out value, out error);
         return ok;
     }
 

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using System.Text.Json;
 using LevelDesign.Core.Composite;
+using LevelDesign.Core.Files;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Ui.Text;
 
@@ -49,14 +50,14 @@ public static class TableExport
                 ["label"] = labels[k], ["frequency_ghz"] = Json(spectrum.Energies[k]), ["purity"] = Json(spectrum.Labels[k].Purity),
                 ["ambiguous"] = spectrum.Labels[k].Ambiguous,
             });
-            File.WriteAllText(path, JsonSerializer.Serialize(new Dictionary<string, object> { ["kind"] = "states", ["at"] = where, ["states"] = states },
+            AtomicFile.Write(path, JsonSerializer.Serialize(new Dictionary<string, object> { ["kind"] = "states", ["at"] = where, ["states"] = states },
                 new JsonSerializerOptions { WriteIndented = true }));
             return;
         }
         var text = new StringBuilder("label,frequency_ghz,purity,ambiguous\n");
         for (int k = 0; k < spectrum.Count; k++)
             text.Append(CultureInfo.InvariantCulture, $"{Csv(labels[k])},{spectrum.Energies[k]:R},{spectrum.Labels[k].Purity:R},{spectrum.Labels[k].Ambiguous}\n");
-        File.WriteAllText(path, text.ToString());
+        AtomicFile.Write(path, text.ToString());
     }
 
     private static void Write(string path, List<string> header, List<List<double>> rows, Dictionary<string, object> meta)
@@ -65,13 +66,13 @@ public static class TableExport
         {
             meta["columns"] = header;
             meta["rows"] = rows.Select(r => r.Select(Json).ToList()).ToList();
-            File.WriteAllText(path, JsonSerializer.Serialize(meta, new JsonSerializerOptions { WriteIndented = true }));
+            AtomicFile.Write(path, JsonSerializer.Serialize(meta, new JsonSerializerOptions { WriteIndented = true }));
             return;
         }
         var text = new StringBuilder(string.Join(",", header.Select(Csv))).Append('\n');
         foreach (var row in rows)
             text.Append(string.Join(",", row.Select(v => double.IsFinite(v) ? v.ToString("R", CultureInfo.InvariantCulture) : ""))).Append('\n');
-        File.WriteAllText(path, text.ToString());
+        AtomicFile.Write(path, text.ToString());
     }
 
     private static object Json(double v) => double.IsFinite(v) ? v : null!;

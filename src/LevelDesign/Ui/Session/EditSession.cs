@@ -1,6 +1,7 @@
 using LevelDesign.Core.Couplers;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Elements;
+using LevelDesign.Core.Files;
 
 namespace LevelDesign.Ui.Session;
 
@@ -30,6 +31,12 @@ public sealed class EditSession
     public string? RecoveryText { get; private set; }
 
     public bool IsDirty => Document is not null && !ReferenceEquals(Document, _saved);
+
+    /// <summary>The file has no write permission (or this user may not write it): Ctrl+S is refused, save as is offered.</summary>
+    public bool IsReadOnly => Path is not null && AtomicFile.IsReadOnly(Path);
+
+    /// <summary>Why the last autosave failed (a full disk, permissions); null when the last one succeeded.</summary>
+    public string? AutosaveProblem { get; private set; }
     public bool CanUndo => _undo.Count > 0;
     public bool CanRedo => _redo.Count > 0;
     public int UndoDepth => _undo.Count;
@@ -41,7 +48,7 @@ public sealed class EditSession
     {
         Reset(path);
         Document = _saved = document;
-        if (path is not null && File.Exists(path)) LoadedText = File.ReadAllText(path);
+        if (path is not null) LoadedText = DeviceFileText.Read(path, out _);
         CheckRecovery();
         Changed?.Invoke();
     }
@@ -56,7 +63,7 @@ public sealed class EditSession
         {
             result = new DeviceLoadResult(null, [new DeviceFileError(path, 0, 0, "", e.Message)]);
         }
-        LoadedText = File.Exists(path) ? File.ReadAllText(path) : null;
+        LoadedText = DeviceFileText.Read(path, out _);
         if (result.Ok) Document = _saved = result.Document;
         else LoadErrors = result.Errors.Count > 0 ? result.Errors : [new DeviceFileError(path, 0, 0, "", "the file could not be read")];
         CheckRecovery();
@@ -134,7 +141,7 @@ public sealed class EditSession
     public void DeclineRecovery()
     {
         RecoveryText = null;
-        _autosave?.Delete();
+        DeleteAutosave();
     }
 
     public EditOutcome SetValue(string fieldPath, string text) =>
@@ -217,23 +224,37 @@ public sealed class EditSession
         try { Document.Save(target); }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException)
         {
-            return EditOutcome.Refused($"could not save {target}: {e.Message}");
+            // FileWriteException already names the path
+            return EditOutcome.Refused(e is FileWriteException ? e.Message : $"could not save {target}: {e.Message}");
         }
         if (asPath is not null && asPath != Path)
         {
-            _autosave?.Delete();
+            DeleteAutosave();
             Path = asPath;
             _autosave = new AutosaveSidecar(asPath);
         }
         _saved = Document;
         _stamp = DiskStamp.Of(target);
-        _autosave?.Delete();
+        DeleteAutosave();
         Changed?.Invoke();
         return EditOutcome.Ok($"saved {target} (previous kept as {System.IO.Path.GetFileName(target)}.bak)");
     }
 
     /// <summary>A deliberate quit without saving: the autosave is no longer wanted.</summary>
-    public void Discard() => _autosave?.Delete();
+    public void Discard() => DeleteAutosave();
+
+    private void DeleteAutosave()
+    {
+        try
+        {
+            _autosave?.Delete();
+            AutosaveProblem = null;
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            AutosaveProblem = e.Message;
+        }
+    }
 
     private void WriteAutosave()
     {
@@ -242,10 +263,12 @@ public sealed class EditSession
         {
             if (IsDirty) _autosave.Write(Document.ToText());
             else _autosave.Delete();
+            AutosaveProblem = null;
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            // Autosave is a safety net; a failure must not block editing.
+            // a safety net: a failure must not block editing, but the screen says so (see MainWindow.Report)
+            AutosaveProblem = e.Message;
         }
     }
 }

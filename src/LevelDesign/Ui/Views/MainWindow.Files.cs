@@ -23,7 +23,19 @@ public sealed partial class MainWindow
             return;
         }
         if (asPath is null && _session.Path is null) { AskSaveAs(); return; }
+        if (asPath is null && _session.IsReadOnly) { OfferSaveAsForReadOnly(); return; }
         SaveNow(asPath);
+    }
+
+    /// <summary>Ctrl+S on a read-only file is refused (the file is never replaced behind its permissions); save as is offered.</summary>
+    private void OfferSaveAsForReadOnly() =>
+        _prompt.Choose($"{Path.GetFileName(_session.Path)} is read-only; it is not replaced.\nw save under another name · Esc keep editing",
+            new Dictionary<char, Action> { ['w'] = AskSaveAs });
+
+    /// <summary>Said once when a file opens or reloads: a read-only file can be edited but is saved only under another name.</summary>
+    private void SayIfReadOnly()
+    {
+        if (_session.IsReadOnly) Say($"⚠ {Path.GetFileName(_session.Path)} is read-only: Ctrl+S is refused; Ctrl+W saves under another name", warning: true);
     }
 
     private bool SaveNow(string? asPath)
@@ -58,6 +70,7 @@ public sealed partial class MainWindow
         _session.OpenFile(_session.Path!);
         _diskChanged = false;
         Say("reloaded " + _session.Path);
+        SayIfReadOnly();
     }
 
     private void RequestQuit()
@@ -68,6 +81,7 @@ public sealed partial class MainWindow
             ['s'] = () =>
             {
                 if (_session.Path is null) { AskSaveAs(); return; }
+                if (_session.IsReadOnly) { OfferSaveAsForReadOnly(); return; }
                 if (SaveNow(null)) { _allowQuit = true; RequestStop(); }
             },
             ['d'] = () =>

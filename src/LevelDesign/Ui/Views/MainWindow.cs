@@ -115,6 +115,7 @@ public sealed partial class MainWindow : Window
         Title = "LevelDesign";
         OnDocumentChanged();
         ApplyLayout();
+        SayIfReadOnly();
         _scheduler.Post(OfferRecovery);
         WatchDisk();
     }
@@ -503,7 +504,9 @@ public sealed partial class MainWindow : Window
 
     private bool Report(EditOutcome outcome)
     {
-        Say(outcome.Accepted ? outcome.Message : "✗ " + outcome.Message, warning: !outcome.Accepted);
+        if (outcome.Accepted && _session.AutosaveProblem is string problem)
+            Say($"{outcome.Message} · ⚠ autosave failed ({problem}); Ctrl+S saves", warning: true);
+        else Say(outcome.Accepted ? outcome.Message : "✗ " + outcome.Message, warning: !outcome.Accepted);
         return outcome.Accepted;
     }
 
@@ -518,7 +521,8 @@ public sealed partial class MainWindow : Window
     {
         string file = _session.Path is null ? "demo" : Path.GetFileName(_session.Path);
         string dirty = _session.IsDirty ? " ● unsaved" : "";
-        string disk = _diskChanged ? " ⚠ changed on disk" : "";
+        string disk = (_diskChanged ? " ⚠ changed on disk" : "") + (_session.IsReadOnly ? " read-only" : "")
+                      + (_session.AutosaveProblem is null ? "" : " ⚠ autosave failed");
         string computed = _computing ? "⟳ computing" : _snapshot is null ? "not computed" : $"at {_snapshot.ComputedAt:HH:mm:ss} ({_snapshot.Elapsed.TotalSeconds:0.00} s)";
         string trunc = _snapshot?.ConvergenceText ?? "…";
         string work = string.Join(" · ", new[] { _sweeping ? _progressText : "", _fitting ? "⟳ fitting" : "", _solving ? "⟳ solving" : "" }.Where(w => w.Length > 0));
