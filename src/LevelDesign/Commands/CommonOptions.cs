@@ -24,5 +24,6 @@ public static class CommonOptions
         Description = "compute even when the composite matrix is estimated not to fit in memory (same as allow_large = true in [truncation])",
     };
 
-    public static Option<int?> Levels() => new("--levels") { Description = "number of dressed states to report" };
+    /// <summary>--levels means something different to each command, so each gives its own description.</summary>
+    public static Option<int?> Levels(string description) => new("--levels") { Description = description };
 }
