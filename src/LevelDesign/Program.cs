@@ -39,7 +39,7 @@ public static class Program
         return parse.Invoke();
     }
 
-    public const string RootDescription =
+    private const string RootDescription =
         "LevelDesign: dressed spectra of superconducting-qubit devices described as elements and couplers\n\n"
         + "  leveldesign [FILE]       open the terminal UI on a device file (no FILE: the built-in demo device)\n"
         + "  leveldesign COMMAND ...  work without a terminal; 'leveldesign COMMAND --help' lists its arguments\n\n"
