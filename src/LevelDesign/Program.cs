@@ -12,8 +12,10 @@ public static class Program
 {
     public static int Main(string[] args)
     {
-        var file = new Argument<string?>("FILE") { Description = "device file to open in the terminal UI (default: the built-in demo)", Arity = ArgumentArity.ZeroOrOne };
-        var root = new RootCommand("LevelDesign: dressed spectra of superconducting-qubit devices described as elements and couplers")
+        // Hidden: a visible root argument would show in every subcommand's usage ("leveldesign [<FILE>] check <FILE>");
+        // the root description says how to open the UI instead.
+        var file = new Argument<string?>("FILE") { Description = "device file to open in the terminal UI", Arity = ArgumentArity.ZeroOrOne, Hidden = true };
+        var root = new RootCommand(RootDescription)
         {
             file,
             CheckCommand.Create(),
@@ -24,6 +26,7 @@ public static class Program
             SolveCommand.Create(),
             FitCommand.Create(),
             PlotCommand.Create(),
+            ExamplesCommand.Create(),
         };
         root.SetAction(parse => OpenInteractive(parse.GetValue(file)));
         var parse = root.Parse(args);
@@ -36,6 +39,12 @@ public static class Program
         }
         return parse.Invoke();
     }
+
+    private const string RootDescription =
+        "LevelDesign: dressed spectra of superconducting-qubit devices described as elements and couplers\n\n"
+        + "  leveldesign [FILE]       open the terminal UI on a device file (no FILE: the built-in demo device)\n"
+        + "  leveldesign COMMAND ...  work without a terminal; 'leveldesign COMMAND --help' lists its arguments\n\n"
+        + "Manuals: docs/commands.md and docs/device-format.md; 'leveldesign examples DIR' copies them and the example devices into DIR.";
 
     /// <summary>
     /// Opens the terminal UI: on the demo without a path; otherwise the UI loads the file itself so that a bad

@@ -37,5 +37,6 @@ public static class CommonOptions
         return option ?? document.PurityThreshold;
     }
 
-    public static Option<int?> Levels() => new("--levels") { Description = "number of dressed states to report" };
+    /// <summary>--levels means something different to each command, so each gives its own description.</summary>
+    public static Option<int?> Levels(string description) => new("--levels") { Description = description };
 }

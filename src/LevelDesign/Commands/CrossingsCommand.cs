@@ -25,7 +25,8 @@ public static class CrossingsCommand
         var maxGap = new Option<string?>("--max-gap") { Description = "leave out crossings whose gap is above this (default 500MHz)" };
         var at = CommonOptions.At();
         var point = CommonOptions.Point();
-        var levels = CommonOptions.Levels();
+        var levels = CommonOptions.Levels(
+            "number of lowest labelled states searched for crossings with each other (default: the ground and one-excitation states; the cost grows with its square)");
         var labels = SweepCommand.Labels();
         var json = CommonOptions.Json();
         var csv = CommonOptions.Csv();

@@ -4,7 +4,7 @@ using LevelDesign.Output;
 
 namespace LevelDesign.Commands;
 
-/// <summary>leveldesign describe FILE [--at ...] --json: the fully resolved model.</summary>
+/// <summary>leveldesign describe FILE [--at ...] [--json]: the fully resolved model, as tables or as JSON.</summary>
 public static class DescribeCommand
 {
     public static Command Create()
@@ -12,15 +12,15 @@ public static class DescribeCommand
         var file = CommonOptions.File();
         var at = CommonOptions.At();
         var point = CommonOptions.Point();
-        var json = CommonOptions.Json();
+        var json = new Option<bool>("--json") { Description = "write the model as JSON to stdout (default: readable tables)" };
         var allowLarge = CommonOptions.AllowLarge();
         var command = new Command("describe", "the fully resolved model (energies in GHz after every conversion), enough to rebuild the Hamiltonian")
             { file, at, point, json, allowLarge };
-        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(at), parse.GetValue(point), parse.GetValue(allowLarge)));
+        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(at), parse.GetValue(point), parse.GetValue(json), parse.GetValue(allowLarge)));
         return command;
     }
 
-    public static int Run(string path, string[]? at, string? point, bool allowLarge)
+    public static int Run(string path, string[]? at, string? point, bool json, bool allowLarge)
     {
         var document = DeviceInput.Load(path, allowLarge);
         if (document is null) return ExitCodes.InvalidInput;
@@ -30,10 +30,10 @@ public static class DescribeCommand
         {
             var problem = new DeviceSolver().Prepare(device);
             var warnings = DeviceWarnings.Print(path, device);
-            // JSON is the only output form: the model is data for another program.
-            var report = DescribeFormatter.Describe(problem, applied);
-            report["warnings"] = new System.Text.Json.Nodes.JsonArray(warnings.Select(w => (System.Text.Json.Nodes.JsonNode?)w).ToArray());
-            Console.WriteLine(JsonValues.Write(report));
+            var model = DescribeFormatter.Describe(problem, applied);
+            model["warnings"] = new System.Text.Json.Nodes.JsonArray(warnings.Select(w => (System.Text.Json.Nodes.JsonNode?)w).ToArray());
+            if (json) Console.WriteLine(JsonValues.Write(model));
+            else Console.Write(DescribeTable.Format(model));
             return ExitCodes.Ok;
         }
         catch (Exception e) when (ComputationErrors.IsExpected(e))

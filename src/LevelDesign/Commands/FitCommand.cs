@@ -22,11 +22,12 @@ public static class FitCommand
     {
         var file = CommonOptions.File();
         var param = new Option<string[]>("--param") { Description = "a parameter to fit, PATH[=LOW:HIGH] (e.g. qa.ej_sum=15GHz:25GHz; default bounds: half to twice the value); repeatable", AllowMultipleArgumentsPerToken = false };
-        var target = new Option<string[]>("--target") { Description = "QUANTITY=VALUE[@POINT or @BIAS=V[,BIAS=V]] (e.g. qa.f01=5.25GHz@idle); repeatable", AllowMultipleArgumentsPerToken = false };
+        var target = new Option<string[]>("--target") { Description = "QUANTITY=VALUE[@POINT or @BIAS=V[,BIAS=V]], e.g. qa.f01=5.25GHz@idle; VALUE is a frequency with its unit, a bare number is GHz; repeatable", AllowMultipleArgumentsPerToken = false };
         var write = new Option<bool>("--write") { Description = "write the fitted values into the file (same units, comments kept, previous file as FILE.bak)" };
         var at = CommonOptions.At();
         var point = CommonOptions.Point();
-        var levels = CommonOptions.Levels();
+        var levels = CommonOptions.Levels(
+            "number of dressed states solved at each fit evaluation (default: enough for every derived quantity)");
         var json = CommonOptions.Json();
         var allowLarge = CommonOptions.AllowLarge();
         var command = new Command("fit", "fit element or coupler parameters to target quantities; report fitted values in the file's units; --write saves them")

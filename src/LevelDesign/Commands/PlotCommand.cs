@@ -23,7 +23,8 @@ public static class PlotCommand
         var height = new Option<int?>("--height") { Description = "picture height in pixels (default 800)" };
         var at = CommonOptions.At();
         var point = CommonOptions.Point();
-        var levels = CommonOptions.Levels();
+        var levels = CommonOptions.Levels(
+            "number of lowest labelled states drawn and searched for crossings (default: the lowest 12, or every labelled state with --manifold)");
         var labels = SweepCommand.Labels();
         var allowLarge = CommonOptions.AllowLarge();
         var command = new Command("plot", "picture (SVG or PNG) of the labelled spectrum along a sweep, crossings marked with their gaps")

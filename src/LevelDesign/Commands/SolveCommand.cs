@@ -18,11 +18,12 @@ public static class SolveCommand
     {
         var file = CommonOptions.File();
         var vary = SweepCommand.Vary($"the range BIAS=START:STOP[:SCAN] to search (SCAN scan points, default {DefaultScan})");
-        var target = new Option<string?>("--target") { Description = "QUANTITY=VALUE, e.g. qa.f01=5.25GHz or zz:qa:qb=0 (a frequency with its unit, e.g. 5.2GHz; a bare number is GHz)" };
+        var target = new Option<string?>("--target") { Description = "QUANTITY=VALUE, e.g. qa.f01=5.2GHz or zz:qa:qb=0; VALUE is a frequency with its unit, e.g. 5.2GHz; a bare number is GHz" };
         var link = SweepCommand.Link();
         var at = CommonOptions.At();
         var point = CommonOptions.Point();
-        var levels = CommonOptions.Levels();
+        var levels = CommonOptions.Levels(
+            "number of dressed states solved at each scan point (default: enough for every derived quantity; raise it when the target's states lie higher)");
         var json = CommonOptions.Json();
         var allowLarge = CommonOptions.AllowLarge();
         var purity = CommonOptions.Purity("list roots whose states are less pure than this apart, as inside a hybridized region");

@@ -12,7 +12,8 @@ public static class SpectrumCommand
         var file = CommonOptions.File();
         var at = CommonOptions.At();
         var point = CommonOptions.Point();
-        var levels = CommonOptions.Levels();
+        var levels = CommonOptions.Levels(
+            "number of dressed states to list, lowest first (default: every state the derived quantities use)");
         var json = CommonOptions.Json();
         var csv = CommonOptions.Csv();
         var allowLarge = CommonOptions.AllowLarge();

@@ -34,7 +34,8 @@ public static class SweepCommand
         var sweep = SweepName();
         var at = CommonOptions.At();
         var point = CommonOptions.Point();
-        var levels = CommonOptions.Levels();
+        var levels = CommonOptions.Levels(
+            "number of labelled dressed states reported at each point (default: all states up to two excitations)");
         var labels = Labels();
         var purity = CommonOptions.Purity("flag points where a tracked state's purity is below this");
         var json = CommonOptions.Json();
