@@ -27,6 +27,9 @@ public sealed class DerivedQuantities
 
     public IReadOnlyList<PurcellEstimate> Purcell { get; }
 
+    /// <summary>The effective Hamiltonian of every coupled qubit pair (<see cref="BlockDiagonalisation"/>).</summary>
+    public IReadOnlyList<QubitPairHamiltonian> EffectiveHamiltonians { get; private init; } = [];
+
     public static DerivedQuantities From(DressedSpectrum s)
     {
         var elements = s.Device.Elements;
@@ -59,7 +62,7 @@ public sealed class DerivedQuantities
             for (int p = q + 1; p < elements.Count; p++)
                 if (elements[p].IsQubitLike) zz.Add(new PairValue(elements[q].Id, elements[p].Id, ExchangeShift(s, q, p)));
         }
-        return new DerivedQuantities(transitions, chi, zz, purcell);
+        return new DerivedQuantities(transitions, chi, zz, purcell) { EffectiveHamiltonians = BlockDiagonalisation.ForCoupledPairs(s) };
     }
 
     /// <summary>E11 − E10 − E01 + E00: this is both ZZ (two qubits) and 2χ (qubit, resonator).</summary>
@@ -83,7 +86,7 @@ public sealed class DerivedQuantities
         return state;
     }
 
-    /// <summary>Flat named values ("qa.f01", "qa.anharmonicity", "chi2:qa:ra", "zz:qa:qb", ...) for tables, sweeps and targets.</summary>
+    /// <summary>Flat named values ("qa.f01", "qa.anharmonicity", "chi2:qa:ra", "zz:qa:qb", "jeff:qa:qb", ...) for tables, sweeps and targets.</summary>
     public IReadOnlyDictionary<string, double> Named()
     {
         var d = new Dictionary<string, double>();
@@ -97,6 +100,7 @@ public sealed class DerivedQuantities
         foreach (var c in DispersiveShifts) d[$"chi2:{c.First}:{c.Second}"] = c.Value;
         foreach (var z in ZZ) d[$"zz:{z.First}:{z.Second}"] = z.Value;
         foreach (var p in Purcell) d[$"purcell:{p.Qubit}:{p.Resonator}"] = p.RateGHz;
+        foreach (var h in EffectiveHamiltonians) d[$"jeff:{h.QubitA}:{h.QubitB}"] = h.JEff;
         return d;
     }
 }
