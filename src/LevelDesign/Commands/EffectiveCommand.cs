@@ -45,6 +45,16 @@ public static class EffectiveCommand
         return ExitCodes.Ok;
     });
 
+    /// <summary>For a jeff:QA:QB quantity, warns on stderr when the pair's block diagonalisation at this point is ill-conditioned.</summary>
+    public static void WarnIfIllConditioned(DressedSpectrum spectrum, string quantity, string where)
+    {
+        var parts = quantity.Split(':');
+        if (parts.Length != 3 || parts[0] != "jeff") return;
+        var h = BlockDiagonalisation.Of(spectrum, parts[1], parts[2]);
+        if (h.IllConditioned)
+            Console.Error.WriteLine($"warning: at {where} {quantity} is ill-conditioned: a computational state keeps only {h.MinComputationalWeight:F3} of its weight on the computational states (threshold {h.Threshold}); J_eff there is not reliable");
+    }
+
     private static (string A, string B) Pair(Core.Model.Device device, string text)
     {
         var parts = text.Split(':');

@@ -49,6 +49,8 @@ public static class SolveCommand
         var roots = SweepExecution.WithCancel(token =>
             TargetSolver.FindAllAsync(setup.Resolve, axis, quantity, value, options, planLevels, ToleranceFor(axis), token));
         Console.Write(json ? TargetReport.Json(document, axis, quantity, value, roots) : TargetReport.Table(document, axis, quantity, value, roots));
+        foreach (var r in roots.Where(r => r.Refined))
+            EffectiveCommand.WarnIfIllConditioned(solver.Solve(setup.Resolve([r.Bias]), planLevels), quantity, $"{axis.Path} = {r.Bias:G10}");
         if (!roots.Any(r => r.Refined)) Console.Error.WriteLine($"no root of {quantity} = target between {axis.Start:G6} and {axis.Stop:G6}");
         return ExitCodes.Ok;
     });
