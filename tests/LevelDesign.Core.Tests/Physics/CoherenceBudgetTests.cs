@@ -42,6 +42,23 @@ public class CoherenceBudgetTests
         Close(Math.Sqrt(ratio / 8) / 2, n01 * n01, tolerance, $"|n01|² at E_J/E_C = {ratio}");
     }
 
+    /// <summary>
+    /// Limiting case of the dielectric formula: with Koch et al.'s transmon matrix element (Eq. 3.4) and f01 ≈ sqrt(8E_JE_C),
+    /// ħω|φ01|²/(4E_C) → 1, so at T → 0 (1 + coth → 2) Γ → 2ω01/Q_cap (derived here from the two published formulas).
+    /// The transmon corrections are of relative order sqrt(E_C/8E_J) (1.1% at E_J/E_C = 1000); we allow 3%.
+    /// </summary>
+    [Fact]
+    public void Dielectric_loss_of_a_deep_transmon_tends_to_two_omega_over_q()
+    {
+        var device = new Device("t", [new Transmon("q", 0.2, 200)], [], new Truncation { DefaultLevels = 4 });
+        var solver = new DeviceSolver();
+        var s = solver.Solve(device);
+        var cold = new CoherenceInputs { QubitTemperature = 0, QCapacitive = 2e6 };
+        var b = CoherenceEstimator.Estimate(solver, s, cold).Single();
+        double f01 = s.EnergyOfExcitation((0, 1));
+        Close(2 * 2 * Math.PI * f01 * 1e9 / 2e6, Channel(b, "dielectric loss").RatePerSecond, 0.03, "dielectric T → 0");
+    }
+
     /// <summary>A single transmon: dressed = bare, so dielectric loss and charge dispersion follow from the element alone.</summary>
     [Fact]
     public void Single_transmon_dielectric_and_charge_channels_match_their_formulas()
