@@ -15,7 +15,8 @@ public static class CoherenceEstimator
     private const string Nguyen = "Nguyen et al., PRX 9, 041041 (2019)";
     private const string Ithier = "Ithier et al., PRB 72, 134519 (2005)";
 
-    public static IReadOnlyList<CoherenceBudget> Estimate(DeviceSolver solver, DressedSpectrum s, CoherenceInputs inputs)
+    public static IReadOnlyList<CoherenceBudget> Estimate(DeviceSolver solver, DressedSpectrum s, CoherenceInputs inputs,
+        CancellationToken cancellation = default)
     {
         var problems = inputs.Validate();
         if (problems.Count > 0) throw new ArgumentException("coherence inputs: " + string.Join("; ", problems));
@@ -24,7 +25,7 @@ public static class CoherenceEstimator
         var qubits = Enumerable.Range(0, device.Elements.Count).Where(i => device.Elements[i].IsQubitLike).ToArray();
         var qubitIds = qubits.Select(i => device.Elements[i].Id).ToArray();
         var fluxSources = device.Elements.Where(e => e.Parameters.ContainsKey("flux")).Select(e => e.Id + ".flux").ToArray();
-        var slopes = fluxSources.Select(p => FluxSensitivity.Derivatives(solver, device, p, qubitIds, inputs.FluxStep)).ToArray();
+        var slopes = fluxSources.Select(p => FluxSensitivity.Derivatives(solver, device, p, qubitIds, inputs.FluxStep, cancellation)).ToArray();
 
         var budgets = new List<CoherenceBudget>();
         for (int qi = 0; qi < qubits.Length; qi++)
@@ -72,7 +73,7 @@ public static class CoherenceEstimator
             }
 
             if (element is Transmon or TunableTransmon)
-                channels.Add(Charge(solver, s, q, inputs));
+                channels.Add(Charge(solver, s, q, inputs, cancellation));
 
             foreach (var c in derived.DispersiveShifts.Where(c => c.First == element.Id))
             {
@@ -106,11 +107,12 @@ public static class CoherenceEstimator
     }
 
     /// <summary>Charge dispersion of the dressed f01: the composite model solved at this element's n_g = 0 and 1/2.</summary>
-    private static CoherenceChannel Charge(DeviceSolver solver, DressedSpectrum s, int q, CoherenceInputs inputs)
+    private static CoherenceChannel Charge(DeviceSolver solver, DressedSpectrum s, int q, CoherenceInputs inputs, CancellationToken cancellation)
     {
         string id = s.Device.Elements[q].Id;
         double F01(double ng)
         {
+            cancellation.ThrowIfCancellationRequested();
             var spectrum = solver.Solve(s.Device.WithParameter(id + ".ng", ng));
             return spectrum.EnergyOfExcitation((q, 1)) - spectrum.EnergyOfExcitation();
         }

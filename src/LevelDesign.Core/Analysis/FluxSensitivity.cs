@@ -15,12 +15,13 @@ public static class FluxSensitivity
 
     /// <summary>First and second derivatives of each listed element's dressed f01, with the step checked at 2h.</summary>
     public static FrequencyDerivatives[] Derivatives(DeviceSolver solver, Device device, string parameterPath,
-        IReadOnlyList<string> elementIds, double step)
+        IReadOnlyList<string> elementIds, double step, CancellationToken cancellation = default)
     {
         double x = device.GetParameter(parameterPath);
         var indices = elementIds.Select(device.IndexOf).ToArray();
         double[] Frequencies(double value)
         {
+            cancellation.ThrowIfCancellationRequested();
             var spectrum = solver.Solve(device.WithParameter(parameterPath, value));
             return indices.Select(i => spectrum.EnergyOfExcitation((i, 1)) - spectrum.EnergyOfExcitation()).ToArray();
         }

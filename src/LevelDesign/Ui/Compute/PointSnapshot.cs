@@ -14,6 +14,12 @@ public sealed record PointSnapshot(
     /// <summary>Why the truncation check could not run (e.g. a level list cannot grow), or null.</summary>
     public string? ConvergenceProblem { get; init; }
 
+    /// <summary>The coherence budget with the default (common-practice) noise figures, computed with the convergence check; or null.</summary>
+    public IReadOnlyList<CoherenceBudget>? Coherence { get; init; }
+
+    /// <summary>Why the coherence budget could not be estimated, or null.</summary>
+    public string? CoherenceProblem { get; init; }
+
     /// <summary>Convergence of the key values only (see <see cref="ConvergenceSummary"/>), or "not checked".</summary>
     public string ConvergenceText => ConvergenceProblem is not null
         ? "not checked (F3 shifts says why)"

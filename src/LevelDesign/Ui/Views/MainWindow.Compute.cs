@@ -278,7 +278,8 @@ public sealed partial class MainWindow
                 break;
             case Page.Shifts:
                 _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")]
-                    : ShiftsText.Build(shown.Quantities, Where(), _snapshot?.Convergence, _snapshot?.Spectrum.Device, _snapshot?.ConvergenceProblem, width));
+                    : ShiftsText.Build(shown.Quantities, Where(), _snapshot?.Convergence, _snapshot?.Spectrum.Device, _snapshot?.ConvergenceProblem, width,
+                        ReferenceEquals(shown, _snapshot) ? _snapshot?.Coherence : null));
                 break;
             case Page.Help:
                 _page.SetLines(_showLimits ? HelpText.Limits(width) : HelpText.Keys(width));
