@@ -70,6 +70,23 @@ public class EffectiveHamiltonianTests
         Assert.True(h.Residual < 1e-6, $"residual {h.Residual}");
     }
 
+    /// <summary>
+    /// A direct charge coupling alone: with n = i·n_zpf(a† − a) on both Kerr elements, g12·n_a n_b/|n01|² =
+    /// −g12(a†−a)(b†−b) gives ⟨10|H|01⟩ = +g12 and ⟨00|H|11⟩ = −g12 at first order; second-order corrections are
+    /// of size g12²/(f_a + f_b) (here below 2e-6 GHz; we allow 1e-5).
+    /// </summary>
+    [Fact]
+    public void A_direct_coupling_gives_exchange_and_counter_rotating_terms_of_opposite_sign()
+    {
+        double g12 = 0.004;
+        var device = new Device("ab", [new KerrOscillator("a", 5.0, -0.22), new KerrOscillator("b", 5.2, -0.2)], [Charge("a", "b", g12)],
+            new Truncation { DefaultLevels = 4 });
+        var h = BlockDiagonalisation.Of(new DeviceSolver().Solve(device), "a", "b");
+        Assert.True(Math.Abs(h.JEff - g12) < 1e-5, $"J_eff {h.JEff}");
+        Assert.True(Math.Abs(h.CounterRotating + g12) < 1e-5, $"K {h.CounterRotating}");
+        Assert.True(h.Residual < 1e-9);
+    }
+
     [Fact]
     public void Hybridized_computational_states_are_reported_ill_conditioned()
     {

@@ -81,13 +81,14 @@ public static class ShiftsText
     private static IEnumerable<TextLine> Coherence(IReadOnlyList<CoherenceBudget> budgets, int width)
     {
         yield return new TextLine("");
-        yield return new TextLine("Coherence (model estimates; confirm by measurement)", Heading: true);
+        foreach (var line in Wrapped("Coherence (model estimates; confirm by measurement)", width, heading: true)) yield return line;
         foreach (var line in Wrapped("common-practice noise and loss figures; `leveldesign coherence` shows every channel and takes your own", width))
             yield return line;
         int idWidth = Math.Max(7, budgets.Max(b => b.Qubit.Length));
         yield return new TextLine($"  {"qubit".PadRight(idWidth)} {"T1 µs",9} {"T2 µs",9}  limited by", Heading: true);
         foreach (var b in budgets)
-            yield return new TextLine($"  {b.Qubit.PadRight(idWidth)} {Micro(b.T1Seconds),9} {Micro(b.T2Seconds),9}  {b.DominantT2?.Name ?? "—"}");
+            foreach (var line in Wrapped($"  {b.Qubit.PadRight(idWidth)} {Micro(b.T1Seconds),9} {Micro(b.T2Seconds),9}  {b.DominantT2?.Name ?? "—"}", width))
+                yield return line;
     }
 
     private static string Micro(double seconds) =>
