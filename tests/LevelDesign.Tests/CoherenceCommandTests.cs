@@ -51,6 +51,26 @@ public sealed class CoherenceCommandTests
         Assert.Equal(0, Rate(changed, "thermal photons (r)"));
     }
 
+    [Fact]
+    public void The_device_files_coherence_table_sets_inputs_and_options_override_it()
+    {
+        string dir = Directory.CreateTempSubdirectory("coherence-table").FullName;
+        try
+        {
+            string file = Path.Combine(dir, "single.toml");
+            File.WriteAllText(file, File.ReadAllText(Device("single.toml")) + "\n[coherence]\nq_cap = 3e6\nqubit_temperature = \"30 mK\"\n");
+            double Input(JsonNode json, string name) => (double)json["inputs"]!.AsArray().Single(i => (string)i!["name"]! == name)!["value"]!;
+            var fromFile = Json(Executable.Run("coherence", file, "--json"));
+            Assert.Equal(3e6, Input(fromFile, "q_cap"));
+            Assert.Equal(0.030, Input(fromFile, "qubit_temperature"), 12);
+            Assert.Equal(2e-6, Input(fromFile, "flux_noise"));   // not in the table: the default
+            var overridden = Json(Executable.Run("coherence", file, "--json", "--q-cap", "5e5"));
+            Assert.Equal(5e5, Input(overridden, "q_cap"));
+            Assert.Equal(0.030, Input(overridden, "qubit_temperature"), 12);
+        }
+        finally { Directory.Delete(dir, recursive: true); }
+    }
+
     [Theory]
     [InlineData("--qubit-temperature", "hot", "--qubit-temperature hot")]
     [InlineData("--q-cap", "-5", "q_cap must be")]

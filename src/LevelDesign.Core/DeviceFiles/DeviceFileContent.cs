@@ -10,4 +10,8 @@ public sealed record DeviceFileContent(
     IReadOnlyList<BiasDefinition> Biases,
     IReadOnlyList<OperatingPoint> Points,
     IReadOnlyList<SweepDefinition> Sweeps,
-    long CompositeDimension);
+    long CompositeDimension)
+{
+    /// <summary>The [coherence] table's noise and loss figures (defaults where it is absent).</summary>
+    public Analysis.CoherenceInputs Coherence { get; init; } = new();
+}

@@ -30,16 +30,16 @@ public static class CoherenceCommand
             { file, at, point, vary, link, sweep, json, csv, output, allowLarge };
         foreach (var o in noise.All) command.Options.Add(o);
         command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(at), parse.GetValue(point), parse.GetValue(vary), parse.GetValue(link),
-            parse.GetValue(sweep), parse.GetValue(json), parse.GetValue(csv), parse.GetValue(output), parse.GetValue(allowLarge), () => noise.Read(parse)));
+            parse.GetValue(sweep), parse.GetValue(json), parse.GetValue(csv), parse.GetValue(output), parse.GetValue(allowLarge), file => noise.Read(parse, file)));
         return command;
     }
 
     public static int Run(string path, string[]? at, string? point, string[]? vary, string[]? links, string? sweepName, bool json, bool csv,
-        string? output, bool allowLarge, Func<CoherenceInputs> readInputs) => CommandGuard.Run(path, () =>
+        string? output, bool allowLarge, Func<CoherenceInputs, CoherenceInputs> readInputs) => CommandGuard.Run(path, () =>
     {
         CommandGuard.OneFormat(json, csv);
-        var inputs = readInputs();
         var document = CommandGuard.Load(path, allowLarge);
+        var inputs = readInputs(document.Coherence);
         var solver = new DeviceSolver();
         if (vary is not { Length: > 0 } && sweepName is null)
         {

@@ -6,8 +6,8 @@ using LevelDesign.Core.Units;
 namespace LevelDesign.Commands;
 
 /// <summary>
-/// The noise and loss inputs of the coherence budget as options; each left out keeps its common-practice default
-/// (<see cref="CoherenceInputs"/>). Temperatures take K or mK, times a time unit, the cutoff a frequency unit.
+/// The noise and loss inputs of the coherence budget as options; each left out keeps the device file's [coherence] value
+/// or else its common-practice default (<see cref="CoherenceInputs"/>). Temperatures take K or mK, times a time unit, the cutoff a frequency unit.
 /// </summary>
 public sealed class CoherenceOptions
 {
@@ -25,10 +25,10 @@ public sealed class CoherenceOptions
 
     public IEnumerable<Option> All => [QCap, QInd, FluxNoise, ChargeNoise, QubitTemperature, ResonatorTemperature, InfraredCutoff, MeasurementTime, FluxStep];
 
-    /// <summary>The inputs from the parsed options, or a usage error naming the option.</summary>
-    public CoherenceInputs Read(ParseResult parse)
+    /// <summary>The file's inputs (<paramref name="fromFile"/>) with the given options on top, or a usage error naming the option.</summary>
+    public CoherenceInputs Read(ParseResult parse, CoherenceInputs fromFile)
     {
-        var inputs = new CoherenceInputs();
+        var inputs = fromFile;
         if (parse.GetValue(QCap) is string q) inputs = inputs with { QCapacitive = Number(QCap, q) };
         if (parse.GetValue(QInd) is string qi) inputs = inputs with { QInductive = Number(QInd, qi) };
         if (parse.GetValue(FluxNoise) is string fn) inputs = inputs with { FluxNoise = Parse(FluxNoise, fn, UnitKind.Flux) };

@@ -8,7 +8,7 @@ namespace LevelDesign.Ui.Compute;
 /// <summary>Solves one device (off the UI thread), checks truncation convergence and estimates the coherence budget.</summary>
 public static class PointComputer
 {
-    public static PointSnapshot Compute(Device device, bool checkConvergence, CancellationToken cancellation)
+    public static PointSnapshot Compute(Device device, bool checkConvergence, CancellationToken cancellation, CoherenceInputs? coherenceInputs = null)
     {
         var clock = Stopwatch.StartNew();
         var solver = new DeviceSolver();
@@ -25,7 +25,7 @@ public static class PointComputer
             try { convergence = TruncationConvergence.Check(solver, device); }
             catch (Exception e) when (e is ArgumentException or InvalidOperationException) { convergenceProblem = e.Message; }
             // extra solves at shifted flux and offset charge; with the convergence check, so a quick first view is not delayed
-            try { coherence = CoherenceEstimator.Estimate(solver, spectrum, new CoherenceInputs(), cancellation); }
+            try { coherence = CoherenceEstimator.Estimate(solver, spectrum, coherenceInputs ?? new CoherenceInputs(), cancellation); }
             catch (Exception e) when (e is ArgumentException or InvalidOperationException) { coherenceProblem = e.Message; }
         }
         return new PointSnapshot(spectrum, quantities, convergence, DateTime.Now, clock.Elapsed)

@@ -82,7 +82,7 @@ public static class ShiftsText
     {
         yield return new TextLine("");
         foreach (var line in Wrapped("Coherence (model estimates; confirm by measurement)", width, heading: true)) yield return line;
-        foreach (var line in Wrapped("common-practice noise and loss figures; `leveldesign coherence` shows every channel and takes your own", width))
+        foreach (var line in Wrapped("noise and loss figures from [coherence] in the file or common-practice defaults; `leveldesign coherence` shows every channel", width))
             yield return line;
         int idWidth = Math.Max(7, budgets.Max(b => b.Qubit.Length));
         yield return new TextLine($"  {"qubit".PadRight(idWidth)} {"T1 µs",9} {"T2 µs",9}  limited by", Heading: true);
