@@ -113,7 +113,7 @@ public static class CoherenceEstimator
         double F01(double ng)
         {
             cancellation.ThrowIfCancellationRequested();
-            var spectrum = solver.Solve(s.Device.WithParameter(id + ".ng", ng));
+            var spectrum = FluxSensitivity.SolveLowest(solver, s.Device.WithParameter(id + ".ng", ng));
             return spectrum.EnergyOfExcitation((q, 1)) - spectrum.EnergyOfExcitation();
         }
         double dispersion = F01(0.5) - F01(0);

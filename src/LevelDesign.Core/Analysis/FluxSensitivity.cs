@@ -22,11 +22,37 @@ public static class FluxSensitivity
         double[] Frequencies(double value)
         {
             cancellation.ThrowIfCancellationRequested();
-            var spectrum = solver.Solve(device.WithParameter(parameterPath, value));
+            var spectrum = SolveLowest(solver, device.WithParameter(parameterPath, value));
             return indices.Select(i => spectrum.EnergyOfExcitation((i, 1)) - spectrum.EnergyOfExcitation()).ToArray();
         }
-        var offsets = new[] { -2, -1, 0, 1, 2 };
-        var f = offsets.Select(o => Frequencies(x + o * step)).ToArray();
+        // the five solves are independent; the solver and its caches are shared safely
+        var f = new double[5][];
+        try
+        {
+            Parallel.For(0, 5, new ParallelOptions { CancellationToken = cancellation }, o => f[o] = Frequencies(x + (o - 2) * step));
+        }
+        catch (AggregateException e)
+        {
+            // callers expect the solver's own exception (e.g. a device invalid at the shifted flux), not a wrapper
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerExceptions[0]).Throw();
+            throw;
+        }
         return indices.Select((_, q) => FrequencyDerivatives.From(parameterPath, step, f[0][q], f[1][q], f[2][q], f[3][q], f[4][q])).ToArray();
+    }
+
+    /// <summary>
+    /// Solves for the states an f01 needs: every product state with at most one excitation, those below the highest of
+    /// them, and a margin of four (fewer than the default count, which reaches two excitations).
+    /// </summary>
+    public static DressedSpectrum SolveLowest(DeviceSolver solver, Device device)
+    {
+        var problem = solver.Prepare(device);
+        var basis = problem.Basis;
+        double highest = 0;
+        for (int i = 0; i < basis.Dimension; i++)
+            if (basis.States[i].Sum() <= 1) highest = Math.Max(highest, basis.BareEnergies[i]);
+        int count = 0;
+        for (int i = 0; i < basis.Dimension; i++) if (basis.BareEnergies[i] <= highest + 1e-9) count++;
+        return solver.Solve(problem, Math.Min(basis.Dimension, count + 4));
     }
 }
