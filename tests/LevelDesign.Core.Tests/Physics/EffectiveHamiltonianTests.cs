@@ -55,7 +55,7 @@ public class EffectiveHamiltonianTests
     /// Yan et al., Phys. Rev. Applied 10, 054062 (2018): with the coupler eliminated to second order,
     /// g_eff ≈ (g1g2/2)(1/Δ1 + 1/Δ2 − 1/Σ1 − 1/Σ2) + g12, Δj = ωj − ωc, Σj = ωj + ωc. The neglected terms are of fourth
     /// order, of size g_max⁴/|Δ|³ up to a factor of order one (our bound: |J_eff − g_eff| ≤ g_max⁴/min|Δ|³ + 1e-7 GHz; the
-    /// differences measured are 2e-7, 2e-6 and 1.3e-5 GHz at ωc = 7.5, 6.5, 6 GHz against bounds 1.3e-6, 6.2e-6, 2.6e-5).
+    /// differences measured are 2.2e-7, 2.0e-6 and 1.3e-5 GHz at ωc = 7.5, 6.5, 6 GHz against bounds 1.2e-6, 6.0e-6, 2.5e-5).
     /// </summary>
     [Theory]
     [InlineData(6.0)]
