@@ -27,6 +27,9 @@ public sealed class DerivedQuantities
 
     public IReadOnlyList<PurcellEstimate> Purcell { get; }
 
+    /// <summary>The effective Hamiltonian of every coupled qubit pair (<see cref="BlockDiagonalisation"/>).</summary>
+    public IReadOnlyList<QubitPairHamiltonian> EffectiveHamiltonians { get; private init; } = [];
+
     public static DerivedQuantities From(DressedSpectrum s)
     {
         var elements = s.Device.Elements;
@@ -61,7 +64,7 @@ public sealed class DerivedQuantities
             for (int p = q + 1; p < elements.Count; p++)
                 if (elements[p].IsQubitLike) zz.Add(new PairValue(elements[q].Id, elements[p].Id, ExchangeShift(s, q, p), ExchangePurity(s, q, p)));
         }
-        return new DerivedQuantities(transitions, chi, zz, purcell);
+        return new DerivedQuantities(transitions, chi, zz, purcell) { EffectiveHamiltonians = BlockDiagonalisation.ForCoupledPairs(s) };
     }
 
     /// <summary>E11 − E10 − E01 + E00: this is both ZZ (two qubits) and 2χ (qubit, resonator).</summary>
@@ -91,7 +94,7 @@ public sealed class DerivedQuantities
         return state;
     }
 
-    /// <summary>Flat named values ("qa.f01", "qa.anharmonicity", "chi2:qa:ra", "zz:qa:qb", ...) for tables, sweeps and targets.</summary>
+    /// <summary>Flat named values ("qa.f01", "qa.anharmonicity", "chi2:qa:ra", "zz:qa:qb", "jeff:qa:qb", ...) for tables, sweeps and targets.</summary>
     public IReadOnlyDictionary<string, double> Named() => Entries().ToDictionary(e => e.Name, e => e.Value);
 
     /// <summary>For each name of <see cref="Named"/>, the lowest purity of the labelled states its value is read from.</summary>
@@ -109,5 +112,8 @@ public sealed class DerivedQuantities
         foreach (var c in DispersiveShifts) yield return ($"chi2:{c.First}:{c.Second}", c.Value, c.Purity);
         foreach (var z in ZZ) yield return ($"zz:{z.First}:{z.Second}", z.Value, z.Purity);
         foreach (var p in Purcell) yield return ($"purcell:{p.Qubit}:{p.Resonator}", p.RateGHz, p.Purity);
+        // J_eff is read from the four labelled computational states
+        foreach (var h in EffectiveHamiltonians)
+            yield return ($"jeff:{h.QubitA}:{h.QubitB}", h.JEff, h.Purities.Count == 4 ? h.Purities.Min() : double.NaN);
     }
 }

@@ -41,6 +41,7 @@ public sealed partial class DeviceDocument
             Sweeps = content.Sweeps,
             CompositeDimension = content.CompositeDimension,
             PurityThreshold = content.PurityThreshold,
+            Coherence = content.Coherence,
             _source = content.Source,
             _options = options,
         };
@@ -83,6 +84,9 @@ public sealed partial class DeviceDocument
     public IReadOnlyList<BiasDefinition> Biases { get; init; } = [];
     public IReadOnlyList<OperatingPoint> Points { get; init; } = [];
     public IReadOnlyList<SweepDefinition> Sweeps { get; init; } = [];
+
+    /// <summary>The noise and loss figures of the coherence budget from [coherence] (common-practice defaults where absent).</summary>
+    public Analysis.CoherenceInputs Coherence { get; private init; } = new();
 
     /// <summary>Number of product states in the composite basis (computed before anything large is built).</summary>
     public long CompositeDimension { get; private init; }

@@ -14,4 +14,7 @@ public sealed record DeviceFileContent(
 {
     /// <summary>Below this purity a quantity's labels count as hybridized ([device] purity_threshold; default 0.9).</summary>
     public double PurityThreshold { get; init; } = Analysis.Conventions.DefaultPurityThreshold;
+
+    /// <summary>The [coherence] table's noise and loss figures (defaults where it is absent).</summary>
+    public Analysis.CoherenceInputs Coherence { get; init; } = new();
 }

@@ -14,7 +14,7 @@ namespace LevelDesign.Core.DeviceFiles;
 public static partial class DeviceReader
 {
     public static readonly IReadOnlyList<string> Sections =
-        ["device", "truncation", "capacitance_matrix", "elements", "couplers", "biases", "points", "sweeps"];
+        ["device", "truncation", "capacitance_matrix", "elements", "couplers", "biases", "points", "sweeps", "coherence"];
 
     private static readonly IReadOnlyList<string> DeviceKeys = ["name", "description", "purity_threshold"];
 
@@ -40,7 +40,7 @@ public static partial class DeviceReader
             errors.At(entry, entry.Key, $"unknown top-level key '{entry.Key}'; values belong inside a table such as [device] or [elements.<id>]");
 
         var sections = Sections.ToDictionary(s => s, _ => new List<(string Id, SourceTable Table)>());
-        SourceTable? deviceTable = null, truncationTable = null, matrixTable = null;
+        SourceTable? deviceTable = null, truncationTable = null, matrixTable = null, coherenceTable = null;
         var operatorTables = new Dictionary<string, SourceTable>();
         var seen = new Dictionary<string, SourceTable>();
         foreach (var table in source.Tables)
@@ -59,12 +59,13 @@ public static partial class DeviceReader
                 errors.At(table, table.Name, $"unknown table [{table.Name}]{EditDistance.Suggestion(head, Sections)} (tables: {string.Join(", ", Sections)})");
                 continue;
             }
-            bool single = head is "device" or "truncation" or "capacitance_matrix";
+            bool single = head is "device" or "truncation" or "capacitance_matrix" or "coherence";
             if (single)
             {
                 if (parts.Length != 1) { errors.At(table, table.Name, $"[{head}] takes no id; write [{head}]"); continue; }
                 if (head == "device") deviceTable = table;
                 else if (head == "truncation") truncationTable = table;
+                else if (head == "coherence") coherenceTable = table;
                 else matrixTable = table;
                 continue;
             }
@@ -98,6 +99,7 @@ public static partial class DeviceReader
                 "purity_threshold must be in (0, 1], e.g. 0.9") ?? purityThreshold;
         }
         var truncation = TruncationReader.Read(truncationTable, errors);
+        var coherence = CoherenceReader.Read(coherenceTable, errors);
         var matrix = CapacitanceMatrixReader.Read(matrixTable, errors);
 
         var elementIds = sections["elements"].Select(e => e.Id).ToHashSet();
@@ -192,7 +194,7 @@ public static partial class DeviceReader
         BareSpectrumCheck.Run(device, sections["elements"], errors);
         if (errors.Count == 0) device = GReferenceReader.Fix(device, sections["couplers"], points, biases, errors);
         if (errors.Count > 0) return (null, errors.Items);
-        return (new DeviceFileContent(source, device, biases, points, sweeps, dimension) { PurityThreshold = purityThreshold }, errors.Items);
+        return (new DeviceFileContent(source, device, biases, points, sweeps, dimension) { PurityThreshold = purityThreshold, Coherence = coherence }, errors.Items);
     }
 
     /// <summary>Puts a model-level problem at the table of the element or coupler it names.</summary>

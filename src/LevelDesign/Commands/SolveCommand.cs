@@ -54,6 +54,8 @@ public static class SolveCommand
         Console.Write(json ? TargetReport.Json(document, axis, quantity, value, roots, threshold) : TargetReport.Table(document, axis, quantity, value, roots, threshold));
         if (roots.Any(r => r.Refined && r.IsHybridized(threshold)))
             Console.Error.WriteLine(string.Create(System.Globalization.CultureInfo.InvariantCulture, $"warning: {roots.Count(r => r.Refined && r.IsHybridized(threshold))} root(s) lie inside a hybridized region (purity below {threshold:G3})"));
+        foreach (var r in roots.Where(r => r.Refined))
+            EffectiveCommand.WarnIfIllConditioned(solver.Solve(setup.Resolve([r.Bias]), planLevels), quantity, $"{axis.Path} = {r.Bias:G10}");
         if (!roots.Any(r => r.Refined)) Console.Error.WriteLine($"no root of {quantity} = target between {axis.Start:G6} and {axis.Stop:G6}");
         return ExitCodes.Ok;
     });

@@ -5,7 +5,7 @@ namespace LevelDesign.Commands;
 
 /// <summary>
 /// Reads --target QUANTITY=VALUE: QUANTITY is a derived quantity name ("qa.f01", "qa.anharmonicity",
-/// "chi2:qa:ra", "zz:qa:qb", "purcell:qa:ra"; every one is a frequency) or a sum of them ("qa.f01 - qb.f01"), VALUE a frequency in the file's unit
+/// "chi2:qa:ra", "zz:qa:qb", "purcell:qa:ra", "jeff:qa:qb"; every one is a frequency) or a sum of them ("qa.f01 - qb.f01"), VALUE a frequency in the file's unit
 /// syntax ("5.25 GHz", "5250MHz", "-120kHz"; a bare number is GHz).
 /// </summary>
 public static class TargetArguments

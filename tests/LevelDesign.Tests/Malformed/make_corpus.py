@@ -68,6 +68,8 @@ CASES = {
     "frequency_zero": ("frequency must be > 0", sub('frequency = "7 GHz"', 'frequency = "0 GHz" #!')),
     "fluxonium_missing_el": ("missing required value 'el'", BASE + '\n[elements.f] #!\nkind = "fluxonium"\nec = "1 GHz"\nej = "4 GHz"\n'),
     "inductance_wrong_unit": ("is a capacitance", BASE + '\n[elements.f]\nkind = "fluxonium"\nec = "1 GHz"\nej = "4 GHz"\ninductance = "160 fF" #!\n'),
+    "coherence_bad_temperature": ("expected a temperature", BASE + '\n[coherence]\nq_cap = 2e6\nqubit_temperature = "warm" #!\n'),
+    "coherence_unknown_key": ("unknown key 'q_cpa'", BASE + '\n[coherence]\nq_cpa = 2e6 #!\n'),
 }
 
 for name, (fragment, text) in CASES.items():

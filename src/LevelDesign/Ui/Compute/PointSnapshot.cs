@@ -17,6 +17,12 @@ public sealed record PointSnapshot(
     /// <summary>Warnings about the device at this point (levels cut inside a degenerate multiplet, ...).</summary>
     public IReadOnlyList<string> Warnings { get; init; } = [];
 
+    /// <summary>The coherence budget with the default (common-practice) noise figures, computed with the convergence check; or null.</summary>
+    public IReadOnlyList<CoherenceBudget>? Coherence { get; init; }
+
+    /// <summary>Why the coherence budget could not be estimated, or null.</summary>
+    public string? CoherenceProblem { get; init; }
+
     /// <summary>Convergence of the key values only (see <see cref="ConvergenceSummary"/>), or "not checked".</summary>
     public string ConvergenceText => ConvergenceProblem is not null
         ? "not checked (F3 shifts says why)"

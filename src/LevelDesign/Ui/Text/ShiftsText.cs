@@ -5,12 +5,16 @@ using LevelDesign.Ui.Compute;
 
 namespace LevelDesign.Ui.Text;
 
-/// <summary>The 2χ matrix (qubit rows × resonator columns), the ZZ matrix and per-element transitions, in MHz.</summary>
+/// <summary>
+/// The 2χ matrix (qubit rows × resonator columns), the ZZ and J_eff matrices, per-element transitions in MHz, and the
+/// coherence budget's T1/T2 when it has been estimated.
+/// </summary>
 public static class ShiftsText
 {
     /// <param name="width">Columns of the page: conventions wrap, and columns narrow to their contents.</param>
     public static IReadOnlyList<TextLine> Build(DerivedQuantities q, string where, IReadOnlyList<ConvergenceEntry>? convergence = null, Device? device = null,
-        string? convergenceProblem = null, int width = 100, double purityThreshold = Conventions.DefaultPurityThreshold)
+        string? convergenceProblem = null, int width = 100, IReadOnlyList<CoherenceBudget>? coherence = null,
+        double purityThreshold = Conventions.DefaultPurityThreshold)
     {
         var lines = new List<TextLine>();
         lines.AddRange(Wrapped($"At {where}; all in MHz", width, heading: true));
@@ -28,6 +32,18 @@ public static class ShiftsText
         var qubits = q.ZZ.SelectMany(p => new[] { p.First, p.Second }).Distinct().ToList();
         lines.AddRange(Matrix(qubits, qubits, q.ZZ, symmetric: true, purityThreshold));
 
+        if (q.EffectiveHamiltonians.Count > 0)
+        {
+            lines.Add(new TextLine(""));
+            lines.Add(new TextLine("J_eff  effective exchange", Heading: true));
+            lines.AddRange(Wrapped("J_eff = Re⟨10|H_eff|01⟩ of the least-action effective Hamiltonian (others in 0); * = ill-conditioned " +
+                $"(a computational state below {BlockDiagonalisation.DefaultThreshold} on the computational states)", width));
+            var pairs = q.EffectiveHamiltonians.Select(h => new PairValue(h.QubitA, h.QubitB, h.JEff)).ToList();
+            var ids = pairs.SelectMany(p => new[] { p.First, p.Second }).Distinct().ToList();
+            var flagged = q.EffectiveHamiltonians.Where(h => h.IllConditioned).Select(h => (h.QubitA, h.QubitB)).ToHashSet();
+            lines.AddRange(Matrix(ids, ids, pairs, symmetric: true, purityThreshold, (r, c) => flagged.Contains((r, c)) || flagged.Contains((c, r))));
+        }
+
         lines.Add(new TextLine(""));
         lines.AddRange(Transitions(q, width, purityThreshold));
         if (q.Purcell.Count > 0)
@@ -38,6 +54,7 @@ public static class ShiftsText
             foreach (var p in q.Purcell)
                 lines.AddRange(Wrapped($"  {p.Qubit} via {p.Resonator}: γ = {Numbers.MHz(p.RateGHz, 6)} MHz, T1 limit {T1(p.T1LimitSeconds)}{(p.Purity < purityThreshold ? " !" : "")}", width));
         }
+        if (coherence is { Count: > 0 }) lines.AddRange(Coherence(coherence, width));
         if (convergence is not null && device is not null) lines.AddRange(Convergence(convergence, device, width));
         if (convergenceProblem is not null)
         {
@@ -65,6 +82,23 @@ public static class ShiftsText
         }
     }
 
+    /// <summary>T1, T_φ, T2 and the limiting channel of each qubit, with the default noise figures.</summary>
+    private static IEnumerable<TextLine> Coherence(IReadOnlyList<CoherenceBudget> budgets, int width)
+    {
+        yield return new TextLine("");
+        foreach (var line in Wrapped("Coherence (model estimates; confirm by measurement)", width, heading: true)) yield return line;
+        foreach (var line in Wrapped("noise and loss figures from [coherence] in the file or common-practice defaults; `leveldesign coherence` shows every channel", width))
+            yield return line;
+        int idWidth = Math.Max(7, budgets.Max(b => b.Qubit.Length));
+        yield return new TextLine($"  {"qubit".PadRight(idWidth)} {"T1 µs",9} {"T2 µs",9}  limited by", Heading: true);
+        foreach (var b in budgets)
+            foreach (var line in Wrapped($"  {b.Qubit.PadRight(idWidth)} {Micro(b.T1Seconds),9} {Micro(b.T2Seconds),9}  {b.DominantT2?.Name ?? "—"}", width))
+                yield return line;
+    }
+
+    private static string Micro(double seconds) =>
+        double.IsPositiveInfinity(seconds) ? "∞" : double.IsFinite(seconds) ? (seconds * 1e6).ToString("G4", CultureInfo.InvariantCulture) : "n/a";
+
     /// <summary>Each key value's change when every cutoff is raised, in kHz; the other flagged values on one line.</summary>
     private static IEnumerable<TextLine> Convergence(IReadOnlyList<ConvergenceEntry> entries, Device device, int width)
     {
@@ -86,7 +120,7 @@ public static class ShiftsText
     /// fit a narrow page. Ids longer than the row-name column are cut with "…".
     /// </summary>
     private static IEnumerable<TextLine> Matrix(IReadOnlyList<string> rows, IReadOnlyList<string> columns, IReadOnlyList<PairValue> values, bool symmetric,
-        double purityThreshold)
+        double purityThreshold, Func<string, string, bool>? marked = null)
     {
         if (rows.Count == 0 || columns.Count == 0)
         {
@@ -97,7 +131,7 @@ public static class ShiftsText
         {
             if (symmetric && r == c) return "·";
             var v = values.FirstOrDefault(p => (p.First == r && p.Second == c) || (symmetric && p.First == c && p.Second == r));
-            return v is null ? "" : Numbers.MHz(v.Value, 4) + (v.Purity < purityThreshold ? "!" : "");
+            return v is null ? "" : Numbers.MHz(v.Value, 4) + (v.Purity < purityThreshold ? "!" : "") + (marked?.Invoke(r, c) == true ? "*" : "");
         }
         int cellWidth = Math.Min(12, 2 + Math.Max(columns.Max(c => Cut(c).Length), rows.SelectMany(r => columns.Select(c => Cell(r, c).Length)).Max()));
         yield return new TextLine("  " + new string(' ', 8) + string.Concat(columns.Select(c => Cut(c).PadLeft(cellWidth))));

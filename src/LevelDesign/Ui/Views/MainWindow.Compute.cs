@@ -13,6 +13,7 @@ public sealed partial class MainWindow
     private void StartPointCompute(Device device)
     {
         var (generation, token) = _pointJobs.Begin();
+        var coherenceInputs = _session.Document?.Coherence;
         _computing = true;
         Task.Run(() =>
         {
@@ -21,7 +22,7 @@ public sealed partial class MainWindow
                 string eigen = NativeEigen() ? "native" : "managed";
                 var quick = PointComputer.Compute(device, checkConvergence: false, token);
                 _scheduler.Post(() => ApplyPoint(generation, quick, eigen, final: false));
-                var full = PointComputer.Compute(device, checkConvergence: true, token);
+                var full = PointComputer.Compute(device, checkConvergence: true, token, coherenceInputs);
                 _scheduler.Post(() => ApplyPoint(generation, full, eigen, final: true));
             }
             catch (OperationCanceledException) { }
@@ -281,6 +282,7 @@ public sealed partial class MainWindow
             case Page.Shifts:
                 _page.SetLines(shown is null ? [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")]
                     : ShiftsText.Build(shown.Quantities, Where(), _snapshot?.Convergence, _snapshot?.Spectrum.Device, _snapshot?.ConvergenceProblem, width,
+                        ReferenceEquals(shown, _snapshot) ? _snapshot?.Coherence : null,
                         _session.Document?.PurityThreshold ?? Core.Analysis.Conventions.DefaultPurityThreshold));
                 break;
             case Page.Help:
