@@ -43,7 +43,7 @@ public static class CrossingReport
             var (_, parameter) = AxisUnitText.Parameter(document, axis.Path, c.Bias);
             string near = rows[i].NearestPoint is string n ? $"{n} ({rows[i].Distance!.Value.ToString("G4", Inv)} {unit} away)" : "";
             string edge = c.Refined ? "" : "  (at the bracket edge: not refined)";
-            b.AppendLine(string.Create(Inv, $"{i + 1,3}  {BareStateText.Of(ids, c.StateA),-14} {BareStateText.Of(ids, c.StateB),-14} {c.Bias,16:G8} {parameter,12:G8} {c.GapGHz * 1e3,11:0.0000} {c.Purity,7:0.0000}  {near}{edge}"));
+            b.AppendLine(string.Create(Inv, $"{i + 1,3}  {Core.Presentation.StateNames.Of(ids, c.StateA),-14} {Core.Presentation.StateNames.Of(ids, c.StateB),-14} {c.Bias,16:G8} {parameter,12:G8} {c.GapGHz * 1e3,11:0.0000} {c.Purity,7:0.0000}  {near}{edge}"));
         }
         return b.ToString();
     }
@@ -58,7 +58,7 @@ public static class CrossingReport
         {
             var c = rows[i].Crossing;
             var (_, parameter) = AxisUnitText.Parameter(document, axis.Path, c.Bias);
-            b.AppendLine(string.Join(",", (i + 1).ToString(Inv), SpectrumFormatter.Csv(BareStateText.Of(ids, c.StateA)), SpectrumFormatter.Csv(BareStateText.Of(ids, c.StateB)),
+            b.AppendLine(string.Join(",", (i + 1).ToString(Inv), SpectrumFormatter.Csv(Core.Presentation.StateNames.Of(ids, c.StateA)), SpectrumFormatter.Csv(Core.Presentation.StateNames.Of(ids, c.StateB)),
                 SpectrumFormatter.Csv(c.LabelA), SpectrumFormatter.Csv(c.LabelB), SpectrumFormatter.CsvNumber(c.Bias), SpectrumFormatter.CsvNumber(parameter),
                 SpectrumFormatter.CsvNumber(c.GapGHz * 1e3), SpectrumFormatter.CsvNumber(c.Purity), c.Refined ? "1" : "0",
                 SpectrumFormatter.Csv(rows[i].NearestPoint ?? ""), rows[i].Distance is double d ? SpectrumFormatter.CsvNumber(d) : ""));
@@ -77,8 +77,8 @@ public static class CrossingReport
             list.Add(new JsonObject
             {
                 ["rank"] = i + 1,
-                ["state_a"] = BareStateText.Of(ids, c.StateA),
-                ["state_b"] = BareStateText.Of(ids, c.StateB),
+                ["state_a"] = Core.Presentation.StateNames.Of(ids, c.StateA),
+                ["state_b"] = Core.Presentation.StateNames.Of(ids, c.StateB),
                 ["label_a"] = c.LabelA,
                 ["label_b"] = c.LabelB,
                 ["bias"] = JsonValues.Number(c.Bias),
