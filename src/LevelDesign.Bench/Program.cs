@@ -21,7 +21,7 @@ var plan = new SweepPlan([axis]);
     var raised = device with { Truncation = ReferenceDevice.Build(8, 7).Truncation };
     var raisedQ = DerivedQuantities.From(solver.Solve(raised)).Named();
     var p = solver.Prepare(device);
-    Console.WriteLine($"composite dimension {p.Basis.Dimension}, dressed states per point {DeviceSolver.DefaultDressedCount(p.Basis)}, stored entries {p.Hamiltonian.StoredEntries}");
+    Console.WriteLine($"composite dimension {p.Basis.Dimension}, dressed states per point {solver.DefaultCount(p)}, stored entries {p.Hamiltonian.StoredEntries}");
     foreach (string name in new[] { "zz:qa:qb", "chi2:qa:ra", "chi2:qb:rb" })
         Console.WriteLine($"  {name} = {baseQ[name] * 1e6:F3} kHz; change when raised to 8 levels / 7 excitations: {(raisedQ[name] - baseQ[name]) * 1e6:F4} kHz");
 }
@@ -150,7 +150,7 @@ if (args.Contains("--sweeps-only")) return;
 var problems = new List<CompositeProblem>();
 var prepSolver = new DeviceSolver();
 double prepare = Seconds(() => { for (int i = 0; i < axis.Count; i++) problems.Add(prepSolver.Prepare(resolve([SweepGrid.Value(axis, i)]))); });
-int n = problems[0].Basis.Dimension, k = DeviceSolver.DefaultDressedCount(problems[0].Basis);
+int n = problems[0].Basis.Dimension, k = prepSolver.DefaultCount(problems[0]);
 double EigenOnly(IEigenSolver eigen, IEnumerable<CompositeProblem> set)
 {
     double seconds = 0;

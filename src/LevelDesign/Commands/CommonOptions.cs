@@ -24,5 +24,11 @@ public static class CommonOptions
         Description = "compute even when the composite matrix is estimated not to fit in memory (same as allow_large = true in [truncation])",
     };
 
+    public static Option<string?> States() => new("--states")
+    {
+        Description = "which states to compute: auto (default), neighbours, excitations:N, below:ENERGY, or quantity names " +
+            "(zz, chi2, zz:A:B, chi2:Q:R, Q.anharmonicity) separated by commas",
+    };
+
     public static Option<int?> Levels() => new("--levels") { Description = "number of dressed states to report" };
 }

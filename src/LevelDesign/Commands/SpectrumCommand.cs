@@ -16,24 +16,31 @@ public static class SpectrumCommand
         var json = CommonOptions.Json();
         var csv = CommonOptions.Csv();
         var allowLarge = CommonOptions.AllowLarge();
+        var states = CommonOptions.States();
         var command = new Command("spectrum", "dressed states (label, energy, purity, components) and derived quantities at one bias point")
-            { file, at, point, levels, json, csv, allowLarge };
+            { file, at, point, levels, states, json, csv, allowLarge };
         command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(at), parse.GetValue(point), parse.GetValue(levels),
-            parse.GetValue(json), parse.GetValue(csv), parse.GetValue(allowLarge)));
+            parse.GetValue(json), parse.GetValue(csv), parse.GetValue(allowLarge), parse.GetValue(states)));
         return command;
     }
 
-    public static int Run(string path, string[]? at, string? point, int? levels, bool json, bool csv, bool allowLarge)
+    public static int Run(string path, string[]? at, string? point, int? levels, bool json, bool csv, bool allowLarge, string? states = null)
     {
         if (json && csv) { Console.Error.WriteLine("choose one of --json and --csv"); return ExitCodes.InvalidInput; }
         if (levels is < 1) { Console.Error.WriteLine("--levels must be at least 1"); return ExitCodes.InvalidInput; }
+        var selection = StateSelection.Auto;
+        if (states is not null && !StateSelection.TryParse(states, out selection, out string stateError))
+        {
+            Console.Error.WriteLine($"--states {stateError}");
+            return ExitCodes.InvalidInput;
+        }
         var document = DeviceInput.Load(path, allowLarge);
         if (document is null) return ExitCodes.InvalidInput;
         var device = DeviceInput.Resolve(document, point, at, out var applied);
         if (device is null) return ExitCodes.InvalidInput;
         try
         {
-            var (spectrum, shown) = Compute(new DeviceSolver(), device, levels);
+            var (spectrum, shown) = Compute(new DeviceSolver { Selection = selection }, device, levels);
             if (json) Console.WriteLine(JsonValues.Write(SpectrumFormatter.Report(device.Name, spectrum, shown, applied)));
             else if (csv) Console.Write(SpectrumFormatter.StatesCsv(spectrum, shown));
             else Console.Write(SpectrumFormatter.Table(device.Name, spectrum, shown));
@@ -46,15 +53,15 @@ public static class SpectrumCommand
     }
 
     /// <summary>
-    /// Solves for enough states to derive every quantity (all states up to two excitations), or more when asked,
-    /// and returns how many to show.
+    /// Solves for the states the solver's selection needs (by default all states up to two excitations, or the
+    /// neighbours' states of a large module), or more when asked, and returns how many to show.
     /// </summary>
     public static (DressedSpectrum Spectrum, int Shown) Compute(DeviceSolver solver, Core.Model.Device device, int? levels)
     {
         var problem = solver.Prepare(device);
-        int needed = DeviceSolver.DefaultDressedCount(problem.Basis);
-        int count = Math.Min(problem.Basis.Dimension, Math.Max(needed, levels ?? 0));
-        var spectrum = solver.Solve(problem, count);
+        var selected = solver.Select(problem);
+        if (levels > selected.Count) selected = selected with { Count = Math.Min(problem.Basis.Dimension, levels.Value) };
+        var spectrum = solver.Solve(problem, selected);
         return (spectrum, Math.Min(levels ?? spectrum.Count, spectrum.Count));
     }
 }
