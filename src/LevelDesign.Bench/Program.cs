@@ -42,6 +42,16 @@ double Seconds(Action action)
 
 SweepResult Sweep(SweepOptions options) => SweepRunner.RunAsync(resolve, plan, options).GetAwaiter().GetResult();
 
+if (Array.IndexOf(args, "--write-line") is int at and >= 0 && at + 2 < args.Length)
+{
+    File.WriteAllText(args[at + 2], Scale.LineToml(int.Parse(args[at + 1]), 4));
+    return;
+}
+if (args.Contains("--scale"))
+{
+    Scale.Run(args.Contains("--with-dense"));
+    return;
+}
 if (args.Contains("--loop"))
 {
     // serial sweeps to attach a sampling profiler to (dotnet-trace collect -- dotnet LevelDesign.Bench.dll --loop)
