@@ -8,7 +8,8 @@ namespace LevelDesign.Bench;
 
 /// <summary>
 /// Scale mode (--scale): module-sized devices, one point each with the default states, in process. Per size: product
-/// states, non-zeros, states computed, preparation and solve time, largest residual, memory, and the largest
+/// states, non-zeros, states computed, preparation and solve time (wall) and processor time of both (all threads; less
+/// disturbed by other work on a shared machine), largest residual, memory, and the largest
 /// |E(iterative) − E(dense)| where a dense solve is feasible (up to 1,500 states; 4,400 with --with-dense).
 /// Whole commands are timed separately (docs/performance.md).
 /// </summary>
@@ -27,18 +28,20 @@ internal static class Scale
             ("3×3 lattice, ≤4 exc", File("devices/lattice3x3.toml", 4)),
         };
         new DeviceSolver().Solve(Line(2, 3));   // compile before timing
-        Console.WriteLine($"{"module",-22} {"states",8} {"non-zeros",10} {"computed",8} {"prepare s",9} {"solve s",8} {"residual",9} {"alloc MB",9} {"peak MB",8}  dense agreement");
+        Console.WriteLine($"{"module",-22} {"states",8} {"non-zeros",10} {"computed",8} {"prepare s",9} {"solve s",8} {"cpu s",7} {"residual",9} {"alloc MB",9} {"peak MB",8}  dense agreement");
         foreach (var (name, device) in cases)
         {
             GC.Collect();
             long allocated = GC.GetTotalAllocatedBytes(precise: true);
             var solver = new DeviceSolver();
+            var cpu = Process.GetCurrentProcess().TotalProcessorTime;
             var clock = Stopwatch.StartNew();
             var problem = solver.Prepare(device);
             double prepare = clock.Elapsed.TotalSeconds;
             clock.Restart();
             var spectrum = solver.Solve(problem);
             double solve = clock.Elapsed.TotalSeconds;
+            double cpuSeconds = (Process.GetCurrentProcess().TotalProcessorTime - cpu).TotalSeconds;
             double allocMb = (GC.GetTotalAllocatedBytes(precise: true) - allocated) / 1048576.0;
             double peakMb = Process.GetCurrentProcess().PeakWorkingSet64 / 1048576.0;
             int nonZeros = problem.Hamiltonian.StoredEntries * 2 - problem.Basis.Dimension;
@@ -50,7 +53,7 @@ internal static class Scale
                 double worst = spectrum.Energies.Zip(dense.Energies, (a, b) => Math.Abs(a - b)).Max();
                 agreement = $"{worst:E1} GHz (dense {clock.Elapsed.TotalSeconds:F2} s, {dense.SolverName})";
             }
-            Console.WriteLine($"{name,-22} {problem.Basis.Dimension,8:N0} {nonZeros,10:N0} {spectrum.Count,8} {prepare,9:F2} {solve,8:F2} {spectrum.MaxResidual,9:E1} {allocMb,9:F0} {peakMb,8:F0}  {agreement}");
+            Console.WriteLine($"{name,-22} {problem.Basis.Dimension,8:N0} {nonZeros,10:N0} {spectrum.Count,8} {prepare,9:F2} {solve,8:F2} {cpuSeconds,7:F2} {spectrum.MaxResidual,9:E1} {allocMb,9:F0} {peakMb,8:F0}  {agreement}");
             Console.WriteLine($"{"",22} {spectrum.SolverName}; {spectrum.Selection?.Description}");
         }
     }
@@ -62,7 +65,7 @@ internal static class Scale
         return document.Device with { Truncation = document.Device.Truncation with { MaxExcitations = maxExcitations } };
     }
 
-    /// <summary>An n-qubit line like devices/line4.toml (qubits alternating low/high, a tunable coupler per edge, a resonator each).</summary>
+    /// <summary>An n-qubit line like devices/line4.toml (qubits alternating low/high, a tunable coupler per edge, a resonator each, exchange couplings).</summary>
     public static Device Line(int qubits, int maxExcitations)
     {
         var result = DeviceDocument.Parse(LineToml(qubits, maxExcitations), $"line{qubits}.toml", new DeviceLoadOptions(AllowLarge: true));
@@ -78,12 +81,12 @@ internal static class Scale
             toml.Append($"[elements.q{q}x]\nkind = \"tunable_transmon\"\nec = \"{(q % 2 == 0 ? 215 - q : 205 + q)} MHz\"\n");
             toml.Append($"ej_sum = \"{(q % 2 == 0 ? 19.0 - 0.2 * q : 16.0 - 0.2 * q)} GHz\"\nasymmetry = 0.3\nflux = 0.0\n");
             toml.Append($"[elements.r{q}x]\nkind = \"resonator\"\nfrequency = \"{7.0 + 0.1 * q:0.00} GHz\"\nkappa = \"1 MHz\"\nlevels = 5\n");
-            toml.Append($"[couplers.q{q}x_r{q}x]\nkind = \"capacitive\"\nbetween = [\"q{q}x\", \"r{q}x\"]\ng = \"90 MHz\"\n");
+            toml.Append($"[couplers.q{q}x_r{q}x]\nkind = \"exchange\"\nbetween = [\"q{q}x\", \"r{q}x\"]\ng = \"90 MHz\"\n");
             if (q == qubits - 1) continue;
             toml.Append($"[elements.c{q}x]\nkind = \"tunable_transmon\"\nec = \"120 MHz\"\nej_sum = \"{44 + q} GHz\"\nasymmetry = 0.0\nflux = 0.0\n");
             foreach (int end in new[] { q, q + 1 })
-                toml.Append($"[couplers.q{end}x_c{q}x]\nkind = \"capacitive\"\nbetween = [\"q{end}x\", \"c{q}x\"]\ng = \"100 MHz\"\n");
-            toml.Append($"[couplers.q{q}x_q{q + 1}x]\nkind = \"capacitive\"\nbetween = [\"q{q}x\", \"q{q + 1}x\"]\ng = \"7 MHz\"\n");
+                toml.Append($"[couplers.q{end}x_c{q}x]\nkind = \"exchange\"\nbetween = [\"q{end}x\", \"c{q}x\"]\ng = \"100 MHz\"\n");
+            toml.Append($"[couplers.q{q}x_q{q + 1}x]\nkind = \"exchange\"\nbetween = [\"q{q}x\", \"q{q + 1}x\"]\ng = \"7 MHz\"\n");
         }
         return toml.ToString();
     }

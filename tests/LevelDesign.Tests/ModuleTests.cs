@@ -60,20 +60,20 @@ public sealed class ModuleTests
     }
 
     [Fact]
-    public void Reduced_lattice_by_default_computes_the_neighbours_and_says_so()
+    public void Large_module_by_default_computes_the_neighbours_states_only()
     {
-        var run = Executable.Run("spectrum", ExampleDevices.Path("lattice3x3.toml"), "--json");
-        Assert.True(run.ExitCode == 0, run.ToString());
-        var json = JsonNode.Parse(run.Stdout)!;
-        var computed = json["computed"]!;
-        Assert.Contains("neighbouring", (string)computed["selection"]!);
-        Assert.Contains("Davidson", (string)computed["solver"]!);
-        Assert.InRange((double)computed["max_residual_ghz"]!, 0, PointEigenSolveLimit);
-        // only neighbouring pairs, each with a value
-        var zz = json["derived"]!["zz"]!.AsArray();
-        Assert.Equal(12, zz.Count);
-        Assert.All(zz, z => Assert.True(double.IsFinite((double)z!["zz_ghz"]!)));
-        Assert.Equal(9, json["derived"]!["dispersive_shifts"]!.AsArray().Count);
+        // The lattice at 3 excitations (5,456 states): prepared, not solved. Every state up to two excitations would be
+        // 496 eigenpairs; the neighbours need those up to the highest neighbouring pair or second excitation.
+        var document = Load("lattice3x3.toml");
+        var device = document.Device with { Truncation = document.Device.Truncation with { MaxExcitations = 3 } };
+        var problem = new DeviceSolver().Prepare(device);
+        var selected = StateSelection.Auto.Resolve(problem);
+        Assert.Contains("neighbouring", selected.Description);
+        Assert.True(StateSelection.TryParse("excitations:2", out var manifold, out _));
+        int all = manifold.Resolve(problem).Count;
+        Assert.True(all > StateSelection.AutoManifoldLimit);
+        Assert.InRange(selected.Count, 31 + 12, all / 4);   // ground, 30 single excitations, the pairs; far fewer than all
+        Assert.Equal(12 + 9, selected.Pairs!.Count);   // twelve edges, nine qubit–own-resonator pairs
     }
 
     [Fact]
@@ -86,7 +86,13 @@ public sealed class ModuleTests
         Assert.Equal("ra", (string)chi!["resonator"]!);
         Assert.True(double.IsFinite((double)chi["chi2_ghz"]!));
         Assert.Single(json["derived"]!["zz"]!.AsArray());
-        Assert.Equal("chi2:qa:ra, zz:qa:qb", (string)json["computed"]!["selection"]!);
+        var computed = json["computed"]!;
+        Assert.Equal("chi2:qa:ra, zz:qa:qb", (string)computed["selection"]!);
+        Assert.Contains("Davidson", (string)computed["solver"]!);   // 1,365 states: the sparse path
+        Assert.InRange((double)computed["max_residual_ghz"]!, 0, 1e-5);
+
+        var table = Executable.Run("spectrum", ExampleDevices.Path("line4.toml"), "--levels", "3");
+        Assert.Contains("largest residual ‖Hx − Ex‖", table.Stdout);
 
         var bad = Executable.Run("spectrum", ExampleDevices.Path("line4.toml"), "--states", "zz:qa:nowhere");
         Assert.Equal(3, bad.ExitCode);
@@ -94,5 +100,4 @@ public sealed class ModuleTests
         Assert.DoesNotContain("   at ", bad.Stderr);
     }
 
-    private const double PointEigenSolveLimit = 1e-5;
 }

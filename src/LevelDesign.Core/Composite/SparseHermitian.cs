@@ -86,26 +86,30 @@ public sealed class SparseHermitian
         int n = Dimension, count = values.Length;
         var worst = new double[count];
         var options = new ParallelOptions { MaxDegreeOfParallelism = (long)_lower.Length * count > 4_000_000 ? Environment.ProcessorCount : 1 };
-        Parallel.For(0, count, options, () => new Complex[n], (k, _, y) =>
+        var rows = _pattern.SlotRow;
+        var columns = _pattern.SlotColumn;
+        Parallel.For(0, count, options, () => (new Complex[n], new Complex[n]), (k, _, work) =>
         {
+            var (y, x) = work;
+            // the column as complex numbers once, so the product below is one plain pass over the stored entries
+            if (realVectors is not null) for (int j = 0; j < n; j++) x[j] = realVectors[k * n + j];
+            else Array.Copy(complexVectors!, k * n, x, 0, n);
             Array.Clear(y);
-            int offset = k * n;
-            Complex X(int j) => realVectors is not null ? realVectors[offset + j] : complexVectors![offset + j];
             for (int slot = 0; slot < _lower.Length; slot++)
             {
-                int row = _pattern.SlotRow[slot], col = _pattern.SlotColumn[slot];
+                int row = rows[slot], col = columns[slot];
                 var v = _lower[slot];
-                y[row] += v * X(col);
-                if (row != col) y[col] += Complex.Conjugate(v) * X(row);
+                y[row] += v * x[col];
+                if (row != col) y[col] += Complex.Conjugate(v) * x[row];
             }
             double sum = 0;
             for (int j = 0; j < n; j++)
             {
-                var r = y[j] - values[k] * X(j);
+                var r = y[j] - values[k] * x[j];
                 sum += r.Real * r.Real + r.Imaginary * r.Imaginary;
             }
             worst[k] = Math.Sqrt(sum);
-            return y;
+            return work;
         }, _ => { });
         return count == 0 ? 0 : worst.Max();
     }
