@@ -14,6 +14,16 @@ var axis = new SweepAxis("c.flux", 0.0, 0.45, 201, []);
 var resolve = ParameterResolver.ForPaths(device, [axis]);
 var plan = new SweepPlan([axis]);
 
+if (Array.IndexOf(args, "--write-line") is int at and >= 0 && at + 2 < args.Length)
+{
+    File.WriteAllText(args[at + 2], Scale.LineToml(int.Parse(args[at + 1]), 4));
+    return;
+}
+if (args.Contains("--scale"))
+{
+    Scale.Run(args.Contains("--with-dense"));
+    return;
+}
 // --- convergence of the cutoffs: ZZ and 2χ when every cutoff is raised
 {
     var solver = new DeviceSolver();
@@ -42,16 +52,6 @@ double Seconds(Action action)
 
 SweepResult Sweep(SweepOptions options) => SweepRunner.RunAsync(resolve, plan, options).GetAwaiter().GetResult();
 
-if (Array.IndexOf(args, "--write-line") is int at and >= 0 && at + 2 < args.Length)
-{
-    File.WriteAllText(args[at + 2], Scale.LineToml(int.Parse(args[at + 1]), 4));
-    return;
-}
-if (args.Contains("--scale"))
-{
-    Scale.Run(args.Contains("--with-dense"));
-    return;
-}
 if (args.Contains("--loop"))
 {
     // serial sweeps to attach a sampling profiler to (dotnet-trace collect -- dotnet LevelDesign.Bench.dll --loop)

@@ -8,8 +8,10 @@ namespace LevelDesign.Core.Composite;
 /// that are real up to a phase per product state (a resonator's charge operator i(a† − a)), go to the sparse block
 /// Davidson solver and never become dense; small ones, truly complex ones and any the iterative solver does not
 /// converge on go to the dense solver, which is refused (with the numbers) when its matrix would not fit. Every result
-/// is checked: the residual ‖Hx − Ex‖ of each returned state on the original sparse matrix, and an iterative result
-/// above <see cref="ResidualLimitGHz"/> is replaced by a dense solve.
+/// carries the largest residual ‖Hx − Ex‖ of its states: measured on the original sparse matrix for dense results and,
+/// with <c>independentCheck</c> (single points), for iterative ones too; otherwise (sweep points) the residual the
+/// iterative solver converged on, on the real-gauged matrix (the same norm: the gauge is a diagonal unitary). An
+/// iterative result above <see cref="ResidualLimitGHz"/> is replaced by a dense solve.
 /// </summary>
 internal static class PointEigenSolve
 {
@@ -24,13 +26,16 @@ internal static class PointEigenSolve
 
     /// <param name="iterative">The caller's Davidson solver (its work arrays are reused); null forces the dense path.</param>
     /// <param name="iterativeMinimumDimension">Below this dimension the dense path is used.</param>
+    /// <param name="independentCheck">Measure an iterative result's residuals again on the original complex matrix (about
+    /// one more sparse product per state: worth it for a single point, not for every point of a sweep).</param>
     public static SolvedPoint Solve(IEigenSolver dense, CompositeProblem problem, int count, BlockDavidson? iterative,
-        int iterativeMinimumDimension, WarmStart? warmStart = null)
+        int iterativeMinimumDimension, WarmStart? warmStart = null, bool independentCheck = true)
     {
         int n = problem.Basis.Dimension;
         count = Math.Min(n, count);
-        if (iterative is not null && n >= iterativeMinimumDimension && TryIterative(iterative, problem, count, warmStart) is SolvedPoint point)
+        if (iterative is not null && n >= iterativeMinimumDimension && TryIterative(iterative, problem, count, warmStart) is SolvedPoint found)
         {
+            var point = independentCheck ? Checked(found) : found with { MaxResidual = iterative.LastMaxResidual };
             if (point.MaxResidual <= ResidualLimitGHz) return point;
             if (!DenseFits(n))
                 throw new InvalidOperationException(
@@ -59,14 +64,14 @@ internal static class PointEigenSolve
         {
             var (guess, columns) = warmStart?.Invoke(problem.Basis, null) ?? (null, 0);
             var result = iterative.TryLowest(h.ToCsrReal(), count, guess, columns);
-            return result is null ? null : Checked(new SolvedPoint(problem, result.Values, result.Vectors, null,
-                $"block Davidson (sparse; projected: {BlockDavidson.ProjectedName})"));
+            return result is null ? null : new SolvedPoint(problem, result.Values, result.Vectors, null,
+                $"block Davidson (sparse; projected: {BlockDavidson.ProjectedName})");
         }
         if (RealGauge.TryFind(n, h.LowerEntries()) is not var (phases, realEntries)) return null;
         var (gaugedGuess, gaugedColumns) = warmStart?.Invoke(problem.Basis, phases) ?? (null, 0);
         var real = iterative.TryLowest(CsrMatrix.FromLowerTriangle(n, realEntries), count, gaugedGuess, gaugedColumns);
-        return real is null ? null : Checked(new SolvedPoint(problem, real.Values, null, RealGauge.RotateBack(phases, real.Vectors, n, count),
-            $"block Davidson (sparse, real gauge; projected: {BlockDavidson.ProjectedName})"));
+        return real is null ? null : new SolvedPoint(problem, real.Values, null, RealGauge.RotateBack(phases, real.Vectors, n, count),
+            $"block Davidson (sparse, real gauge; projected: {BlockDavidson.ProjectedName})");
     }
 
     /// <summary>

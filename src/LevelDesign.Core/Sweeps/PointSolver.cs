@@ -32,8 +32,8 @@ internal sealed class PointSolver
     {
         var problem = _solver.Prepare(device);
         var selected = levels is int k ? SelectedStates.Lowest(Math.Min(k, problem.Basis.Dimension)) : _solver.Select(problem);
-        var point = PointEigenSolve.Solve(_solver.EigenSolver, problem, selected.Count, _iterative, _options.IterativeMinimumDimension, WarmStart)
-            with { Selection = selected };
+        var point = PointEigenSolve.Solve(_solver.EigenSolver, problem, selected.Count, _iterative, _options.IterativeMinimumDimension, WarmStart,
+            independentCheck: false) with { Selection = selected };
         _third = _beforePrevious;
         _beforePrevious = _previous;
         _previous = point;
