@@ -113,7 +113,13 @@ public static class CompositeSizeEstimate
         double[][] energies;
         try
         {
-            energies = device.Elements.Select(e => LevelsWithin(e, device.Truncation, window)).ToArray();
+            // identical elements (a module's repeated qubits) are diagonalised once
+            var solved = new Dictionary<Elements.Element, double[]>();
+            energies = device.Elements.Select(e =>
+            {
+                var key = e with { Id = "" };
+                return solved.TryGetValue(key, out var known) ? known : solved[key] = LevelsWithin(e, device.Truncation, window);
+            }).ToArray();
         }
         catch (Exception ex) when (ex is InvalidOperationException or ArgumentException)
         {
@@ -143,7 +149,7 @@ public static class CompositeSizeEstimate
     /// </summary>
     private static double[] LevelsWithin(Elements.Element e, Truncation t, double window)
     {
-        int levels = t.LevelsOf(e.Id), first = Math.Min(levels, 32);
+        int levels = t.LevelsOf(e.Id), first = Math.Min(levels, 8);
         var s = e.Diagonalise(first, t.BasisSizeOf(e.Id));
         var energies = s.Energies.Select(x => x - s.Energies[0]).ToArray();
         if (first == levels || energies[^1] > window) return energies;

@@ -180,11 +180,14 @@ public static partial class DeviceReader
         if (dimension > limitDimension && !options.AllowLarge && !truncation.AllowLarge)
         {
             double counted = dimension >= long.MaxValue / 2 ? CompositeSizeEstimate.Count(device) : dimension;
+            // the bare-energy window is counted only up to the limit: then all that is known is "more than"
+            bool stopped = dimension < CompositeSizeEstimate.UpperBound(device);
             double gib = CompositeSizeEstimate.PathBytes(counted, device.Couplers.Count, iterativeFrom) / (1L << 30);
-            string need = double.IsFinite(gib) && gib < 1e9 ? $"about {gib:N1} GiB" : "far more memory than any machine has";
+            string need = stopped ? "more than the limit" : double.IsFinite(gib) && gib < 1e9 ? $"about {gib:N1} GiB" : "far more memory than any machine has";
+            string states = stopped ? $"more than {limitDimension:N0}" : CompositeSizeEstimate.CountText(counted);
             var at = truncationTable ?? sections["elements"][0].Table;
             errors.At(at, "truncation",
-                $"the composite space would have {CompositeSizeEstimate.CountText(counted)} states; the sparse eigen solve (matrix, search space and " +
+                $"the composite space would have {states} states; the sparse eigen solve (matrix, search space and " +
                 $"{CompositeSizeEstimate.NominalStates} kept states) would need {need} (limit {options.LimitBytes / (double)(1L << 30):N1} GiB, " +
                 $"about {limitDimension:N0} states for this device); lower 'levels' or set max_excitations / max_bare_energy in [truncation], " +
                 "or override with allow_large = true in [truncation] (command line: --allow-large)");
