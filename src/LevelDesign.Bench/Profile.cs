@@ -25,7 +25,7 @@ internal static class Profile
             sw.Restart();
             var csr = problem.Hamiltonian.ToCsrReal();
             sparse += sw.Elapsed.TotalSeconds;
-            int n = problem.Basis.Dimension, k = DeviceSolver.DefaultDressedCount(problem.Basis);
+            int n = problem.Basis.Dimension, k = solver.DefaultCount(problem);
             double[]? guess = null;
             if (previous is not null)
             {

@@ -14,6 +14,16 @@ var axis = new SweepAxis("c.flux", 0.0, 0.45, 201, []);
 var resolve = ParameterResolver.ForPaths(device, [axis]);
 var plan = new SweepPlan([axis]);
 
+if (Array.IndexOf(args, "--write-line") is int at and >= 0 && at + 2 < args.Length)
+{
+    File.WriteAllText(args[at + 2], Scale.LineToml(int.Parse(args[at + 1]), 4));
+    return;
+}
+if (args.Contains("--scale"))
+{
+    Scale.Run(args.Contains("--with-dense"));
+    return;
+}
 // --- convergence of the cutoffs: ZZ and 2χ when every cutoff is raised
 {
     var solver = new DeviceSolver();
@@ -21,7 +31,7 @@ var plan = new SweepPlan([axis]);
     var raised = device with { Truncation = ReferenceDevice.Build(8, 7).Truncation };
     var raisedQ = DerivedQuantities.From(solver.Solve(raised)).Named();
     var p = solver.Prepare(device);
-    Console.WriteLine($"composite dimension {p.Basis.Dimension}, dressed states per point {DeviceSolver.DefaultDressedCount(p.Basis)}, stored entries {p.Hamiltonian.StoredEntries}");
+    Console.WriteLine($"composite dimension {p.Basis.Dimension}, dressed states per point {solver.DefaultCount(p)}, stored entries {p.Hamiltonian.StoredEntries}");
     foreach (string name in new[] { "zz:qa:qb", "chi2:qa:ra", "chi2:qb:rb" })
         Console.WriteLine($"  {name} = {baseQ[name] * 1e6:F3} kHz; change when raised to 8 levels / 7 excitations: {(raisedQ[name] - baseQ[name]) * 1e6:F4} kHz");
 }
@@ -150,7 +160,7 @@ if (args.Contains("--sweeps-only")) return;
 var problems = new List<CompositeProblem>();
 var prepSolver = new DeviceSolver();
 double prepare = Seconds(() => { for (int i = 0; i < axis.Count; i++) problems.Add(prepSolver.Prepare(resolve([SweepGrid.Value(axis, i)]))); });
-int n = problems[0].Basis.Dimension, k = DeviceSolver.DefaultDressedCount(problems[0].Basis);
+int n = problems[0].Basis.Dimension, k = prepSolver.DefaultCount(problems[0]);
 double EigenOnly(IEigenSolver eigen, IEnumerable<CompositeProblem> set)
 {
     double seconds = 0;

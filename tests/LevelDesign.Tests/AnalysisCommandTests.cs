@@ -18,7 +18,21 @@ public sealed class AnalysisCommandTests
         { "fluxonium.toml", "f_flux", "0.4", "0.6" },
         { "defect.toml", "tls_energy", "5.0GHz", "5.2GHz" },
         { "capmatrix.toml", "qa_flux", "0", "0.4" },
+        { "line4.toml", "cab_flux", "0.15mA", "1.05mA" },
+        { "lattice3x3.toml", "cab_flux", "0.15mA", "1.05mA" },
     };
+
+    /// <summary>
+    /// <see cref="Ranges"/> without the modules: a crossing search refines dozens of candidates by standalone solves,
+    /// minutes on a 4,000-state module on a shared 2-core machine, so it is run on the small devices only.
+    /// </summary>
+    public static TheoryData<string, string, string, string> SmallRanges()
+    {
+        var data = new TheoryData<string, string, string, string>();
+        foreach (var row in Ranges())
+            if ((string)row[0] is not ("line4.toml" or "lattice3x3.toml")) data.Add((string)row[0], (string)row[1], (string)row[2], (string)row[3]);
+        return data;
+    }
 
     [Fact]
     public void EveryDeviceWithABiasIsCovered()
@@ -28,7 +42,7 @@ public sealed class AnalysisCommandTests
             if (DeviceDocument.Load(file).Document!.Biases.Count > 0) Assert.Contains(Path.GetFileName(file), covered);
     }
 
-    private static string Device(string name) => Path.Combine(RepositoryPaths.Devices, name);
+    private static string Device(string name) => ExampleDevices.Path(name);
 
     private static string TargetElement(string name, string bias) =>
         DeviceDocument.Load(Device(name)).Document!.Bias(bias)!.Target.Split('.')[0];
@@ -88,7 +102,7 @@ public sealed class AnalysisCommandTests
     }
 
     [Theory]
-    [MemberData(nameof(Ranges))]
+    [MemberData(nameof(SmallRanges))]
     public void CrossingsJsonIsRankedAndInRange(string name, string bias, string from, string to)
     {
         var run = Executable.Run(["crossings", Device(name), "--vary", $"{bias}={from}:{to}:21", "--json"], TimeSpan.FromMinutes(4));

@@ -8,7 +8,7 @@ public sealed class EndToEndTests
 {
     public static TheoryData<string> Devices() => ExampleDeviceTests.Devices();
 
-    private static string DevicePath(string name) => Path.Combine(RepositoryPaths.Devices, name);
+    private static string DevicePath(string name) => ExampleDevices.Path(name);
 
     [Theory]
     [MemberData(nameof(Devices))]

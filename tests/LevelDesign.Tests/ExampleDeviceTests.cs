@@ -27,7 +27,7 @@ public sealed class ExampleDeviceTests
     [MemberData(nameof(Devices))]
     public void LoadsAndComputes(string name)
     {
-        var result = DeviceDocument.Load(Path.Combine(RepositoryPaths.Devices, name));
+        var result = DeviceDocument.Load(ExampleDevices.Path(name));
         Assert.True(result.Ok, string.Join("\n", result.Errors));
         var spectrum = new DeviceSolver().Solve(result.Document!.Device);
         Assert.Equal(0, spectrum.Energies[0]);

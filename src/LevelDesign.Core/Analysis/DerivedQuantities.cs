@@ -57,12 +57,13 @@ public sealed class DerivedQuantities
             for (int r = 0; r < elements.Count; r++)
             {
                 if (elements[r] is not Resonator resonator) continue;
+                if (!s.ReportsPair(q, r)) continue;   // a selection that names pairs computed only their states
                 chi.Add(new PairValue(elements[q].Id, elements[r].Id, ExchangeShift(s, q, r), ExchangePurity(s, q, r)));
                 if (resonator.Kappa is double kappa)
                     purcell.Add(new PurcellEstimate(elements[q].Id, elements[r].Id, kappa, ExcitedWeight(s, q, r), s.PurityOfExcitation((q, 1))));
             }
             for (int p = q + 1; p < elements.Count; p++)
-                if (elements[p].IsQubitLike) zz.Add(new PairValue(elements[q].Id, elements[p].Id, ExchangeShift(s, q, p), ExchangePurity(s, q, p)));
+                if (elements[p].IsQubitLike && s.ReportsPair(q, p)) zz.Add(new PairValue(elements[q].Id, elements[p].Id, ExchangeShift(s, q, p), ExchangePurity(s, q, p)));
         }
         return new DerivedQuantities(transitions, chi, zz, purcell) { EffectiveHamiltonians = BlockDiagonalisation.ForCoupledPairs(s) };
     }

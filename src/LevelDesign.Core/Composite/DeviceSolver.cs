@@ -55,46 +55,46 @@ public sealed class DeviceSolver
         return _structures[key] = new BasisStructure(energies, t.MaxExcitations, null);
     }
 
-    public DressedSpectrum Solve(Device device, int? dressedCount = null) => Solve(Prepare(device), dressedCount);
-
-    public DressedSpectrum Solve(CompositeProblem problem, int? dressedCount = null)
-    {
-        int n = problem.Basis.Dimension;
-        int k = Math.Min(n, dressedCount ?? DefaultDressedCount(problem.Basis));
-        var h = problem.Hamiltonian;
-        if (h.IsReal)
-        {
-            var result = EigenSolver.LowestReal(h.ToDenseReal(), n, k);
-            return Finish(problem, result.Values, result.Vectors, null, false);
-        }
-        var complex = EigenSolver.LowestComplex(h.ToDenseComplex(), n, k);
-        return Finish(problem, complex.Values, null, complex.Vectors, true);
-    }
-
-    internal DressedSpectrum Finish(CompositeProblem problem, double[] values, double[]? realVectors, Complex[]? complexVectors, bool isComplex)
-    {
-        int n = problem.Basis.Dimension, k = values.Length;
-        var weights = new double[n * k];
-        if (realVectors is not null)
-            for (int i = 0; i < weights.Length; i++) weights[i] = realVectors[i] * realVectors[i];
-        else
-            for (int i = 0; i < weights.Length; i++) weights[i] = complexVectors![i].Real * complexVectors[i].Real + complexVectors[i].Imaginary * complexVectors[i].Imaginary;
-        var labels = Labeller.Label(weights, n, k);
-        return new DressedSpectrum(problem.Device, problem.Bare, problem.Couplers, problem.Basis, values, weights,
-            complexVectors, realVectors, labels, EigenSolver.Name, isComplex);
-    }
+    /// <summary>What <see cref="Solve(CompositeProblem, int?)"/> computes when no count is given.</summary>
+    public StateSelection Selection { get; init; } = StateSelection.Auto;
 
     /// <summary>
-    /// Enough dressed states to contain every product state with up to two excitations (needed for 2χ, ZZ and
-    /// anharmonicity), plus those lying below the highest of them, plus a small margin.
+    /// From this dimension on, a single point is solved by the sparse iterative path (cold start) instead of densely.
+    /// Measured (docs/performance.md): on 447–492 states the dense solve is as fast; from about a thousand states on
+    /// the iterative one wins and the gap grows as D² (4,364 states: dense 26 s, iterative well under a second).
     /// </summary>
-    public static int DefaultDressedCount(CompositeBasis basis)
+    public int IterativeMinimumDimension { get; init; } = DefaultIterativeMinimumDimension;
+
+    public const int DefaultIterativeMinimumDimension = 800;
+
+    /// <summary>The states <see cref="Selection"/> asks for at this point.</summary>
+    public SelectedStates Select(CompositeProblem problem) => Selection.Resolve(problem);
+
+    /// <summary>How many eigenpairs <see cref="Selection"/> needs at this point.</summary>
+    public int DefaultCount(CompositeProblem problem) => Select(problem).Count;
+
+    public DressedSpectrum Solve(Device device, int? dressedCount = null) => Solve(Prepare(device), dressedCount);
+
+    /// <summary>The lowest <paramref name="dressedCount"/> states, or those <see cref="Selection"/> asks for.</summary>
+    public DressedSpectrum Solve(CompositeProblem problem, int? dressedCount = null) =>
+        Solve(problem, dressedCount is int k ? SelectedStates.Lowest(Math.Min(k, problem.Basis.Dimension)) : Select(problem));
+
+    public DressedSpectrum Solve(CompositeProblem problem, SelectedStates selected)
     {
-        double highest = 0;
-        for (int i = 0; i < basis.Dimension; i++)
-            if (basis.States[i].Sum() <= 2) highest = Math.Max(highest, basis.BareEnergies[i]);
-        int count = 0;
-        for (int i = 0; i < basis.Dimension; i++) if (basis.BareEnergies[i] <= highest + 1e-9) count++;
-        return Math.Min(basis.Dimension, count + 4);
+        var point = SolvePoint(problem, selected.Count);
+        return Finish(point, selected);
+    }
+
+    /// <summary>One standalone point's eigenpairs (no warm start, so it does not depend on any other point).</summary>
+    internal SolvedPoint SolvePoint(CompositeProblem problem, int count) =>
+        PointEigenSolve.Solve(EigenSolver, problem, count, new BlockDavidson(), IterativeMinimumDimension);
+
+    private static DressedSpectrum Finish(SolvedPoint point, SelectedStates selected)
+    {
+        var problem = point.Problem;
+        var weights = point.Weights();
+        var labels = Labeller.Label(weights, point.Dimension, point.Count);
+        return new DressedSpectrum(problem.Device, problem.Bare, problem.Couplers, problem.Basis, point.Values, weights,
+            point.ComplexVectors, point.RealVectors, labels, point.SolverName, point.IsComplex) { MaxResidual = point.MaxResidual, Selection = selected };
     }
 }

@@ -79,6 +79,15 @@ public sealed class DressedSpectrum
     /// <summary>True when the Hamiltonian was complex Hermitian (solved with the complex path).</summary>
     public bool IsComplex { get; }
 
+    /// <summary>Largest residual ‖Hx − Ex‖ (GHz) of the computed states on the sparse matrix; NaN when not measured.</summary>
+    public double MaxResidual { get; init; } = double.NaN;
+
+    /// <summary>What was asked for (e.g. "every state up to 2 excitations"); null when a sweep or caller chose a count.</summary>
+    public SelectedStates? Selection { get; init; }
+
+    /// <summary>Whether ZZ / 2χ of this element pair is reported: every pair unless the selection named pairs.</summary>
+    public bool ReportsPair(int a, int b) => Selection?.Pairs is not { } pairs || pairs.Contains((Math.Min(a, b), Math.Max(a, b)));
+
     public int Count => Energies.Length;
     public int Dimension => Basis.Dimension;
 

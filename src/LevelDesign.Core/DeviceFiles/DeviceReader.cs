@@ -1,4 +1,5 @@
 using System.Text.RegularExpressions;
+using LevelDesign.Core.Composite;
 using LevelDesign.Core.Couplers;
 using LevelDesign.Core.DeviceFiles.Source;
 using LevelDesign.Core.Elements;
@@ -179,15 +180,24 @@ public static partial class DeviceReader
             if (SweepReader.Read(id, table, errors, device, biasMap) is SweepDefinition s) sweeps.Add(s);
         if (errors.Count > 0) return (null, errors.Items);
 
-        long limitDimension = CompositeSizeEstimate.MaxDimension(options.LimitBytes);
+        // the path a point of this size takes (dense when small, sparse iterative when large) and what it needs
+        const int iterativeFrom = DeviceSolver.DefaultIterativeMinimumDimension;
+        long limitDimension = CompositeSizeEstimate.MaxDimension(options.LimitBytes, device.Couplers.Count, iterativeFrom);
         long dimension = CompositeSizeEstimate.Dimension(device, limitDimension);
         if (dimension > limitDimension && !options.AllowLarge && !truncation.AllowLarge)
         {
-            double gib = CompositeSizeEstimate.DenseBytes(dimension) / (double)(1L << 30);
+            double counted = dimension >= long.MaxValue / 2 ? CompositeSizeEstimate.Count(device) : dimension;
+            // the bare-energy window is counted only up to the limit: then all that is known is "more than"
+            bool stopped = dimension < CompositeSizeEstimate.UpperBound(device);
+            double gib = CompositeSizeEstimate.PathBytes(counted, device.Couplers.Count, iterativeFrom) / (1L << 30);
+            string need = stopped ? "more than the limit" : double.IsFinite(gib) && gib < 1e9 ? $"about {gib:N1} GiB" : "far more memory than any machine has";
+            string states = stopped ? $"more than {limitDimension:N0}" : CompositeSizeEstimate.CountText(counted);
             var at = truncationTable ?? sections["elements"][0].Table;
             errors.At(at, "truncation",
-                $"the composite space would have about {dimension:N0} states, a dense matrix of {gib:N1} GiB (limit {options.LimitBytes / (double)(1L << 30):N1} GiB); " +
-                "lower 'levels' or set max_excitations / max_bare_energy in [truncation], or override with allow_large = true in [truncation] (command line: --allow-large)");
+                $"the composite space would have {states} states; the sparse eigen solve (matrix, search space and " +
+                $"{CompositeSizeEstimate.NominalStates} kept states) would need {need} (limit {options.LimitBytes / (double)(1L << 30):N1} GiB, " +
+                $"about {limitDimension:N0} states for this device); lower 'levels' or set max_excitations / max_bare_energy in [truncation], " +
+                "or override with allow_large = true in [truncation] (command line: --allow-large)");
             return (null, errors.Items);
         }
         // after the size guard, so a device refused for its size is refused at once

@@ -48,6 +48,9 @@ public sealed class BlockDavidson
     /// <summary>Iterations used by the last successful call (for benchmarks).</summary>
     public int LastIterations { get; private set; }
 
+    /// <summary>The largest ‖A x − θ x‖ of the states returned by the last successful call.</summary>
+    public double LastMaxResidual { get; private set; }
+
 
     /// <param name="guess">Optional start vectors, column-major n×<paramref name="guessColumns"/> (need not be orthonormal).</param>
     public RealEigenResult? TryLowest(CsrMatrix a, int count, double[]? guess = null, int guessColumns = 0)
@@ -81,11 +84,14 @@ public sealed class BlockDavidson
             FormRitzVectors(space, eig, 0, judged);
 
             unconverged.Clear();
+            double worst = 0;
             for (int c = 0; c < judged; c++)
             {
                 double theta = eig.Values[c];
                 TensorPrimitives.MultiplyAdd(_ritz.AsSpan(c * n, n), -theta, _ritzProduct.AsSpan(c * n, n), _residual);
-                if (Math.Sqrt(TensorPrimitives.Dot(_residual, _residual)) <= ResidualTolerance) continue;
+                double norm = Math.Sqrt(TensorPrimitives.Dot(_residual, _residual));
+                worst = Math.Max(worst, norm);
+                if (norm <= ResidualTolerance) continue;
                 Precondition(a.Diagonal, theta, _residual, _ritz.AsSpan(c * n, n), _corrections.AsSpan(unconverged.Count * n, n));
                 unconverged.Add(c);
             }
@@ -96,6 +102,7 @@ public sealed class BlockDavidson
                 var vectors = _ritz.AsSpan(0, n * count).ToArray();
                 EigenvectorPhase.Normalize(vectors, n, count);
                 LastIterations = iteration;
+                LastMaxResidual = worst;
                 return new RealEigenResult(eig.Values.AsSpan(0, count).ToArray(), vectors, n);
             }
 

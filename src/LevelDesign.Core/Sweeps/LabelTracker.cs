@@ -191,5 +191,5 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
 
     private static DressedSpectrum Build(SolvedPoint point, double[] weights, DressedLabel[] labels) =>
         new(point.Problem.Device, point.Problem.Bare, point.Problem.Couplers, point.Problem.Basis, point.Values, weights,
-            point.ComplexVectors, point.RealVectors, labels, point.SolverName, point.IsComplex);
+            point.ComplexVectors, point.RealVectors, labels, point.SolverName, point.IsComplex) { MaxResidual = point.MaxResidual, Selection = point.Selection };
 }

@@ -7,11 +7,10 @@ using LevelDesign.Core.Model;
 namespace LevelDesign.Core.Sweeps;
 
 /// <summary>
-/// Solves consecutive points of one contiguous stretch of a sweep. Real matrices, and complex ones that are real up
-/// to a phase per product state, go to the sparse iterative solver warm-started from the previous points' vectors
-/// (mapped by product state when the basis structure differs, e.g. under an energy cutoff); when it does not
-/// converge, the device is small, or the matrix is truly complex, the dense solver of the shared
-/// <see cref="DeviceSolver"/> is used. Not thread-safe: one per chunk.
+/// Solves consecutive points of one contiguous stretch of a sweep by <see cref="PointEigenSolve"/>: the sparse iterative
+/// solver warm-started from the previous points' vectors (mapped by product state when the basis structure differs,
+/// e.g. under an energy cutoff), the dense solver of the shared <see cref="DeviceSolver"/> for small or truly complex
+/// matrices and as the checked fallback. Not thread-safe: one per chunk.
 /// </summary>
 internal sealed class PointSolver
 {
@@ -32,33 +31,13 @@ internal sealed class PointSolver
     public SolvedPoint Solve(Device device, int? levels)
     {
         var problem = _solver.Prepare(device);
-        int n = problem.Basis.Dimension;
-        int count = Math.Min(n, levels ?? DeviceSolver.DefaultDressedCount(problem.Basis));
-        SolvedPoint? point = _iterative is not null && n >= _options.IterativeMinimumDimension ? TryIterative(_iterative, problem, count) : null;
-        // complex matrices that are real up to phases are solved in their real gauge here too (about 3× faster)
-        point ??= GaugedDenseSolve.Solve(_solver.EigenSolver, problem, count);
+        var selected = levels is int k ? SelectedStates.Lowest(Math.Min(k, problem.Basis.Dimension)) : _solver.Select(problem);
+        var point = PointEigenSolve.Solve(_solver.EigenSolver, problem, selected.Count, _iterative, _options.IterativeMinimumDimension, WarmStart,
+            independentCheck: false) with { Selection = selected };
         _third = _beforePrevious;
         _beforePrevious = _previous;
         _previous = point;
         return point;
-    }
-
-    private SolvedPoint? TryIterative(BlockDavidson iterative, CompositeProblem problem, int count)
-    {
-        int n = problem.Basis.Dimension;
-        var h = problem.Hamiltonian;
-        if (h.IsReal)
-        {
-            var (guess, columns) = WarmStart(problem.Basis, null);
-            var result = iterative.TryLowest(h.ToCsrReal(), count, guess, columns);
-            return result is null ? null : new SolvedPoint(problem, result.Values, result.Vectors, null,
-                $"block Davidson (sparse; projected: {BlockDavidson.ProjectedName})");
-        }
-        if (RealGauge.TryFind(n, h.LowerEntries()) is not var (phases, realEntries)) return null;
-        var (gaugedGuess, gaugedColumns) = WarmStart(problem.Basis, phases);
-        var real = iterative.TryLowest(CsrMatrix.FromLowerTriangle(n, realEntries), count, gaugedGuess, gaugedColumns);
-        return real is null ? null : new SolvedPoint(problem, real.Values, null, RealGauge.RotateBack(phases, real.Vectors, n, count),
-            $"block Davidson (sparse, real gauge; projected: {BlockDavidson.ProjectedName})");
     }
 
     /// <summary>

@@ -35,13 +35,13 @@ internal sealed class SeparationSampler
     public SeparationSample FromSweepPoint(double bias, DressedSpectrum spectrum) =>
         Reduce(bias, spectrum.Energies, spectrum.Weights, spectrum.Basis, exact: false);
 
-    /// <summary>The dense solve at this bias (cached).</summary>
+    /// <summary>The standalone solve at this bias (cached): dense, or cold iterative for a large module.</summary>
     public SeparationSample At(double bias) => _solved.GetOrAdd(bias, b => new Lazy<SeparationSample>(() => Solve(b))).Value;
 
     private SeparationSample Solve(double bias)
     {
         var problem = _solver.Prepare(_resolve(bias));
-        var point = GaugedDenseSolve.Solve(_solver.EigenSolver, problem, _count);
+        var point = _solver.SolvePoint(problem, _count);
         Interlocked.Increment(ref _solves);
         return Reduce(bias, point.Values, point.Weights(), problem.Basis, exact: true);
     }

@@ -44,8 +44,8 @@ public static class TargetSolver
             cancellation.ThrowIfCancellationRequested();
             int nearer = Math.Abs(bias - x[i]) <= Math.Abs(bias - x[i + 1]) ? i : i + 1;
             var problem = solver.Prepare(resolve([bias]));
-            // a dense solve, so a refinement point does not depend on the one before it
-            var point = GaugedDenseSolve.Solve(solver.EigenSolver, problem, levels ?? DeviceSolver.DefaultDressedCount(problem.Basis));
+            // a standalone solve (dense, or cold iterative for a large module), so a refinement point does not depend on the one before it
+            var point = solver.SolvePoint(problem, levels ?? solver.DefaultCount(problem));
             var reference = ScanPoint(nearer);
             var (spectrum, _) = new LabelTracker(labels, options, point.Count)
                 .Next(point, LabelTracker.Inputs(labels, point, reference), reference, scan.Points[nearer].Spectrum);

@@ -39,4 +39,10 @@ public static class CommonOptions
 
     /// <summary>--levels means something different to each command, so each gives its own description.</summary>
     public static Option<int?> Levels(string description) => new("--levels") { Description = description };
+
+    public static Option<string?> States() => new("--states")
+    {
+        Description = "which states to compute: auto (default), neighbours, excitations:N, below:ENERGY, or quantity names " +
+            "(zz, chi2, zz:A:B, chi2:Q:R, Q.anharmonicity) separated by commas",
+    };
 }

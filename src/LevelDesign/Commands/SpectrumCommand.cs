@@ -18,25 +18,33 @@ public static class SpectrumCommand
         var csv = CommonOptions.Csv();
         var allowLarge = CommonOptions.AllowLarge();
         var purity = CommonOptions.Purity("flag derived quantities read from states less pure than this");
+        var states = CommonOptions.States();
         var command = new Command("spectrum", "dressed states (label, energy, purity, components) and derived quantities at one bias point")
-            { file, at, point, levels, json, csv, allowLarge, purity };
+            { file, at, point, levels, states, json, csv, allowLarge, purity };
         command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(at), parse.GetValue(point), parse.GetValue(levels),
-            parse.GetValue(json), parse.GetValue(csv), parse.GetValue(allowLarge), parse.GetValue(purity)));
+            parse.GetValue(json), parse.GetValue(csv), parse.GetValue(allowLarge), parse.GetValue(purity), parse.GetValue(states)));
         return command;
     }
 
-    public static int Run(string path, string[]? at, string? point, int? levels, bool json, bool csv, bool allowLarge, double? purity = null)
+    public static int Run(string path, string[]? at, string? point, int? levels, bool json, bool csv, bool allowLarge, double? purity = null,
+        string? states = null)
     {
         if (purity is double p && !(p > 0 && p <= 1)) { Console.Error.WriteLine($"--purity {p}: give a purity in (0, 1], e.g. 0.9"); return ExitCodes.InvalidInput; }
         if (json && csv) { Console.Error.WriteLine("choose one of --json and --csv"); return ExitCodes.InvalidInput; }
         if (levels is < 1) { Console.Error.WriteLine("--levels must be at least 1"); return ExitCodes.InvalidInput; }
+        var selection = StateSelection.Auto;
+        if (states is not null && !StateSelection.TryParse(states, out selection, out string stateError))
+        {
+            Console.Error.WriteLine($"--states {stateError}");
+            return ExitCodes.InvalidInput;
+        }
         var document = DeviceInput.Load(path, allowLarge);
         if (document is null) return ExitCodes.InvalidInput;
         var device = DeviceInput.Resolve(document, point, at, out var applied);
         if (device is null) return ExitCodes.InvalidInput;
         try
         {
-            var (spectrum, shown) = Compute(new DeviceSolver(), device, levels);
+            var (spectrum, shown) = Compute(new DeviceSolver { Selection = selection }, device, levels);
             var warnings = DeviceWarnings.Print(path, device);
             double threshold = purity ?? document.PurityThreshold;
             if (json)
@@ -56,15 +64,15 @@ public static class SpectrumCommand
     }
 
     /// <summary>
-    /// Solves for enough states to derive every quantity (all states up to two excitations), or more when asked,
-    /// and returns how many to show.
+    /// Solves for the states the solver's selection needs (by default all states up to two excitations, or the
+    /// neighbours' states of a large module), or more when asked, and returns how many to show.
     /// </summary>
     public static (DressedSpectrum Spectrum, int Shown) Compute(DeviceSolver solver, Core.Model.Device device, int? levels)
     {
         var problem = solver.Prepare(device);
-        int needed = DeviceSolver.DefaultDressedCount(problem.Basis);
-        int count = Math.Min(problem.Basis.Dimension, Math.Max(needed, levels ?? 0));
-        var spectrum = solver.Solve(problem, count);
+        var selected = solver.Select(problem);
+        if (levels > selected.Count) selected = selected with { Count = Math.Min(problem.Basis.Dimension, levels.Value) };
+        var spectrum = solver.Solve(problem, selected);
         return (spectrum, Math.Min(levels ?? spectrum.Count, spectrum.Count));
     }
 }

@@ -42,17 +42,20 @@ public static class SweepCommand
         var csv = CommonOptions.Csv();
         var output = new Option<string?>("--out") { Description = "write the result to this file instead of stdout" };
         var allowLarge = CommonOptions.AllowLarge();
+        var states = CommonOptions.States();
         var command = new Command("sweep", "the labelled spectrum at every point of a bias sweep (parallel); progress on stderr, Ctrl-C keeps finished points")
-            { file, vary, link, sweep, at, point, levels, labels, purity, json, csv, output, allowLarge };
+            { file, vary, link, sweep, at, point, levels, states, labels, purity, json, csv, output, allowLarge };
         command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(vary), parse.GetValue(link), parse.GetValue(sweep), parse.GetValue(at),
             parse.GetValue(point), parse.GetValue(levels), parse.GetValue(labels), parse.GetValue(purity), parse.GetValue(json), parse.GetValue(csv),
-            parse.GetValue(output), parse.GetValue(allowLarge)));
+            parse.GetValue(output), parse.GetValue(allowLarge), parse.GetValue(states)));
         return command;
     }
 
     public static int Run(string path, string[]? vary, string[]? links, string? sweepName, string[]? at, string? point, int? levels,
-        string? labels, double? purity, bool json, bool csv, string? output, bool allowLarge) => CommandGuard.Run(path, () =>
+        string? labels, double? purity, bool json, bool csv, string? output, bool allowLarge, string? states = null) => CommandGuard.Run(path, () =>
     {
+        var selection = StateSelection.Auto;
+        if (states is not null && !StateSelection.TryParse(states, out selection, out string stateError)) throw new UsageException($"--states {stateError}");
         CommandGuard.OneFormat(json, csv);
         var mode = CommandGuard.LabelMode(labels);
         if (purity is double p && !(p > 0 && p <= 1)) throw new UsageException($"--purity {p}: give a purity in (0, 1], e.g. 0.9");
@@ -60,7 +63,7 @@ public static class SweepCommand
         var document = CommandGuard.Load(path, allowLarge);
         double threshold = CommonOptions.PurityThreshold(purity, document);
         var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 2);
-        var solver = new DeviceSolver();
+        var solver = new DeviceSolver { Selection = selection };
         var (planLevels, shown) = SweepExecution.Levels(setup, levels, solver);
         var result = SweepExecution.Run(setup, mode, planLevels, solver);
         var table = SweepTable.From(result, shown, threshold);

@@ -42,7 +42,7 @@ public static class SweepExecution
     {
         if (levels is < 1) throw new UsageException("--levels must be at least 1");
         var problem = solver.Prepare(setup.Resolve(setup.Axes.Select(a => a.Start).ToArray()));
-        int needed = DeviceSolver.DefaultDressedCount(problem.Basis);
+        int needed = solver.DefaultCount(problem);
         // the default count carries 4 states of margin at the top, where states mix with ones not computed
         int judged = Math.Max(1, needed - 4);
         int solved = levels is int l && l > judged ? Math.Min(l, problem.Basis.Dimension) : needed;

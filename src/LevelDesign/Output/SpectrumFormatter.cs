@@ -131,6 +131,7 @@ public static class SpectrumFormatter
         o["couplings"] = Couplings(s);
         o["conventions"] = Conventions();
         o["eigensolver"] = EigenSolvers.Describe();
+        o["computed"] = Computed(s);
         o["limits_of_model"] = Core.Analysis.Conventions.LimitsOfModel;
         return o;
     }
@@ -143,6 +144,7 @@ public static class SpectrumFormatter
         var b = new StringBuilder();
         var d = DerivedQuantities.From(s);
         b.AppendLine($"device {deviceName}: {s.Dimension} product states, {s.Count} dressed states computed");
+        b.AppendLine(ComputedText(s));
         b.AppendLine();
         b.AppendLine("Dressed states (" + Core.Analysis.Conventions.Energies + ")");
         b.AppendLine($"{"#",3}  {"label",-16} {"energy GHz",12} {"purity",7}  components");
@@ -191,6 +193,18 @@ public static class SpectrumFormatter
         b.AppendLine(Core.Analysis.Conventions.LimitsOfModel);
         return b.ToString();
     }
+
+    /// <summary>What was computed and how, with the residual check of every computed state.</summary>
+    public static JsonObject Computed(DressedSpectrum s) => new()
+    {
+        ["states"] = s.Count,
+        ["selection"] = s.Selection?.Description,
+        ["solver"] = s.SolverName,
+        ["max_residual_ghz"] = JsonValues.Number(s.MaxResidual),
+    };
+
+    public static string ComputedText(DressedSpectrum s) => string.Create(Inv,
+        $"computed: {s.Selection?.Description ?? $"the lowest {s.Count} states"}; {s.SolverName}; largest residual ‖Hx − Ex‖ {s.MaxResidual:0.0e+0} GHz");
 
     private static string Num(double x, double scale, string format) =>
         double.IsFinite(x) ? (x * scale).ToString(format, Inv) : "—";

@@ -1,11 +1,17 @@
 using System.Numerics;
-using LevelDesign.Core.Composite;
+namespace LevelDesign.Core.Composite;
 
-namespace LevelDesign.Core.Sweeps;
-
-/// <summary>One point's eigenpairs before labelling: absolute eigenvalues and the vectors in the product basis.</summary>
+/// <summary>
+/// One point's eigenpairs before labelling: absolute eigenvalues and the vectors in the product basis, and the
+/// largest residual ‖Hx − Ex‖ (GHz) of any of them, measured on the original (ungauged) sparse matrix.
+/// </summary>
 internal sealed record SolvedPoint(CompositeProblem Problem, double[] Values, double[]? RealVectors, Complex[]? ComplexVectors, string SolverName)
 {
+    public double MaxResidual { get; init; } = double.NaN;
+
+    /// <summary>What the point was asked to compute (null: a count chosen by the caller).</summary>
+    public SelectedStates? Selection { get; init; }
+
     public int Count => Values.Length;
     public int Dimension => Problem.Basis.Dimension;
     public bool IsComplex => ComplexVectors is not null;

@@ -9,7 +9,7 @@ namespace LevelDesign.Core.Tests.Sweeps;
 /// results in the Eigen tests): the same energies, and the same states, i.e. |⟨gauged k|complex k⟩|² = 1 (eigenvectors
 /// are fixed only up to a phase) and equal bare weights |⟨bare j|dressed k⟩|².
 /// </summary>
-public class GaugedDenseSolveTests
+public class PointEigenSolveTests
 {
     [Fact]
     public void Gauged_solve_of_a_complex_matrix_matches_the_complex_solver()
@@ -19,7 +19,7 @@ public class GaugedDenseSolveTests
         Assert.False(problem.Hamiltonian.IsReal);   // qubit charge (imaginary by the phase convention) on resonator phi
         int n = problem.Basis.Dimension, count = 20;
 
-        var gauged = GaugedDenseSolve.Solve(solver.EigenSolver, problem, count);
+        var gauged = PointEigenSolve.Dense(solver.EigenSolver, problem, count);
         var complex = solver.EigenSolver.LowestComplex(problem.Hamiltonian.ToDenseComplex(), n, count);
 
         Assert.Contains("real gauge", gauged.SolverName);
