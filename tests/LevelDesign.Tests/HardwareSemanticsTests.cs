@@ -133,4 +133,15 @@ public sealed class HardwareSemanticsTests
         Assert.Equal(2, bad.ExitCode);
         Assert.Contains("no quantity 'qz.f01'", bad.Stderr);
     }
+
+    [Fact]
+    public void An_unknown_element_in_states_is_an_input_error()
+    {
+        foreach (var args in new[] { new[] { "spectrum", Pair, "--states", "zz:qa:qz" }, new[] { "sweep", Pair, "--vary", "qa_flux=0:0.1:2", "--states", "qx.anharmonicity" } })
+        {
+            var run = Executable.Run(args);
+            Assert.Equal(2, run.ExitCode);
+            Assert.Contains("no element", run.Stderr);
+        }
+    }
 }

@@ -29,6 +29,25 @@ public sealed record StateSelection(string Text)
 
     public static readonly StateSelection Auto = new("auto");
 
+    /// <summary>
+    /// An element named by a quantity of this selection that the device does not have, as a message; null when every name
+    /// is known. Commands check this before computing, so a wrong name is an input error, not a failed computation.
+    /// </summary>
+    public string? UnknownElement(Model.Device device)
+    {
+        if (Text is "auto" or "neighbours" || Text.StartsWith("excitations:", StringComparison.Ordinal) || Text.StartsWith("below:", StringComparison.Ordinal))
+            return null;
+        foreach (string name in Text.Split(','))
+        {
+            var ids = name.Split(':') is [_, var first, var second] ? [first, second]
+                : name.Contains('.') ? new[] { name[..name.IndexOf('.')] } : [];
+            foreach (string id in ids)
+                if (device.IndexOf(id) < 0)
+                    return $"--states {Text}: no element '{id}'{DeviceFiles.EditDistance.Suggestion(id, device.Elements.Select(e => e.Id))} in this device";
+        }
+        return null;
+    }
+
     /// <summary>Reads a selection as written after --states; false with a message naming what is accepted.</summary>
     public static bool TryParse(string text, out StateSelection selection, out string error)
     {

@@ -42,6 +42,7 @@ public static class SpectrumCommand
         if (document is null) return ExitCodes.InvalidInput;
         var device = DeviceInput.Resolve(document, point, at, out var applied);
         if (device is null) return ExitCodes.InvalidInput;
+        if (selection.UnknownElement(device) is string unknown) { Console.Error.WriteLine(unknown); return ExitCodes.InvalidInput; }
         try
         {
             var (spectrum, shown) = Compute(new DeviceSolver { Selection = selection }, device, levels);

@@ -61,6 +61,7 @@ public static class SweepCommand
         if (purity is double p && !(p > 0 && p <= 1)) throw new UsageException($"--purity {p}: give a purity in (0, 1], e.g. 0.9");
         OutputFile.Check(output, path);
         var document = CommandGuard.Load(path, allowLarge);
+        if (selection.UnknownElement(document.Device) is string unknown) throw new UsageException(unknown);
         double threshold = CommonOptions.PurityThreshold(purity, document);
         var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 2);
         var solver = new DeviceSolver { Selection = selection };

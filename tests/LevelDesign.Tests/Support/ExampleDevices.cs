@@ -17,6 +17,14 @@ public static class ExampleDevices
     public const long AffordableDimension = 2_000;
 
     private static readonly string Folder = System.IO.Path.Combine(System.IO.Path.GetTempPath(), $"leveldesign-examples-{Environment.ProcessId}");
+
+    // the reduced copies are removed when the test process ends, so no run leaves them behind
+    static ExampleDevices() => AppDomain.CurrentDomain.ProcessExit += (_, _) =>
+    {
+        try { if (Directory.Exists(Folder)) Directory.Delete(Folder, recursive: true); }
+        catch (IOException) { }
+        catch (UnauthorizedAccessException) { }
+    };
     private static readonly ConcurrentDictionary<string, string> Paths = new();
 
     public static string Path(string name) => Paths.GetOrAdd(name, Make);
