@@ -23,7 +23,7 @@ public static class TruncationWarnings
             int probe = Math.Min(available, kept + 4);
             double[] energies;
             try { energies = element.Diagonalise(probe, device.Truncation.BasisSizeOf(element.Id)).Energies; }
-            catch (Exception e) when (e is ArgumentException or InvalidOperationException) { continue; }
+            catch (Exception e) when (e is not OutOfMemoryException) { continue; }   // a warning never stops a computation
             double spacing = (energies[kept - 1] - energies[0]) / (kept - 1);
             double tolerance = RelativeSplitting * Math.Max(spacing, 1e-12);
             int end = kept;

@@ -47,7 +47,7 @@ internal static class GReferenceReader
                 var opB = Bare(device, at.Apply(device.Element(couplers[i].ElementB), 1), bare).Operator(couplers[i].OperatorB);
                 CouplerResolver.LowestTransitionElement(couplers[i], opA, opB, at.PointName);
             }
-            catch (Exception e) when (e is ArgumentException or InvalidOperationException)
+            catch (Exception e) when (e is not OutOfMemoryException)
             {
                 if (where is not null) errors.At(where, path + ".g", e.Message);
                 else errors.At(table, path + ".g", e.Message);
