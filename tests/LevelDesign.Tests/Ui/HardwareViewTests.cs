@@ -92,4 +92,17 @@ public class HardwareViewTests
         ui.Draw();
         Assert.Contains("qa via ra: γ = 0.004015 MHz, T1 limit 39.6 µs", ui.Screen);
     }
+
+    /// <summary>The README's zero-ZZ search in the UI: the one root lies where |qa1 qb1⟩ is hybridized, and F9 says so.</summary>
+    [Fact]
+    public void F9_marks_a_root_inside_a_hybridized_region()
+    {
+        using var ui = new UiHarness(120, 40, device: "pair.toml");
+        ui.WaitIdle();
+        ui.Press(Key.F9);
+        ui.Replace("zz:qa:qb = 0 by qc_flux 0.7 mA to 0.8 mA");
+        ui.Press(Key.Enter);
+        ui.WaitForScreen("digit applies", 120000);
+        Assert.Contains("! hybridized, purity 0.6", ui.Screen);
+    }
 }

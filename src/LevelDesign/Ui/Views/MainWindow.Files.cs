@@ -240,7 +240,9 @@ public sealed partial class MainWindow
         {
             var root = roots[i];
             string at = BiasText.Format(solvedOn, request.Bias, root.Bias);
-            parts.Add($"[{i + 1}] {at}{(root.Refined ? "" : " (jump, not a root)")}");
+            string note = !root.Refined ? " (jump, not a root)"
+                : root.IsHybridized(solvedOn.PurityThreshold) ? $" ! hybridized, purity {root.Purity.ToString("0.00", System.Globalization.CultureInfo.InvariantCulture)}" : "";
+            parts.Add($"[{i + 1}] {at}{note}");
             offers[(char)('1' + i)] = () => ApplyRoot(request.Bias, root.Bias);
         }
         string more = roots.Count > 9 ? $" (+{roots.Count - 9} more)" : "";
