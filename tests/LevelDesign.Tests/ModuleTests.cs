@@ -95,7 +95,7 @@ public sealed class ModuleTests
         Assert.Contains("largest residual ‖Hx − Ex‖", table.Stdout);
 
         var bad = Executable.Run("spectrum", ExampleDevices.Path("line4.toml"), "--states", "zz:qa:nowhere");
-        Assert.Equal(3, bad.ExitCode);
+        Assert.Equal(2, bad.ExitCode);   // an input error, found before computing
         Assert.Contains("nowhere", bad.Stderr);
         Assert.DoesNotContain("   at ", bad.Stderr);
     }
