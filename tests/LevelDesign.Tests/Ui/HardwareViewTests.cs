@@ -42,17 +42,21 @@ public class HardwareViewTests
         finally { Directory.Delete(folder, true); }
     }
 
-    [Fact]
-    public void F9_takes_a_relative_target()
+    /// <summary>Asks F9 for a target on the demo device and returns the screen with the roots offered.</summary>
+    private static string TargetOffer(string request, int width, int height)
     {
-        using var ui = new UiHarness(100, 30, device: "pair.toml");
+        using var ui = new UiHarness(width, height, device: "pair.toml");
         ui.WaitIdle();
         ui.Press(Key.F9);
-        ui.Replace("qa.f01 - qb.f01 = 700 MHz by qb_flux 0 to 0.3");
+        ui.Replace(request);
         ui.Press(Key.Enter);
         ui.WaitForScreen("digit applies", 120000);
-        Assert.Contains("qa.f01 - qb.f01", ui.Screen);
+        return ui.Screen;
     }
+
+    [Fact]
+    public void F9_takes_a_relative_target() =>
+        Assert.Contains("qa.f01 - qb.f01", TargetOffer("qa.f01 - qb.f01 = 700 MHz by qb_flux 0 to 0.3", 100, 30));
 
     [Fact]
     public void Tab_and_shift_tab_cycle_board_form_and_page()
@@ -95,14 +99,6 @@ public class HardwareViewTests
 
     /// <summary>The README's zero-ZZ search in the UI: the one root lies where |qa1 qb1⟩ is hybridized, and F9 says so.</summary>
     [Fact]
-    public void F9_marks_a_root_inside_a_hybridized_region()
-    {
-        using var ui = new UiHarness(120, 40, device: "pair.toml");
-        ui.WaitIdle();
-        ui.Press(Key.F9);
-        ui.Replace("zz:qa:qb = 0 by qc_flux 0.7 mA to 0.8 mA");
-        ui.Press(Key.Enter);
-        ui.WaitForScreen("digit applies", 120000);
-        Assert.Contains("! hybridized, purity 0.6", ui.Screen);
-    }
+    public void F9_marks_a_root_inside_a_hybridized_region() =>
+        Assert.Contains("! hybridized, purity 0.6", TargetOffer("zz:qa:qb = 0 by qc_flux 0.7 mA to 0.8 mA", 120, 40));
 }
