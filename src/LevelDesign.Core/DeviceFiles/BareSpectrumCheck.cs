@@ -11,14 +11,16 @@ namespace LevelDesign.Core.DeviceFiles;
 /// </summary>
 internal static class BareSpectrumCheck
 {
-    public static void Run(Device device, IReadOnlyList<(string Id, SourceTable Table)> elementTables, ErrorList errors)
+    /// <returns>The spectra solved, by element, for the g conversions that follow (so no element is solved twice).</returns>
+    public static Dictionary<Element, BareSpectrum> Run(Device device, IReadOnlyList<(string Id, SourceTable Table)> elementTables, ErrorList errors)
     {
         var tables = elementTables.ToDictionary(t => t.Id, t => t.Table);
+        var solved = new Dictionary<Element, BareSpectrum>();
         foreach (var element in device.Elements)
         {
             try
             {
-                element.Diagonalise(device.Truncation.LevelsOf(element.Id), device.Truncation.BasisSizeOf(element.Id));
+                solved[element] = element.Diagonalise(device.Truncation.LevelsOf(element.Id), device.Truncation.BasisSizeOf(element.Id));
             }
             catch (Exception e) when (e is not OutOfMemoryException)   // any failure of a bare solve is a located input error, never a crash
             {
@@ -30,5 +32,6 @@ internal static class BareSpectrumCheck
                 else errors.At(table, field, message);
             }
         }
+        return solved;
     }
 }

@@ -201,8 +201,8 @@ public static partial class DeviceReader
             return (null, errors.Items);
         }
         // after the size guard, so a device refused for its size is refused at once
-        BareSpectrumCheck.Run(device, sections["elements"], errors);
-        if (errors.Count == 0) device = GReferenceReader.Fix(device, sections["couplers"], points, biases, errors);
+        var bare = BareSpectrumCheck.Run(device, sections["elements"], errors);
+        if (errors.Count == 0) device = GReferenceReader.Fix(device, sections["couplers"], points, biases, errors, bare);
         if (errors.Count > 0) return (null, errors.Items);
         return (new DeviceFileContent(source, device, biases, points, sweeps, dimension) { PurityThreshold = purityThreshold, Coherence = coherence }, errors.Items);
     }

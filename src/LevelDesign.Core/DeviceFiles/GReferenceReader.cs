@@ -13,13 +13,12 @@ namespace LevelDesign.Core.DeviceFiles;
 internal static class GReferenceReader
 {
     public static Device Fix(Device device, IReadOnlyList<(string Id, SourceTable Table)> couplerTables, IReadOnlyList<OperatingPoint> points,
-        IReadOnlyList<BiasDefinition> biases, ErrorList errors)
+        IReadOnlyList<BiasDefinition> biases, ErrorList errors, Dictionary<Element, BareSpectrum> bare)
     {
         var biased = biases.Select(b => b.Target).ToHashSet();
         device = device.WithGReferencesHere(GReference.ReferencePoint, biased);
         var tables = couplerTables.ToDictionary(t => t.Id, t => t.Table);
         var couplers = device.Couplers.ToArray();
-        var bare = new Dictionary<Element, BareSpectrum?>();
         for (int i = 0; i < couplers.Length; i++)
         {
             if (couplers[i].Strength is not CouplingStrength.TargetG g || !tables.TryGetValue(couplers[i].Id, out var table)) continue;
@@ -63,9 +62,9 @@ internal static class GReferenceReader
         return device;
     }
 
-    private static BareSpectrum Bare(Device device, Element element, Dictionary<Element, BareSpectrum?> cache)
+    private static BareSpectrum Bare(Device device, Element element, Dictionary<Element, BareSpectrum> cache)
     {
-        if (cache.TryGetValue(element, out var found) && found is not null) return found;
+        if (cache.TryGetValue(element, out var found)) return found;
         var spectrum = element.Diagonalise(device.Truncation.LevelsOf(element.Id), device.Truncation.BasisSizeOf(element.Id));
         cache[element] = spectrum;
         return spectrum;
