@@ -38,7 +38,8 @@ public class SpectrumPlotTests
         Assert.Equal(new byte[] { 0x89, 0x50, 0x4E, 0x47 }, bytes[..4]);   // PNG signature
         string text = File.ReadAllText(svg);
         Assert.Contains("q.flux (Φ0)", text);
-        Assert.Contains("|1,0⟩", text);
+        Assert.Contains("q1", text);     // legend: state names, not level tuples
+        Assert.DoesNotContain("|1,0⟩", text);
         Assert.Contains("Limits of the model", text);
         Assert.Contains("MHz", text);   // a crossing annotation
     }
@@ -47,16 +48,42 @@ public class SpectrumPlotTests
     public async Task The_ground_branch_is_left_out_when_energies_are_measured_from_it()
     {
         var (sweep, _) = await TunableQubitAndResonator();
-        string Legend(SpectrumScale scale) => string.Join(",", SpectrumPlot.Build(sweep, levels: 4, scale: scale)
-            .GetPlottables().OfType<ScottPlot.Plottables.Scatter>().Select(p => p.LegendText));
-        Assert.DoesNotContain("|0,0⟩", Legend(SpectrumScale.FromGround));
-        Assert.Contains("|1,0⟩", Legend(SpectrumScale.FromGround));
-        Assert.Contains("|0,0⟩", Legend(SpectrumScale.Energies));   // there the ground's own shift is information
+        string Legend(SpectrumScale scale) => string.Join(",", SpectrumPlot.Build(sweep, levels: 4, scale: scale).Legend.ManualItems.Select(i => i.LabelText));
+        Assert.DoesNotContain("ground", Legend(SpectrumScale.FromGround));
+        Assert.Contains("q1", Legend(SpectrumScale.FromGround));
+        Assert.Contains("ground", Legend(SpectrumScale.Energies));   // there the ground's own shift is information
     }
 
-    [Theory]
-    [InlineData("qa.flux", "qa.flux (Φ0)")]
-    [InlineData("ra.frequency", "ra.frequency (GHz)")]
-    [InlineData("qa.ng", "qa.ng (2e)")]
-    public void Axis_captions_carry_units(string path, string caption) => Assert.Equal(caption, AxisUnits.Caption(path));
+    /// <summary>
+    /// Branches follow energy order, so a branch never jumps: through the qubit–resonator avoided crossing the lowest
+    /// excited branch is continuous (no step larger than the sweep's own slope allows), where a line drawn by label
+    /// would hand over across the gap.
+    /// </summary>
+    [Fact]
+    public async Task Branches_run_smoothly_through_the_avoided_crossing_and_blend_colour_where_states_mix()
+    {
+        var (sweep, _) = await TunableQubitAndResonator();
+        var plot = SpectrumPlot.Build(sweep, levels: 3);
+        var segments = plot.GetPlottables().OfType<ScottPlot.Plottables.Scatter>().ToArray();
+        Assert.NotEmpty(segments);
+        foreach (var s in segments)
+        {
+            var points = s.Data.GetScatterPoints();
+            Assert.Equal(2, points.Count);
+            // f01 of this qubit moves by well under 0.25 GHz per step of 0.5/60 Φ0; a hand-over would jump by the gap
+            Assert.True(Math.Abs(points[1].Y - points[0].Y) < 0.25, $"segment at {points[0].X} jumps {points[1].Y - points[0].Y}");
+        }
+        // two pure characters plus blended segments near the crossing: more distinct colours than characters
+        int colours = segments.Select(s => s.Color.ToHex()).Distinct().Count();
+        Assert.True(colours > plot.Legend.ManualItems.Count, $"{colours} colours for {plot.Legend.ManualItems.Count} characters");
+    }
+
+    [Fact]
+    public void Axis_captions_carry_the_unit_the_file_writes_the_bias_in()
+    {
+        var document = Core.DeviceFiles.DeviceDocument.Demo();
+        Assert.StartsWith("qc_flux (mA)", Core.Presentation.AxisCaption.Of(document, "qc_flux"));
+        Assert.StartsWith("qa_flux (Φ0)", Core.Presentation.AxisCaption.Of(document, "qa_flux"));
+        Assert.Equal("ra.frequency (GHz)", Core.Presentation.AxisCaption.Of(document, "ra.frequency"));
+    }
 }

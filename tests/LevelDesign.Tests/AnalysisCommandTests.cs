@@ -164,8 +164,11 @@ public sealed class AnalysisCommandTests
             Assert.True(run.ExitCode == 0, run.ToString());
             string svg = File.ReadAllText(output);
             Assert.Contains("<svg", svg);
-            Assert.Contains("|1,0⟩", svg);      // the single-excitation branches are drawn
-            Assert.DoesNotContain("|1,1⟩", svg); // the two-excitation ones are not
+            Assert.Contains("q1", svg);          // the single-excitation characters are drawn and named in the legend
+            Assert.Contains("r1", svg);
+            Assert.DoesNotContain("q1 r1", svg);   // the two-excitation ones are not
+            Assert.DoesNotContain("|1,0⟩", svg);   // states are named, not written as level tuples
+            Assert.Contains("q_flux (Φ0)", svg);   // the axis in the unit of the file's bias
         }
         finally
         {
@@ -195,7 +198,7 @@ public sealed class AnalysisCommandTests
         var run = Executable.Run("sweep", Device("pair.toml"), "--vary", "qa_flux=0:0.1:2", "--vary", "qb_flux=0:0.1:3", "--csv", "--levels", "3", "--labels", "order");
         Assert.True(run.ExitCode == 0, run.ToString());
         var rows = run.Stdout.Split('\n', StringSplitOptions.RemoveEmptyEntries).Where(l => !l.StartsWith('#')).ToArray();
-        Assert.Equal(["point", "qa_flux", "qb_flux"], ReferenceCsv.Cells(rows[0])[..3]);
+        Assert.Equal(["point", "qa_flux (Φ0)", "qb_flux (Φ0)"], ReferenceCsv.Cells(rows[0])[..3]);
         Assert.Equal(1 + 6, rows.Length);
     }
 

@@ -127,8 +127,8 @@ public sealed class EndToEndTests
             var lines = File.ReadAllLines(output).Where(l => !l.StartsWith('#')).ToArray();
             Assert.Equal(7, lines.Length);
             var header = ReferenceCsv.Cells(lines[0]);
-            Assert.Equal(["point", "q_flux"], header[..2]);
-            int column = Array.IndexOf(header, "q.f01");
+            Assert.Equal(["point", "q_flux (Φ0)"], header[..2]);   // the unit the file writes the bias in
+            int column = Array.IndexOf(header, "q.f01 (GHz)");
             Assert.True(column > 0, lines[0]);
             // The tunable transmon's f01 falls monotonically from 0 to Φ0/2 (E_J(Φ) falls; Koch et al. 2007).
             var f01 = lines.Skip(1).Select(l => double.Parse(ReferenceCsv.Cells(l)[column], System.Globalization.CultureInfo.InvariantCulture)).ToList();

@@ -33,8 +33,9 @@ public sealed class ZzZeroReferenceTests
             var nearest = roots.MinBy(r => Math.Abs((double)r!["parameter"]!["qc.flux"]! - expected["flux_phi0"]));
             Assert.NotNull(nearest);
             Assert.Equal(expected["flux_phi0"], (double)nearest!["parameter"]!["qc.flux"]!, FluxTolerance);
-            // the same root in the bias's control unit: 2.4 mA per Φ0, so the tolerance scales by the period
-            Assert.Equal(expected["control_a"], (double)nearest["bias"]!, FluxTolerance * 0.0024);
+            // the same root in the bias's control unit as the file writes it (mA): 2.4 mA per Φ0, so the tolerance scales by the period
+            Assert.Equal("mA", (string?)nearest["bias_unit"]);
+            Assert.Equal(expected["control_a"] * 1e3, (double)nearest["bias"]!, FluxTolerance * 2.4);
             Assert.True(Math.Abs((double)nearest["value_ghz"]!) < 1e-9, "ZZ at the root should vanish");
         }
         // and no root that the reference does not have

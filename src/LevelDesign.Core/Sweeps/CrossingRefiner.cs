@@ -122,8 +122,7 @@ internal static class CrossingRefiner
         // a dense solve even when the best sample is a sweep point (solved iteratively)
         var (gap, purity, pairWeight) = sampler.At(bias).Separation(a, b);
         if (!double.IsFinite(gap)) return null;
-        string label(int[] s) => "|" + string.Join(",", s) + "⟩";
         bool interior = bias > lower + 10 * tolerance && bias < upper - 10 * tolerance;
-        return new Crossing(label(states[a]), label(states[b]), states[a], states[b], bias, gap, purity, interior, PairWeight: pairWeight);
+        return new Crossing(Presentation.StateNames.Tuple(states[a]), Presentation.StateNames.Tuple(states[b]), states[a], states[b], bias, gap, purity, interior, PairWeight: pairWeight);
     }
 }

@@ -15,7 +15,7 @@ public sealed record HybridizationMap(IReadOnlyList<string> Labels, IReadOnlyLis
             return k < 0 ? double.NaN : p.Spectrum.Labels[k].Purity;
         }).ToArray()).ToArray();
         var flagged = Enumerable.Range(0, purity.Length).Where(i => purity[i].Any(x => x < threshold)).Select(i => sweep.Points[i].Index).ToArray();
-        return new HybridizationMap(states.Select(SweepTable.LabelText).ToArray(), sweep.Points.Select(p => p.AxisValues).ToArray(),
+        return new HybridizationMap(states.Select(Presentation.StateNames.Tuple).ToArray(), sweep.Points.Select(p => p.AxisValues).ToArray(),
             purity, flagged, threshold);
     }
 }

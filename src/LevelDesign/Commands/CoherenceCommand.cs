@@ -1,8 +1,10 @@
+using LevelDesign.Core.Presentation;
 using System.CommandLine;
 using LevelDesign.Core.Analysis;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Output;
+using LevelDesign.Core.Presentation;
 
 namespace LevelDesign.Commands;
 

@@ -3,7 +3,7 @@ using LevelDesign.Core.Composite;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Core.Units;
-using LevelDesign.Output;
+using LevelDesign.Core.Presentation;
 
 namespace LevelDesign.Commands;
 

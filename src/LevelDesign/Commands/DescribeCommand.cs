@@ -1,6 +1,7 @@
+using LevelDesign.Core.Presentation;
 using System.CommandLine;
 using LevelDesign.Core.Composite;
-using LevelDesign.Output;
+using LevelDesign.Core.Presentation;
 
 namespace LevelDesign.Commands;
 

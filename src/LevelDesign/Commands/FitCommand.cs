@@ -5,7 +5,7 @@ using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Files;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Core.Units;
-using LevelDesign.Output;
+using LevelDesign.Core.Presentation;
 
 namespace LevelDesign.Commands;
 

@@ -1,7 +1,8 @@
+using LevelDesign.Core.Presentation;
 using System.CommandLine;
 using LevelDesign.Core.Analysis;
 using LevelDesign.Core.Composite;
-using LevelDesign.Output;
+using LevelDesign.Core.Presentation;
 
 namespace LevelDesign.Commands;
 

@@ -1,6 +1,7 @@
+using LevelDesign.Core.Presentation;
 using System.CommandLine;
 using LevelDesign.Core.Sweeps;
-using LevelDesign.Output;
+using LevelDesign.Core.Presentation;
 using LevelDesign.Plots;
 
 namespace LevelDesign.Commands;
@@ -59,14 +60,10 @@ public static class PlotCommand
         if (result is null) return ExitCodes.Cancelled;
         // all judged labels when one manifold is picked (its branches may lie above the lowest 12), else the lowest 12
         int shown = levels ?? (manifold is null ? Math.Min(judged, 12) : judged);
-        var plot = SpectrumPlot.Build(result, PlotManifold.Crossings(crossings, manifold), shown,
-            title: $"{document.Device.Name}: spectrum along {setup.Axes[0].Path} ({AxisUnitText.Of(document, setup.Axes[0].Path)}), labels by {(mode == LabelMode.ByCharacter ? "character" : "order")}"
-                   + (manifold is int m ? $", {m}-excitation manifold" : "")
-                   // the legend writes states as level tuples; say which element each position is
-                   + $"; states |{string.Join(",", document.Device.Elements.Select(e => e.Id))}⟩");
-        PlotManifold.Apply(plot, manifold);
+        var plot = SpectrumPlot.Build(result, crossings, shown, document: document, manifold: manifold is int wanted ? e => e == wanted : null,
+            title: $"{document.Device.Name}: spectrum along {setup.Axes[0].Path}, labels by {(mode == LabelMode.ByCharacter ? "character" : "order")}"
+                   + (manifold is int m ? $", {m}-excitation manifold" : "") + "; lines coloured by character, blended where states mix");
         // the caption from the axis name alone cannot know a bias's control unit; say it, and what the bias moves
-        plot.XLabel(XCaption(document, setup.Axes[0]));
         OutputFile.Write(output, () =>
         {
             if (extension == ".svg") SpectrumPlot.SaveSvg(plot, output, w, h);
@@ -75,15 +72,4 @@ public static class PlotCommand
         Console.Error.WriteLine($"wrote {output} ({result.Points.Count} points, {crossings.Count} crossing(s))");
         return ExitCodes.Ok;
     });
-
-    private static string XCaption(Core.DeviceFiles.DeviceDocument document, Core.DeviceFiles.SweepAxis axis)
-    {
-        string unit = AxisUnitText.Of(document, axis.Path);
-        string caption = unit.Length > 0 ? $"{axis.Path} ({unit})" : axis.Path;
-        if (document.Bias(axis.Path) is Core.DeviceFiles.BiasDefinition bias && (bias.Period != 1 || bias.Offset != 0))
-            caption += string.Create(System.Globalization.CultureInfo.InvariantCulture, $";  {bias.Target} = (value − {bias.Offset:G6}) / {bias.Period:G6}");
-        else if (document.Bias(axis.Path) is Core.DeviceFiles.BiasDefinition plain)
-            caption += $" = {plain.Target}";
-        return caption;
-    }
 }

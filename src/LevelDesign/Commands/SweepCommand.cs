@@ -1,9 +1,10 @@
+using LevelDesign.Core.Presentation;
 using System.CommandLine;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Files;
 using LevelDesign.Core.Sweeps;
-using LevelDesign.Output;
+using LevelDesign.Core.Presentation;
 
 namespace LevelDesign.Commands;
 
@@ -70,7 +71,7 @@ public static class SweepCommand
         var table = SweepTable.From(result, shown, threshold);
         int total = SweepGrid.PointCount(result.Plan);
         if (!result.Completed) Console.Error.WriteLine($"cancelled: keeping the {result.Points.Count} of {total} points computed");
-        Write(json ? SweepReport.Json(document, result, table) : SweepReport.Csv(document, result, table), output, result.Points.Count);
+        Write(json ? SweepFiles.Json(document, result, table) : SweepFiles.Csv(document, result, table), output, result.Points.Count);
         int flagged = table.Rows.Count(r => r.LowPurity), ambiguous = table.Rows.Count(r => r.Ambiguous);
         if (flagged > 0 || ambiguous > 0)
             Console.Error.WriteLine($"{flagged} point(s) with a tracked state below purity {table.PurityThreshold}, {ambiguous} with an ambiguous label (columns low_purity, ambiguous)");

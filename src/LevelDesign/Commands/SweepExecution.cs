@@ -1,6 +1,7 @@
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Output;
+using LevelDesign.Core.Presentation;
 
 namespace LevelDesign.Commands;
 

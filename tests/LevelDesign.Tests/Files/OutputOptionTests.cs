@@ -63,7 +63,7 @@ public sealed class OutputOptionTests : IDisposable
         var run = Executable.Run(["sweep", device, .. Small, "--out", fifo]);
         Assert.True(run.ExitCode == 0, run.ToString());
         Assert.True(reader.Wait(TimeSpan.FromSeconds(60)));
-        Assert.StartsWith("# device single", reader.Result);
+        Assert.StartsWith("# LevelDesign sweep of device single", reader.Result);
         Assert.Equal(4, reader.Result.Split('\n').Count(l => l.Length > 0 && !l.StartsWith('#')));   // header and 3 points
         Assert.Equal(Core.Files.FileKind.Fifo, Core.Files.PosixFile.Lstat(fifo).Kind);
         Assert.False(File.Exists(fifo + ".bak"));

@@ -18,7 +18,7 @@ public sealed record CrossingMark(Crossing Crossing, string LabelA, string Label
             int nearest = Enumerable.Range(0, points.Count).MinBy(i => Math.Abs(points[i].AxisValues[0] - c.Bias));
             var spectrum = points[nearest].Spectrum;
             double a = spectrum.EnergyOf(c.StateA.ToArray()), b = spectrum.EnergyOf(c.StateB.ToArray());
-            return new CrossingMark(c, LabelNames.Of(spectrum.Device, c.StateA), LabelNames.Of(spectrum.Device, c.StateB), nearest, 0.5 * (a + b));
+            return new CrossingMark(c, Core.Presentation.StateNames.Of(spectrum.Device, c.StateA), Core.Presentation.StateNames.Of(spectrum.Device, c.StateB), nearest, 0.5 * (a + b));
         }).ToList();
     }
 }

@@ -1,3 +1,4 @@
+using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Commands;
 using LevelDesign.Core.Sweeps;
 

@@ -37,7 +37,7 @@ public sealed class SpectrumSeries
                 int bare = s.Labels[k].BareIndex;
                 int excitations = s.Basis.States[bare].Sum();
                 if (!manifold.Admits(excitations)) continue;
-                string label = LabelNames.OfBare(s, bare);
+                string label = Core.Presentation.StateNames.OfBare(s, bare);
                 if (!byLabel.TryGetValue(label, out var branch))
                 {
                     var values = new double[points.Count];

@@ -6,5 +6,6 @@ namespace LevelDesign.Ui.Export;
 public interface IPlotExporter
 {
     bool Supports(string extension);
-    void Export(SweepResult sweep, IReadOnlyList<Crossing> crossings, string title, string path);
+    /// <param name="manifold">The excitation numbers shown on screen, so the picture shows the same branches.</param>
+    void Export(SweepResult sweep, IReadOnlyList<Crossing> crossings, string title, string path, Core.DeviceFiles.DeviceDocument? document, Predicate<int>? manifold);
 }

@@ -32,9 +32,9 @@ public static class StatesTableText
             var label = spectrum.Labels[k];
             bool low = label.Purity < purityThreshold;
             string mark = (low ? "!" : " ") + (label.Ambiguous ? "?" : " ");
-            string row = $"{mark}{k,2} {TextFit.Cut(LabelNames.OfDressed(spectrum, k), 10),-10} {Numbers.GHz(spectrum.Energies[k]),8} {label.Purity,6:0.000}";
+            string row = $"{mark}{k,2} {TextFit.Cut(Core.Presentation.StateNames.OfDressed(spectrum, k), 10),-10} {Numbers.GHz(spectrum.Energies[k]),8} {label.Purity,6:0.000}";
             var components = label.Components.Where(c => c.Weight >= MinWeight).Take(MaxComponents).ToList();
-            string Text(Core.Labels.Component c) => $"{LabelNames.OfBare(spectrum, c.BareIndex)} {c.Weight:0.00}";
+            string Text(Core.Labels.Component c) => $"{Core.Presentation.StateNames.OfBare(spectrum, c.BareIndex)} {c.Weight:0.00}";
             var all = components.Select(Text).ToList();
             var partners = components.Where(c => c.BareIndex != label.BareIndex).Select(Text).ToList();
             lines.Add(new TextLine(row + Components(all, partners, width - row.Length), Warning: low || label.Ambiguous));

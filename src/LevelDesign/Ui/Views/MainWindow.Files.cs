@@ -1,3 +1,5 @@
+using LevelDesign.Core.Files;
+using LevelDesign.Core.Presentation;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.Eigen;
 using LevelDesign.Core.Sweeps;
@@ -149,16 +151,23 @@ public sealed partial class MainWindow
             {
                 switch (extension)
                 {
-                    case ".csv" or ".json" when _sweep is not null:
-                        TableExport.Sweep(_sweep, path);
+                    case ".csv" or ".json" when _sweep is not null && _session.Document is { } document:
+                        // the same file `leveldesign sweep` writes for this sweep
+                        var table = SweepTable.From(_sweep, SweepTable.ReportedCount(_sweep), document.PurityThreshold);
+                        AtomicFile.Write(path, extension == ".csv" ? SweepFiles.Csv(document, _sweep, table) : SweepFiles.Json(document, _sweep, table));
                         break;
                     case ".csv" or ".json":
-                        TableExport.States(Shown!.Spectrum, Where(), path);
+                        // the same file `leveldesign spectrum --csv/--json` writes for this point
+                        var spectrum = Shown!.Spectrum;
+                        double threshold = _session.Document?.PurityThreshold ?? Core.Analysis.Conventions.DefaultPurityThreshold;
+                        AtomicFile.Write(path, extension == ".csv" ? SpectrumFormatter.StatesCsv(spectrum, spectrum.Count)
+                            : JsonValues.Write(SpectrumFormatter.Report(spectrum.Device.Name, spectrum, spectrum.Count, null, threshold)) + Environment.NewLine);
                         break;
                     case ".svg" or ".png":
                         if (_sweep is null || _sweep.Plan.Axes.Count != 1) return "run a one-axis sweep first (F5); the plot is its spectrum";
                         if (_plots is null || !_plots.Supports(extension)) return "plot export is not available in this build; use .csv or .json";
-                        _plots.Export(_sweep, _crossings.Select(c => c.Crossing).ToList(), $"{_session.Document?.Device.Name}: spectrum along {_sweep.Plan.Axes[0].Path}", path);
+                        _plots.Export(_sweep, _crossings.Select(c => c.Crossing).ToList(), $"{_session.Document?.Device.Name}: spectrum along {_sweep.Plan.Axes[0].Path} ({_manifold.Describe()})",
+                            path, _session.Document, e => _manifold.Admits(e));
                         break;
                     default:
                         return "end the name with .csv, .json, .svg or .png";

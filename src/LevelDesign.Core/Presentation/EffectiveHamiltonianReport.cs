@@ -3,7 +3,7 @@ using System.Text;
 using System.Text.Json.Nodes;
 using LevelDesign.Core.Analysis;
 
-namespace LevelDesign.Output;
+namespace LevelDesign.Core.Presentation;
 
 /// <summary>The effective two-qubit Hamiltonians: Pauli terms, J_eff, ZZ, the 4×4 matrix and the purity of the states used.</summary>
 public static class EffectiveHamiltonianReport

@@ -1,7 +1,7 @@
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Units;
 
-namespace LevelDesign.Commands;
+namespace LevelDesign.Core.DeviceFiles;
 
 /// <summary>
 /// Where a fitted device parameter ("qa.ej_sum", "qa_qb.g") is written in the file ("elements.qa.ej_sum",

@@ -4,7 +4,7 @@ using System.Text;
 using System.Text.Json.Nodes;
 using LevelDesign.Core.Composite;
 
-namespace LevelDesign.Output;
+namespace LevelDesign.Core.Presentation;
 
 /// <summary>⟨i|op|j⟩ between dressed states as a table of magnitudes (with the complex values below) and as JSON.</summary>
 public static class MatrixElementReport
@@ -20,7 +20,7 @@ public static class MatrixElementReport
         var b = new StringBuilder();
         b.AppendLine($"|⟨i|{element}.{op}|j⟩| between dressed states of {s.Device.Name}");
         b.AppendLine(Convention);
-        var labels = states.Select(k => $"{k}:{StateLabels.Text(s, s.Labels[k].BareIndex)}").ToArray();
+        var labels = states.Select(k => $"{k}:{Core.Presentation.StateNames.OfBare(s, s.Labels[k].BareIndex)}").ToArray();
         int width = Math.Max(12, labels.Max(l => l.Length) + 2);
         double scale = 0;
         foreach (var z in m) scale = Math.Max(scale, z.Magnitude);
@@ -68,8 +68,8 @@ public static class MatrixElementReport
             ["states"] = new JsonArray(states.Select(k => (JsonNode)new JsonObject
             {
                 ["index"] = k,
-                ["label"] = StateLabels.Json(s, s.Labels[k].BareIndex),
-                ["text"] = StateLabels.Text(s, s.Labels[k].BareIndex),
+                ["label"] = Core.Presentation.StateNames.Json(s, s.Labels[k].BareIndex),
+                ["text"] = Core.Presentation.StateNames.OfBare(s, s.Labels[k].BareIndex),
                 ["energy_ghz"] = JsonValues.Number(s.Energies[k]),
                 ["purity"] = JsonValues.Number(s.Labels[k].Purity),
             }).ToArray()),

@@ -4,7 +4,7 @@ using System.Text.Json.Nodes;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Sweeps;
 
-namespace LevelDesign.Output;
+namespace LevelDesign.Core.Presentation;
 
 /// <summary>
 /// Crossings found along a sweep, as a table, CSV or JSON: the two labels, the bias of closest approach (in the
@@ -29,21 +29,22 @@ public static class CrossingReport
     public static string Table(DeviceDocument document, SweepAxis axis, IReadOnlyList<Row> rows)
     {
         var ids = document.Device.Elements.Select(e => e.Id).ToArray();
-        string unit = AxisUnitText.Of(document, axis.Path);
-        var (path, _) = AxisUnitText.Parameter(document, axis.Path, 0);
+        var unit = ShownUnit.Of(document, axis.Path);
+        var (path, _) = SweepFiles.ParameterOf(document, axis.Path, 0);
+        var parameterUnit = ShownUnit.Of(document, path);
         var b = new StringBuilder();
-        b.AppendLine($"device {document.Device.Name}: {rows.Count} crossing(s) along {axis.Path} from {axis.Start.ToString("G6", Inv)} to {axis.Stop.ToString("G6", Inv)} {unit}");
+        b.AppendLine($"device {document.Device.Name}: {rows.Count} crossing(s) along {axis.Path} from {unit.Text(axis.Start)} to {unit.Text(axis.Stop)}");
         b.AppendLine("gap = minimum separation of the two dressed states sharing the labels' character (2g_eff at an avoided crossing); purity = the lower of the two there");
         b.AppendLine();
-        string header = $"{"#",3}  {"state A",-14} {"state B",-14} {axis.Path + " " + unit,16} {path,12} {"gap MHz",11} {"purity",7}  nearest point";
+        string header = $"{"#",3}  {"state A",-14} {"state B",-14} {unit.Caption(axis.Path),16} {parameterUnit.Caption(path),14} {"gap MHz",11} {"purity",7}  nearest point";
         b.AppendLine(header);
         for (int i = 0; i < rows.Count; i++)
         {
             var c = rows[i].Crossing;
-            var (_, parameter) = AxisUnitText.Parameter(document, axis.Path, c.Bias);
-            string near = rows[i].NearestPoint is string n ? $"{n} ({rows[i].Distance!.Value.ToString("G4", Inv)} {unit} away)" : "";
+            var (_, parameter) = SweepFiles.ParameterOf(document, axis.Path, c.Bias);
+            string near = rows[i].NearestPoint is string n ? $"{n} ({unit.Text(rows[i].Distance!.Value, 4)} away)" : "";
             string edge = c.Refined ? "" : "  (at the bracket edge: not refined)";
-            b.AppendLine(string.Create(Inv, $"{i + 1,3}  {Core.Presentation.StateNames.Of(ids, c.StateA),-14} {Core.Presentation.StateNames.Of(ids, c.StateB),-14} {c.Bias,16:G8} {parameter,12:G8} {c.GapGHz * 1e3,11:0.0000} {c.Purity,7:0.0000}  {near}{edge}"));
+            b.AppendLine(string.Create(Inv, $"{i + 1,3}  {Core.Presentation.StateNames.Of(ids, c.StateA),-14} {Core.Presentation.StateNames.Of(ids, c.StateB),-14} {unit.ToShown(c.Bias),16:G8} {parameterUnit.ToShown(parameter),14:G8} {c.GapGHz * 1e3,11:0.0000} {c.Purity,7:0.0000}  {near}{edge}"));
         }
         return b.ToString();
     }
@@ -51,17 +52,19 @@ public static class CrossingReport
     public static string Csv(DeviceDocument document, SweepAxis axis, IReadOnlyList<Row> rows)
     {
         var ids = document.Device.Elements.Select(e => e.Id).ToArray();
-        var (path, _) = AxisUnitText.Parameter(document, axis.Path, 0);
-        var b = new StringBuilder($"# bias {axis.Path} in {AxisUnitText.Of(document, axis.Path)}; gap in MHz; ranked by distance to the nearest operating point\n");
-        b.AppendLine($"rank,state_a,state_b,label_a,label_b,{SpectrumFormatter.Csv(axis.Path)},{SpectrumFormatter.Csv(path)},gap_mhz,purity,refined,nearest_point,distance");
+        var (path, _) = SweepFiles.ParameterOf(document, axis.Path, 0);
+        var unit = ShownUnit.Of(document, axis.Path);
+        var parameterUnit = ShownUnit.Of(document, path);
+        var b = new StringBuilder($"# bias {axis.Path} in {(unit.Symbol.Length == 0 ? "plain numbers" : unit.Symbol)}; gap in MHz; ranked by distance to the nearest operating point (in the bias's unit)\n");
+        b.AppendLine($"rank,state_a,state_b,label_a,label_b,{CsvCells.Text(unit.Caption(axis.Path))},{CsvCells.Text(parameterUnit.Caption(path))},gap_mhz,purity,refined,nearest_point,distance");
         for (int i = 0; i < rows.Count; i++)
         {
             var c = rows[i].Crossing;
-            var (_, parameter) = AxisUnitText.Parameter(document, axis.Path, c.Bias);
-            b.AppendLine(string.Join(",", (i + 1).ToString(Inv), SpectrumFormatter.Csv(Core.Presentation.StateNames.Of(ids, c.StateA)), SpectrumFormatter.Csv(Core.Presentation.StateNames.Of(ids, c.StateB)),
-                SpectrumFormatter.Csv(c.LabelA), SpectrumFormatter.Csv(c.LabelB), SpectrumFormatter.CsvNumber(c.Bias), SpectrumFormatter.CsvNumber(parameter),
-                SpectrumFormatter.CsvNumber(c.GapGHz * 1e3), SpectrumFormatter.CsvNumber(c.Purity), c.Refined ? "1" : "0",
-                SpectrumFormatter.Csv(rows[i].NearestPoint ?? ""), rows[i].Distance is double d ? SpectrumFormatter.CsvNumber(d) : ""));
+            var (_, parameter) = SweepFiles.ParameterOf(document, axis.Path, c.Bias);
+            b.AppendLine(string.Join(",", (i + 1).ToString(Inv), CsvCells.Text(Core.Presentation.StateNames.Of(ids, c.StateA)), CsvCells.Text(Core.Presentation.StateNames.Of(ids, c.StateB)),
+                CsvCells.Text(c.LabelA), CsvCells.Text(c.LabelB), unit.Number(c.Bias), parameterUnit.Number(parameter),
+                CsvCells.Number(c.GapGHz * 1e3), CsvCells.Number(c.Purity), c.Refined ? "1" : "0",
+                CsvCells.Text(rows[i].NearestPoint ?? ""), rows[i].Distance is double d ? unit.Number(d) : ""));
         }
         return b.ToString();
     }
@@ -70,10 +73,11 @@ public static class CrossingReport
     {
         var ids = document.Device.Elements.Select(e => e.Id).ToArray();
         var list = new JsonArray();
+        var unit = ShownUnit.Of(document, axis.Path);
         for (int i = 0; i < rows.Count; i++)
         {
             var c = rows[i].Crossing;
-            var (path, parameter) = AxisUnitText.Parameter(document, axis.Path, c.Bias);
+            var (path, parameter) = SweepFiles.ParameterOf(document, axis.Path, c.Bias);
             list.Add(new JsonObject
             {
                 ["rank"] = i + 1,
@@ -81,19 +85,20 @@ public static class CrossingReport
                 ["state_b"] = Core.Presentation.StateNames.Of(ids, c.StateB),
                 ["label_a"] = c.LabelA,
                 ["label_b"] = c.LabelB,
-                ["bias"] = JsonValues.Number(c.Bias),
+                ["bias"] = JsonValues.Number(unit.ToShown(c.Bias)),
+                ["bias_unit"] = unit.Symbol,
                 ["parameter"] = new JsonObject { [path] = JsonValues.Number(parameter) },
                 ["gap_mhz"] = JsonValues.Number(c.GapGHz * 1e3),
                 ["purity"] = JsonValues.Number(c.Purity),
                 ["refined"] = c.Refined,
                 ["nearest_point"] = rows[i].NearestPoint,
-                ["distance"] = rows[i].Distance is double d ? JsonValues.Number(d) : null,
+                ["distance"] = rows[i].Distance is double d ? JsonValues.Number(unit.ToShown(d)) : null,
             });
         }
         return JsonValues.Write(new JsonObject
         {
             ["device"] = document.Device.Name,
-            ["axis"] = AxisUnitText.Describe(document, axis),
+            ["axis"] = SweepFiles.Axis(document, axis),
             ["element_order"] = new JsonArray(ids.Select(x => (JsonNode)x).ToArray()),
             ["completed"] = completed,
             ["gap"] = "minimum separation of the two dressed states sharing the labels' character (2g_eff at an avoided crossing), MHz",

@@ -5,7 +5,7 @@ using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Core.Units;
 
-namespace LevelDesign.Output;
+namespace LevelDesign.Core.Presentation;
 
 /// <summary>Every bias where a quantity meets its target, with the sign changes that are jumps rather than roots marked.</summary>
 public static class TargetReport
@@ -18,17 +18,18 @@ public static class TargetReport
 
     public static string Table(DeviceDocument document, SweepAxis axis, string quantity, double target, IReadOnlyList<TargetRoot> roots, double purityThreshold)
     {
-        string unit = AxisUnitText.Of(document, axis.Path);
-        var (path, _) = AxisUnitText.Parameter(document, axis.Path, 0);
+        var unit = ShownUnit.Of(document, axis.Path);
+        var (path, _) = SweepFiles.ParameterOf(document, axis.Path, 0);
+        var parameterUnit = ShownUnit.Of(document, path);
         var b = new StringBuilder();
-        b.AppendLine($"device {document.Device.Name}: {quantity} = {QuantityFormatter.Format(target, UnitKind.Frequency)} along {axis.Path} from {axis.Start.ToString("G6", Inv)} to {axis.Stop.ToString("G6", Inv)} {unit} ({axis.Count} scan points)");
+        b.AppendLine($"device {document.Device.Name}: {quantity} = {FrequencyText.Of(quantity, target)} along {axis.Path} from {unit.Text(axis.Start)} to {unit.Text(axis.Stop)} ({axis.Count} scan points)");
         var clean = roots.Where(r => r.Refined && !r.IsHybridized(purityThreshold)).ToList();
         var hybridized = roots.Where(r => r.Refined && r.IsHybridized(purityThreshold)).ToList();
         b.AppendLine(clean.Count == 0 ? "no clean root in this range" : $"{clean.Count} root(s)");
         string Root(TargetRoot r)
         {
-            var (_, parameter) = AxisUnitText.Parameter(document, axis.Path, r.Bias);
-            return string.Create(Inv, $"  {axis.Path} = {r.Bias:G10} {unit}   ({path} = {parameter:G10})   {quantity} = {Hz(r.Value)}, residual {Hz(r.Residual)}, purity {r.Purity:F4}");
+            var (_, parameter) = SweepFiles.ParameterOf(document, axis.Path, r.Bias);
+            return string.Create(Inv, $"  {axis.Path} = {unit.Text(r.Bias, 10)}   ({path} = {parameterUnit.Text(parameter, 10)})   {quantity} = {FrequencyText.Of(quantity, r.Value)}, residual {FrequencyText.Format(r.Residual, FrequencyText.ShiftResolutionGHz)}, purity {r.Purity:F4}");
         }
         foreach (var r in clean) b.AppendLine(Root(r));
         if (hybridized.Count > 0)
@@ -38,8 +39,8 @@ public static class TargetReport
         }
         foreach (var r in roots.Where(r => !r.Refined))
         {
-            var (_, parameter) = AxisUnitText.Parameter(document, axis.Path, r.Bias);
-            b.AppendLine(string.Create(Inv, $"  {axis.Path} ≈ {r.Bias:G10} {unit}   ({path} = {parameter:G10})   not a root: {JumpNote}"));
+            var (_, parameter) = SweepFiles.ParameterOf(document, axis.Path, r.Bias);
+            b.AppendLine(string.Create(Inv, $"  {axis.Path} ≈ {unit.Text(r.Bias, 10)}   ({path} = {parameterUnit.Text(parameter, 10)})   not a root: {JumpNote}"));
         }
         b.AppendLine(Core.Analysis.Conventions.QuantityPurity);
         return b.ToString();
@@ -48,12 +49,14 @@ public static class TargetReport
     public static string Json(DeviceDocument document, SweepAxis axis, string quantity, double target, IReadOnlyList<TargetRoot> roots, double purityThreshold)
     {
         var list = new JsonArray();
+        var unit = ShownUnit.Of(document, axis.Path);
         foreach (var r in roots)
         {
-            var (path, parameter) = AxisUnitText.Parameter(document, axis.Path, r.Bias);
+            var (path, parameter) = SweepFiles.ParameterOf(document, axis.Path, r.Bias);
             var o = new JsonObject
             {
-                ["bias"] = JsonValues.Number(r.Bias),
+                ["bias"] = JsonValues.Number(unit.ToShown(r.Bias)),
+                ["bias_unit"] = unit.Symbol,
                 ["parameter"] = new JsonObject { [path] = JsonValues.Number(parameter) },
                 ["value_ghz"] = JsonValues.Number(r.Value),
                 ["residual_ghz"] = JsonValues.Number(r.Residual),
@@ -70,12 +73,10 @@ public static class TargetReport
             ["device"] = document.Device.Name,
             ["quantity"] = quantity,
             ["target_ghz"] = JsonValues.Number(target),
-            ["axis"] = AxisUnitText.Describe(document, axis),
+            ["axis"] = SweepFiles.Axis(document, axis),
             ["purity_threshold"] = JsonValues.Number(purityThreshold),
             ["roots"] = list,
-            ["conventions"] = SpectrumFormatter.Conventions(),
+            ["conventions"] = ConventionsText.Json(),
         }) + Environment.NewLine;
     }
-
-    private static string Hz(double ghz) => double.IsFinite(ghz) ? QuantityFormatter.Format(ghz, UnitKind.Frequency) : "—";
 }

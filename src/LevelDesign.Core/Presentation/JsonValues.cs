@@ -2,7 +2,7 @@ using System.Text.Encodings.Web;
 using System.Text.Json;
 using System.Text.Json.Nodes;
 
-namespace LevelDesign.Output;
+namespace LevelDesign.Core.Presentation;
 
 /// <summary>JSON helpers: NaN and infinities become null (JSON has no such numbers); readable indented output.</summary>
 public static class JsonValues

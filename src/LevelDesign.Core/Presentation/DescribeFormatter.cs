@@ -4,7 +4,7 @@ using LevelDesign.Core.Couplers;
 using LevelDesign.Core.Elements;
 using LevelDesign.Core.Model;
 
-namespace LevelDesign.Output;
+namespace LevelDesign.Core.Presentation;
 
 /// <summary>
 /// The fully resolved model as JSON: every parameter after unit and circuit conversions and bias mapping

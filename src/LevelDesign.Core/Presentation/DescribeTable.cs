@@ -3,7 +3,7 @@ using System.Text;
 using System.Text.Json;
 using System.Text.Json.Nodes;
 
-namespace LevelDesign.Output;
+namespace LevelDesign.Core.Presentation;
 
 /// <summary>
 /// The resolved model of <see cref="DescribeFormatter"/> as aligned text tables for a terminal. It reads the JSON

@@ -1,12 +1,11 @@
 using System.Globalization;
 using System.Text;
 using System.Text.Json.Nodes;
-using LevelDesign.Commands;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Core.Units;
 
-namespace LevelDesign.Output;
+namespace LevelDesign.Core.Presentation;
 
 /// <summary>A fit's outcome: fitted values in the units the file uses, bounds reached, and each target's residual.</summary>
 public static class FitReport
@@ -49,7 +48,7 @@ public static class FitReport
                 ["fitted_text"] = f.Display(result.Values[p.Path]),
                 ["lower"] = JsonValues.Number(p.Lower),
                 ["upper"] = JsonValues.Number(p.Upper),
-                ["unit"] = AxisUnitText.BaseUnit(f.Kind),
+                ["unit"] = ShownUnit.Default(f.Kind).Symbol,
                 ["at_bound"] = result.AtBounds.Contains(p.Path),
                 ["write_refusal"] = f.Refusal,
             });

@@ -5,7 +5,7 @@ using LevelDesign.Core.Analysis;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.Eigen;
 
-namespace LevelDesign.Output;
+namespace LevelDesign.Core.Presentation;
 
 /// <summary>
 /// Writes one computed point (dressed states and derived quantities) as JSON, a terminal table or CSV cells.
@@ -15,18 +15,6 @@ public static class SpectrumFormatter
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
-    public static JsonObject Conventions() => new()
-    {
-        ["energies"] = Core.Analysis.Conventions.Energies,
-        ["transitions"] = Core.Analysis.Conventions.Transitions,
-        ["lamb_shift"] = Core.Analysis.Conventions.LambShift,
-        ["dispersive_shift"] = Core.Analysis.Conventions.DispersiveShift,
-        ["zz"] = Core.Analysis.Conventions.ZZ,
-        ["purity"] = Core.Analysis.Conventions.Purity,
-        ["purcell"] = Core.Analysis.Conventions.Purcell,
-        ["quantity_purity"] = Core.Analysis.Conventions.QuantityPurity,
-        ["couplings"] = Core.Analysis.Conventions.Coupling,
-    };
 
     /// <summary>Each coupler's fixed coefficient, where a g was converted, and g at this point.</summary>
     public static JsonArray Couplings(DressedSpectrum s)
@@ -54,15 +42,15 @@ public static class SpectrumFormatter
             foreach (var c in label.Components)
                 components.Add(new JsonObject
                 {
-                    ["label"] = StateLabels.Json(s, c.BareIndex),
-                    ["text"] = StateLabels.Text(s, c.BareIndex),
+                    ["label"] = Core.Presentation.StateNames.Json(s, c.BareIndex),
+                    ["text"] = Core.Presentation.StateNames.OfBare(s, c.BareIndex),
                     ["percent"] = JsonValues.Number(100 * c.Weight),
                 });
             states.Add(new JsonObject
             {
                 ["index"] = k,
-                ["label"] = StateLabels.Json(s, label.BareIndex),
-                ["text"] = StateLabels.Text(s, label.BareIndex),
+                ["label"] = Core.Presentation.StateNames.Json(s, label.BareIndex),
+                ["text"] = Core.Presentation.StateNames.OfBare(s, label.BareIndex),
                 ["energy_ghz"] = JsonValues.Number(s.Energies[k]),
                 ["purity"] = JsonValues.Number(label.Purity),
                 ["ambiguous"] = label.Ambiguous,
@@ -129,7 +117,7 @@ public static class SpectrumFormatter
         o["states"] = States(s, shown);
         o["derived"] = Derived(DerivedQuantities.From(s), purityThreshold);
         o["couplings"] = Couplings(s);
-        o["conventions"] = Conventions();
+        o["conventions"] = Core.Presentation.ConventionsText.Json();
         o["eigensolver"] = EigenSolvers.Describe();
         o["computed"] = Computed(s);
         o["limits_of_model"] = Core.Analysis.Conventions.LimitsOfModel;
@@ -152,8 +140,8 @@ public static class SpectrumFormatter
         {
             var label = s.Labels[k];
             string components = string.Join(", ", label.Components.Where(c => c.Weight >= 0.001)
-                .Select(c => $"{StateLabels.Text(s, c.BareIndex)} {100 * c.Weight:0.0}%"));
-            b.AppendLine(string.Create(Inv, $"{k,3}  {StateLabels.Text(s, label.BareIndex) + (label.Ambiguous ? " ?" : ""),-16} {s.Energies[k],12:0.000000} {label.Purity,7:0.0000}  {components}"));
+                .Select(c => $"{Core.Presentation.StateNames.OfBare(s, c.BareIndex)} {100 * c.Weight:0.0}%"));
+            b.AppendLine(string.Create(Inv, $"{k,3}  {Core.Presentation.StateNames.OfBare(s, label.BareIndex) + (label.Ambiguous ? " ?" : ""),-16} {s.Energies[k],12:0.000000} {label.Purity,7:0.0000}  {components}"));
         }
         b.AppendLine();
         b.AppendLine("Transitions (" + Core.Analysis.Conventions.Transitions + "; " + Core.Analysis.Conventions.LambShift + ")");
@@ -216,14 +204,10 @@ public static class SpectrumFormatter
         for (int k = 0; k < Math.Min(shown, s.Count); k++)
         {
             var label = s.Labels[k];
-            string components = string.Join("; ", label.Components.Select(c => string.Create(Inv, $"{StateLabels.Text(s, c.BareIndex)} {100 * c.Weight:0.###}%")));
-            b.Append(string.Create(Inv, $"{k},{Csv(StateLabels.Text(s, label.BareIndex))},{s.Energies[k]:R},{label.Purity:R},{label.Ambiguous.ToString().ToLowerInvariant()},{Csv(components)}\n"));
+            string components = string.Join("; ", label.Components.Select(c => string.Create(Inv, $"{Core.Presentation.StateNames.OfBare(s, c.BareIndex)} {100 * c.Weight:0.###}%")));
+            b.Append(string.Create(Inv, $"{k},{CsvCells.Text(Core.Presentation.StateNames.OfBare(s, label.BareIndex))},{s.Energies[k]:R},{label.Purity:R},{label.Ambiguous.ToString().ToLowerInvariant()},{CsvCells.Text(components)}\n"));
         }
         return b.ToString();
     }
 
-    public static string Csv(string cell) =>
-        cell.IndexOfAny([',', '"', '\n', ';']) >= 0 ? "\"" + cell.Replace("\"", "\"\"") + "\"" : cell;
-
-    public static string CsvNumber(double x) => double.IsFinite(x) ? x.ToString("R", Inv) : "";
 }

@@ -3,7 +3,7 @@ using System.Text;
 using System.Text.Json.Nodes;
 using LevelDesign.Core.Analysis;
 
-namespace LevelDesign.Output;
+namespace LevelDesign.Core.Presentation;
 
 /// <summary>The coherence budget as a terminal table, JSON, and (along a sweep) CSV and JSON rows.</summary>
 public static class CoherenceReport
