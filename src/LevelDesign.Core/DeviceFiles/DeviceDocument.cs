@@ -132,10 +132,6 @@ public sealed partial class DeviceDocument
         return At(point.BiasValues);
     }
 
-    /// <summary>Where a field ("elements.qa.ec") is written in the file: its value's line and column, or null if absent.</summary>
-    public (int Line, int Column)? LocationOf(string fieldPath) =>
-        Locate(fieldPath) is var (table, key) && table.Find(key) is SourceEntry e ? (e.Value.Line, e.Value.Column) : null;
-
     /// <summary>The value text of a field as written in the file (without quotes for strings), or null if absent.</summary>
     public string? ValueTextOf(string fieldPath)
     {

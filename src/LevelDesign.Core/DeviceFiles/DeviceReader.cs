@@ -170,7 +170,7 @@ public static partial class DeviceReader
         }
         foreach (var e in device.Elements)
             foreach (var problem in e.Validate())
-                Report(errors, seen, $"at the bias values, element '{e.Id}': {problem}", "biases." + biases.FirstOrDefault(b => b.Target.StartsWith(e.Id + "."))?.Name);
+                Report(errors, seen, ModelProblem.OfElement(e.Id, $"at the bias values, element '{e.Id}': {problem}"), "biases." + biases.FirstOrDefault(b => b.Target.StartsWith(e.Id + "."))?.Name);
         var biasMap = biases.ToDictionary(b => b.Name);
         var points = new List<OperatingPoint>();
         foreach (var (id, table) in sections["points"])
@@ -208,13 +208,12 @@ public static partial class DeviceReader
     }
 
     /// <summary>Puts a model-level problem at the table of the element or coupler it names.</summary>
-    private static void Report(ErrorList errors, IReadOnlyDictionary<string, SourceTable> tables, string problem, string field)
+    private static void Report(ErrorList errors, IReadOnlyDictionary<string, SourceTable> tables, ModelProblem problem, string field)
     {
-        var match = Regex.Match(problem, "(element|coupler) '([^']+)'");
-        string table = match.Success ? (match.Groups[1].Value == "element" ? "elements." : "couplers.") + match.Groups[2].Value : "";
+        string table = problem.Table;
         if (tables.TryGetValue(field, out var fieldTable) || tables.TryGetValue(table, out fieldTable))
-            errors.At(fieldTable, field == "device" ? table : field, problem);
-        else errors.Add(1, 1, field, problem);
+            errors.At(fieldTable, field == "device" ? table : field, problem.Message);
+        else errors.Add(1, 1, field, problem.Message);
     }
 
     /// <summary>One n·n coupler per node pair with coefficient 4e²(C⁻¹)_ij/h, the exact charging cross terms.</summary>

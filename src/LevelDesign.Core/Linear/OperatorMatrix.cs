@@ -64,23 +64,6 @@ public sealed class OperatorMatrix
         return result;
     }
 
-    public OperatorMatrix Scaled(Complex factor)
-    {
-        var result = new OperatorMatrix(Size);
-        for (int i = 0; i < _data.Length; i++) result._data[i] = _data[i] * factor;
-        return result;
-    }
-
-    /// <summary>Leading block of the first <paramref name="size"/> rows and columns.</summary>
-    public OperatorMatrix Truncated(int size)
-    {
-        var result = new OperatorMatrix(size);
-        for (int i = 0; i < size; i++)
-            for (int j = 0; j < size; j++)
-                result[i, j] = this[i, j];
-        return result;
-    }
-
     public static OperatorMatrix FromReal(double[,] values)
     {
         int n = values.GetLength(0);

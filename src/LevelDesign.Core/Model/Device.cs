@@ -72,27 +72,27 @@ public sealed record Device(string Name, IReadOnlyList<Element> Elements, IReadO
         return this with { Couplers = couplers };
     }
 
-    /// <summary>All problems found in elements, couplers and ids (empty when valid).</summary>
-    public IReadOnlyList<string> Validate()
+    /// <summary>All problems found in elements, couplers and ids (empty when valid), each with the part it concerns.</summary>
+    public IReadOnlyList<ModelProblem> Validate()
     {
-        var problems = new List<string>();
-        foreach (var group in Elements.GroupBy(e => e.Id).Where(g => g.Count() > 1)) problems.Add($"duplicate element id '{group.Key}'");
-        foreach (var group in Couplers.GroupBy(c => c.Id).Where(g => g.Count() > 1)) problems.Add($"duplicate coupler id '{group.Key}'");
+        var problems = new List<ModelProblem>();
+        foreach (var group in Elements.GroupBy(e => e.Id).Where(g => g.Count() > 1)) problems.Add(ModelProblem.OfElement(group.Key, $"duplicate element id '{group.Key}'"));
+        foreach (var group in Couplers.GroupBy(c => c.Id).Where(g => g.Count() > 1)) problems.Add(ModelProblem.OfCoupler(group.Key, $"duplicate coupler id '{group.Key}'"));
         foreach (var e in Elements)
         {
-            foreach (var p in e.Validate()) problems.Add($"element '{e.Id}': {p}");
-            if (Truncation.LevelsOf(e.Id) < 2) problems.Add($"element '{e.Id}': at least 2 levels must be kept");
+            foreach (var p in e.Validate()) problems.Add(ModelProblem.OfElement(e.Id, $"element '{e.Id}': {p}"));
+            if (Truncation.LevelsOf(e.Id) < 2) problems.Add(ModelProblem.OfElement(e.Id, $"element '{e.Id}': at least 2 levels must be kept"));
         }
         foreach (var c in Couplers)
         {
             foreach (var (id, op) in new[] { (c.ElementA, c.OperatorA), (c.ElementB, c.OperatorB) })
             {
                 int i = IndexOf(id);
-                if (i < 0) problems.Add($"coupler '{c.Id}' names unknown element '{id}'");
+                if (i < 0) problems.Add(ModelProblem.OfCoupler(c.Id, $"coupler '{c.Id}' names unknown element '{id}'"));
                 else if (!Elements[i].OperatorNames.Contains(op))
-                    problems.Add($"coupler '{c.Id}': element '{id}' has no operator '{op}' (it offers: {string.Join(", ", Elements[i].OperatorNames)})");
+                    problems.Add(ModelProblem.OfCoupler(c.Id, $"coupler '{c.Id}': element '{id}' has no operator '{op}' (it offers: {string.Join(", ", Elements[i].OperatorNames)})"));
             }
-            if (c.ElementA == c.ElementB) problems.Add($"coupler '{c.Id}' links element '{c.ElementA}' to itself");
+            if (c.ElementA == c.ElementB) problems.Add(ModelProblem.OfCoupler(c.Id, $"coupler '{c.Id}' links element '{c.ElementA}' to itself"));
         }
         return problems;
     }

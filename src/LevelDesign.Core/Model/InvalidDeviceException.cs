@@ -1,8 +1,8 @@
 namespace LevelDesign.Core.Model;
 
-/// <summary>A device that cannot be computed, with every problem found.</summary>
-public sealed class InvalidDeviceException(IReadOnlyList<string> problems)
-    : Exception("invalid device: " + string.Join("; ", problems))
+/// <summary>The device failed the model's own checks; each problem says which element or coupler it concerns.</summary>
+public sealed class InvalidDeviceException(IReadOnlyList<ModelProblem> problems)
+    : Exception("invalid device: " + string.Join("; ", problems.Select(p => p.Message)))
 {
-    public IReadOnlyList<string> Problems { get; } = problems;
+    public IReadOnlyList<ModelProblem> Problems { get; } = problems;
 }

@@ -124,7 +124,7 @@ public static class SpectrumFormatter
         return o;
     }
 
-    /// <summary>A readable terminal table: energies in GHz, shifts in MHz, ZZ in kHz.</summary>
+    /// <summary>A readable terminal table: energies in GHz, α and Lamb shift in MHz, small shifts by FrequencyText, times by DurationText.</summary>
     public static string Table(string deviceName, DressedSpectrum s, int shown, double purityThreshold = Core.Analysis.Conventions.DefaultPurityThreshold)
     {
         string Flag(double purity) => purity < purityThreshold ? " !" : "";
@@ -152,20 +152,20 @@ public static class SpectrumFormatter
         {
             b.AppendLine();
             b.AppendLine("Dispersive shifts (" + Core.Analysis.Conventions.DispersiveShift + ")");
-            foreach (var c in d.DispersiveShifts) b.AppendLine(string.Create(Inv, $"  2χ {c.First}–{c.Second}: {Num(c.Value, 1e3, "0.0000")} MHz   purity {P(c.Purity)}{Flag(c.Purity)}"));
+            foreach (var c in d.DispersiveShifts) b.AppendLine(string.Create(Inv, $"  2χ {c.First}–{c.Second}: {FrequencyText.Format(c.Value, FrequencyText.ShiftResolutionGHz)}   purity {P(c.Purity)}{Flag(c.Purity)}"));
         }
         if (d.ZZ.Count > 0)
         {
             b.AppendLine();
             b.AppendLine("ZZ (" + Core.Analysis.Conventions.ZZ + ")");
-            foreach (var z in d.ZZ) b.AppendLine(string.Create(Inv, $"  ζ {z.First}–{z.Second}: {Num(z.Value, 1e6, "0.000")} kHz   purity {P(z.Purity)}{Flag(z.Purity)}"));
+            foreach (var z in d.ZZ) b.AppendLine(string.Create(Inv, $"  ζ {z.First}–{z.Second}: {FrequencyText.Format(z.Value, FrequencyText.ShiftResolutionGHz)}   purity {P(z.Purity)}{Flag(z.Purity)}"));
         }
         if (d.Purcell.Count > 0)
         {
             b.AppendLine();
             b.AppendLine("Purcell estimates (" + Core.Analysis.Conventions.Purcell + ")");
             foreach (var p in d.Purcell)
-                b.AppendLine(string.Create(Inv, $"  {p.Qubit} via {p.Resonator}: γ = {Num(p.RateGHz, 1e6, "0.000")} kHz, T1 limit {Num(p.T1LimitSeconds, 1e3, "0.000")} ms   purity {P(p.Purity)}{Flag(p.Purity)}"));
+                b.AppendLine(string.Create(Inv, $"  {p.Qubit} via {p.Resonator}: γ = {FrequencyText.Format(p.RateGHz, FrequencyText.ShiftResolutionGHz)}, T1 limit {DurationText.Format(p.T1LimitSeconds)}   purity {P(p.Purity)}{Flag(p.Purity)}"));
         }
         b.AppendLine();
         b.AppendLine(string.Create(Inv, $"Purity ({Core.Analysis.Conventions.QuantityPurity}; threshold here {purityThreshold:G3})"));
@@ -174,7 +174,7 @@ public static class SpectrumFormatter
             b.AppendLine();
             b.AppendLine("Couplings (" + Core.Analysis.Conventions.Coupling + ")");
             foreach (var c in s.Couplers)
-                b.AppendLine(string.Create(Inv, $"  {c.Id,-12} coefficient {Num(c.CoefficientGHz, 1e3, "0.000")} MHz{(c.ConvertedAt is { } at ? $" (g converted at the {at.PointName} point)" : "")}, g here {Num(c.GHereGHz, 1e3, "0.000")} MHz"));
+                b.AppendLine(string.Create(Inv, $"  {c.Id,-12} coefficient {FrequencyText.Format(c.CoefficientGHz)}{(c.ConvertedAt is { } at ? $" (g converted at the {at.PointName} point)" : "")}, g here {FrequencyText.Format(c.GHereGHz)}"));
         }
         b.AppendLine();
         b.AppendLine(EigenSolvers.Describe());

@@ -66,7 +66,7 @@ public static class AxisArguments
     /// <summary>A value for a bias (control unit) or parameter path (its unit), or a usage error naming the option.</summary>
     public static double Value(DeviceDocument document, string name, string text, string option)
     {
-        if (!DeviceInput.TryParseValue(document, name, text, out double value, out string error))
+        if (!ControlValues.TryParseValue(document, name, text, out double value, out string error))
             throw new UsageException($"{option}: {error}");
         return value;
     }

@@ -16,7 +16,7 @@ public static class CheckCommand
         return command;
     }
 
-    public static int Run(string path, bool allowLarge)
+    public static int Run(string path, bool allowLarge) => CommandGuard.Run(path, () =>
     {
         var result = DeviceDocument.Load(path, new DeviceLoadOptions(AllowLarge: allowLarge));
         if (!result.Ok)
@@ -37,8 +37,9 @@ public static class CheckCommand
         }
         catch (Exception e) when (ComputationErrors.IsExpected(e))
         {
+            // a device the bare solves reject is a finding of the check (stdout, exit 2), not a failed computation
             Console.WriteLine($"{path}:0:0: device: {e.Message}");
             return ExitCodes.InvalidInput;
         }
-    }
+    });
 }

@@ -47,7 +47,7 @@ public static class CoherenceCommand
         {
             if (csv) throw new UsageException("--csv is for a sweep (give --vary or --sweep); one point prints a table or --json");
             if (output is not null) throw new UsageException("--out is for a sweep (give --vary or --sweep)");
-            var device = DeviceInput.Resolve(document, point, at, out var applied) ?? throw new UsageException("");
+            var device = DeviceInput.Resolve(document, point, at, out var applied);
             var spectrum = solver.Solve(device);
             var budgets = CoherenceEstimator.Estimate(solver, spectrum, inputs);
             Console.Write(json

@@ -14,7 +14,7 @@ public static class CommandGuard
         }
         catch (UsageException e)
         {
-            if (e.Message.Length > 0) Console.Error.WriteLine(e.Message);
+            foreach (string line in e.Lines) Console.Error.WriteLine(line);
             return ExitCodes.InvalidInput;
         }
         catch (OperationCanceledException)
@@ -32,9 +32,8 @@ public static class CommandGuard
         }
     }
 
-    /// <summary>Loads the file or throws a usage error (the problems are already printed with file, line and field).</summary>
-    public static Core.DeviceFiles.DeviceDocument Load(string path, bool allowLarge) =>
-        DeviceInput.Load(path, allowLarge) ?? throw new UsageException("");
+    /// <summary>Loads the file or throws a usage error carrying every problem with file, line and field.</summary>
+    public static Core.DeviceFiles.DeviceDocument Load(string path, bool allowLarge) => DeviceInput.Load(path, allowLarge);
 
     public static void OneFormat(bool json, bool csv)
     {

@@ -72,15 +72,7 @@ public static class CrossingsCommand
             Console.Error.WriteLine("cancelled: the crossing search needs the whole sweep");
             return (null, [], shown);
         }
-        // every label pair adds candidates to refine by dense solves, so the default search pairs only the ground and
-        // the single-excitation states (the lowest N+1 at the first point); --levels widens it at a quadratic cost
-        int searched = levels ?? Math.Min(shown, setup.Document.Device.Elements.Count + 1);
-        var axis = setup.Axes[0];
-        var options = new CrossingOptions
-        {
-            MaxGapGHz = maxGapGHz, Levels = searched, OperatingPoints = operatingPoints,
-            BiasTolerance = 1e-8 * Math.Abs(axis.Stop - axis.Start),
-        };
+        var options = CrossingSearch.Options(result, operatingPoints, levels, maxGapGHz);
         var crossings = SweepExecution.WithCancel(token => Task.Run(() => CrossingFinder.Find(result, x => setup.Resolve([x]), options, solver, token), token));
         var kept = crossings.Where(c => c.GapGHz >= minGapGHz && c.GapGHz <= maxGapGHz).ToArray();
         return (result, kept, shown);
@@ -91,14 +83,13 @@ public static class CrossingsCommand
     {
         var document = setup.Document;
         var axis = setup.Axes[0];
-        double Default() => setup.Start.TryGetValue(axis.Path, out double v) ? v
-            : document.Bias(axis.Path) is BiasDefinition b ? b.Value : document.Device.GetParameter(axis.Path);
-        double ValueAt(OperatingPoint p) => p.BiasValues.TryGetValue(axis.Path, out double v) ? v : Default();
-        if (near is not { Length: > 0 }) return document.Points.Select(p => (p.Name, ValueAt(p))).ToArray();
+        double otherwise = setup.Start.TryGetValue(axis.Path, out double v) ? v : CrossingSearch.FileValue(document, axis.Path);
+        var named = CrossingSearch.OperatingPoints(document, axis.Path, otherwise);
+        if (near is not { Length: > 0 }) return named;
         return near.Select(n =>
         {
-            if (document.Points.FirstOrDefault(p => p.Name == n) is OperatingPoint p) return (n, ValueAt(p));
-            if (DeviceInput.TryParseValue(document, axis.Path, n, out double v, out _)) return (n, v);
+            if (named.FirstOrDefault(p => p.Name == n) is { Name: not null } p) return p;
+            if (ControlValues.TryParseValue(document, axis.Path, n, out double v, out _)) return (n, v);
             throw new UsageException($"--near {n}: not an operating point{EditDistance.Suggestion(n, document.Points.Select(x => x.Name))} (points: {string.Join(", ", document.Points.Select(x => x.Name))}) nor a value of {axis.Path}");
         }).ToArray();
     }

@@ -21,25 +21,16 @@ public static class DescribeCommand
         return command;
     }
 
-    public static int Run(string path, string[]? at, string? point, bool json, bool allowLarge)
+    public static int Run(string path, string[]? at, string? point, bool json, bool allowLarge) => CommandGuard.Run(path, () =>
     {
         var document = DeviceInput.Load(path, allowLarge);
-        if (document is null) return ExitCodes.InvalidInput;
         var device = DeviceInput.Resolve(document, point, at, out var applied);
-        if (device is null) return ExitCodes.InvalidInput;
-        try
-        {
-            var problem = new DeviceSolver().Prepare(device);
-            var warnings = DeviceWarnings.Print(path, device);
-            var model = DescribeFormatter.Describe(problem, applied);
-            model["warnings"] = new System.Text.Json.Nodes.JsonArray(warnings.Select(w => (System.Text.Json.Nodes.JsonNode?)w).ToArray());
-            if (json) Console.WriteLine(JsonValues.Write(model));
-            else Console.Write(DescribeTable.Format(model));
-            return ExitCodes.Ok;
-        }
-        catch (Exception e) when (ComputationErrors.IsExpected(e))
-        {
-            return ComputationErrors.Report(path, e);
-        }
-    }
+        var problem = new DeviceSolver().Prepare(device);
+        var warnings = DeviceWarnings.Print(path, device);
+        var model = DescribeFormatter.Describe(problem, applied);
+        model["warnings"] = new System.Text.Json.Nodes.JsonArray(warnings.Select(w => (System.Text.Json.Nodes.JsonNode?)w).ToArray());
+        if (json) Console.WriteLine(JsonValues.Write(model));
+        else Console.Write(DescribeTable.Format(model));
+        return ExitCodes.Ok;
+    });
 }

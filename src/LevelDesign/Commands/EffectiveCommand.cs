@@ -33,7 +33,7 @@ public static class EffectiveCommand
         double threshold = purity ?? BlockDiagonalisation.DefaultThreshold;
         if (!(threshold > 0 && threshold <= 1)) throw new UsageException($"--purity {threshold}: give a weight in (0, 1], e.g. 0.9");
         var document = CommandGuard.Load(path, allowLarge);
-        var device = DeviceInput.Resolve(document, point, at, out var applied) ?? throw new UsageException("");
+        var device = DeviceInput.Resolve(document, point, at, out var applied);
         var chosen = pairs is { Length: > 0 } ? pairs.Select(p => Pair(device, p)).ToArray() : BlockDiagonalisation.CoupledPairs(device);
         if (chosen.Count == 0) throw new UsageException($"{path}: no two qubit-like elements are coupled; name a pair with --pair QA:QB");
         var spectrum = new DeviceSolver().Solve(device);

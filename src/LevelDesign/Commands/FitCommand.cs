@@ -15,9 +15,6 @@ namespace LevelDesign.Commands;
 /// </summary>
 public static class FitCommand
 {
-    /// <summary>Residuals are weighted equally in this unit (1 MHz), whatever the quantity.</summary>
-    public const double ResidualScaleGHz = 1e-3;
-
     public static Command Create()
     {
         var file = CommonOptions.File();
@@ -44,8 +41,8 @@ public static class FitCommand
         if (targets is not { Length: > 0 }) throw new UsageException("give at least one --target QUANTITY=VALUE, e.g. --target qa.f01=5.25GHz");
         if (levels is < 1) throw new UsageException("--levels must be at least 1");
         var document = CommandGuard.Load(path, allowLarge);
-        var device = DeviceInput.Resolve(document, point, at, out _) ?? throw new UsageException("");
-        var fitParameters = parameters.Select(p => Parameter(device, p)).ToArray();
+        var device = DeviceInput.Resolve(document, point, at, out _);
+        var fitParameters = parameters.Select(p => Term("--param", () => FitTerms.Parameter(device, p))).ToArray();
         if (fitParameters.Select(p => p.Path).Distinct().Count() != fitParameters.Length) throw new UsageException("a --param is given twice");
         var fields = fitParameters.Select(p => FitField.Of(document, p.Path)).ToArray();
         if (write && fields.FirstOrDefault(f => f.Refusal is not null) is FitField refused)
@@ -55,7 +52,7 @@ public static class FitCommand
 
         var solver = new DeviceSolver();
         var available = DerivedQuantities.From(solver.Solve(device, levels)).Named().Keys.ToArray();
-        var fitTargets = targets.Select(t => Target(document, t, available)).ToArray();
+        var fitTargets = targets.Select(t => Term("--target", () => FitTerms.Target(document, t, available))).ToArray();
         var result = SweepExecution.WithCancel(token => Task.Run(() => ParameterFit.Fit(device, fitParameters, fitTargets, solver, levels, cancellation: token), token));
 
         Console.Write(json ? FitReport.Json(document, fitParameters, fields, result) : FitReport.Table(document, fitParameters, fields, result));
@@ -77,60 +74,10 @@ public static class FitCommand
         return ExitCodes.Ok;
     });
 
-    /// <summary>PATH[=LOW:HIGH] with bounds in the parameter's unit; the start value is the device's, moved inside the bounds.</summary>
-    public static FitParameter Parameter(Core.Model.Device device, string text)
+    /// <summary>Reads one typed term; a problem becomes a usage error naming the option.</summary>
+    public static T Term<T>(string option, Func<T> read)
     {
-        int eq = text.IndexOf('=');
-        string path = (eq < 0 ? text : text[..eq]).Trim();
-        if (!path.Contains('.')) throw new UsageException($"--param {text}: give a parameter path ELEMENT.PARAMETER or COUPLER.PARAMETER, e.g. qa.ej_sum");
-        double initial;
-        try { initial = device.GetParameter(path); }
-        catch (ArgumentException e) { throw new UsageException($"--param {text}: {e.Message}"); }
-        var kind = ParameterKinds.Of(path[(path.LastIndexOf('.') + 1)..]);
-        double lower, upper;
-        if (eq < 0)
-        {
-            if (!(initial > 0)) throw new UsageException($"--param {text}: the value is {initial}; give bounds PATH=LOW:HIGH");
-            (lower, upper) = (initial / 2, initial * 2);
-        }
-        else
-        {
-            var parts = text[(eq + 1)..].Split(':');
-            if (parts.Length != 2) throw new UsageException($"--param {text}: write PATH=LOW:HIGH, e.g. qa.ec=150MHz:300MHz");
-            if (!QuantityParser.TryParseModelValue(parts[0], kind, out lower, out string e1)) throw new UsageException($"--param {text}: LOW: {e1}");
-            if (!QuantityParser.TryParseModelValue(parts[1], kind, out upper, out string e2)) throw new UsageException($"--param {text}: HIGH: {e2}");
-            if (!(lower < upper)) throw new UsageException($"--param {text}: LOW must be below HIGH");
-        }
-        return new FitParameter(path, Math.Clamp(initial, lower, upper), lower, upper);
-    }
-
-    /// <summary>QUANTITY=VALUE[@POINT|@BIAS=V,...]: the settings are parameter paths (a bias becomes its target parameter).</summary>
-    public static FitTarget Target(DeviceDocument document, string text, IReadOnlyCollection<string> available)
-    {
-        int atSign = text.IndexOf('@');
-        var (quantity, value) = TargetArguments.Parse(atSign < 0 ? text : text[..atSign], available);
-        var settings = new Dictionary<string, double>();
-        if (atSign >= 0)
-        {
-            string where = text[(atSign + 1)..].Trim();
-            if (document.Points.FirstOrDefault(p => p.Name == where) is OperatingPoint p)
-                foreach (var (bias, v) in p.BiasValues) Add(bias, v);
-            else if (!where.Contains('='))
-                throw new UsageException($"--target {text}: no operating point '{where}'{EditDistance.Suggestion(where, document.Points.Select(x => x.Name))} (points: {string.Join(", ", document.Points.Select(x => x.Name))}); or write @BIAS=VALUE");
-            else
-                foreach (string setting in where.Split(','))
-                {
-                    if (!DeviceInput.TryParseSetting(document, setting, out string name, out double v, out string error))
-                        throw new UsageException($"--target {text}: {error}");
-                    Add(name, v);
-                }
-        }
-        return new FitTarget(quantity, value, settings, ResidualScaleGHz);
-
-        void Add(string name, double v)
-        {
-            if (document.Bias(name) is BiasDefinition b) settings[b.Target] = b.ToParameter(v);
-            else settings[name] = v;
-        }
+        try { return read(); }
+        catch (InputTermException e) { throw new UsageException($"{option} {e.Message}"); }
     }
 }

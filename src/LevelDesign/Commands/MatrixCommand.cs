@@ -39,7 +39,7 @@ public static class MatrixCommand
         if (count is < 1) throw new UsageException("--states must be at least 1");
         if (count is not null && chosen is { Length: > 0 }) throw new UsageException("give either --states or --state, not both");
         var document = CommandGuard.Load(path, allowLarge);
-        var device = DeviceInput.Resolve(document, point, at, out _) ?? throw new UsageException("");
+        var device = DeviceInput.Resolve(document, point, at, out _);
         int e = device.IndexOf(elementId);
         if (e < 0) throw new UsageException($"'{op}': no element '{elementId}' (elements: {string.Join(", ", device.Elements.Select(x => x.Id))})");
         if (!device.Elements[e].OperatorNames.Contains(name))

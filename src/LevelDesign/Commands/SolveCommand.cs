@@ -47,7 +47,7 @@ public static class SolveCommand
         var solver = new DeviceSolver();
         var (planLevels, _) = SweepExecution.Levels(setup, levels, solver);
         var available = DerivedQuantities.From(solver.Solve(setup.Resolve([axis.Start]), planLevels)).Named().Keys.ToArray();
-        var (quantity, value) = TargetArguments.Parse(target, available);
+        var (quantity, value) = FitCommand.Term("--target", () => TargetTerm.Parse(target, available));
         var options = new SweepOptions { Solver = solver };
         var roots = SweepExecution.WithCancel(token =>
             TargetSolver.FindAllAsync(setup.Resolve, axis, quantity, value, options, planLevels, ToleranceFor(axis), token));

@@ -1,4 +1,3 @@
-using LevelDesign.Core.Presentation;
 using System.CommandLine;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.Presentation;
@@ -28,42 +27,29 @@ public static class SpectrumCommand
     }
 
     public static int Run(string path, string[]? at, string? point, int? levels, bool json, bool csv, bool allowLarge, double? purity = null,
-        string? states = null)
+        string? states = null) => CommandGuard.Run(path, () =>
     {
-        if (purity is double p && !(p > 0 && p <= 1)) { Console.Error.WriteLine($"--purity {p}: give a purity in (0, 1], e.g. 0.9"); return ExitCodes.InvalidInput; }
-        if (json && csv) { Console.Error.WriteLine("choose one of --json and --csv"); return ExitCodes.InvalidInput; }
-        if (levels is < 1) { Console.Error.WriteLine("--levels must be at least 1"); return ExitCodes.InvalidInput; }
+        if (purity is double p && !(p > 0 && p <= 1)) throw new UsageException($"--purity {p}: give a purity in (0, 1], e.g. 0.9");
+        CommandGuard.OneFormat(json, csv);
+        if (levels is < 1) throw new UsageException("--levels must be at least 1");
         var selection = StateSelection.Auto;
-        if (states is not null && !StateSelection.TryParse(states, out selection, out string stateError))
-        {
-            Console.Error.WriteLine($"--states {stateError}");
-            return ExitCodes.InvalidInput;
-        }
+        if (states is not null && !StateSelection.TryParse(states, out selection, out string stateError)) throw new UsageException($"--states {stateError}");
         var document = DeviceInput.Load(path, allowLarge);
-        if (document is null) return ExitCodes.InvalidInput;
         var device = DeviceInput.Resolve(document, point, at, out var applied);
-        if (device is null) return ExitCodes.InvalidInput;
-        if (selection.UnknownElement(device) is string unknown) { Console.Error.WriteLine(unknown); return ExitCodes.InvalidInput; }
-        try
+        if (selection.UnknownElement(device) is string unknown) throw new UsageException(unknown);
+        var (spectrum, shown) = Compute(new DeviceSolver { Selection = selection }, device, levels);
+        var warnings = DeviceWarnings.Print(path, device);
+        double threshold = purity ?? document.PurityThreshold;
+        if (json)
         {
-            var (spectrum, shown) = Compute(new DeviceSolver { Selection = selection }, device, levels);
-            var warnings = DeviceWarnings.Print(path, device);
-            double threshold = purity ?? document.PurityThreshold;
-            if (json)
-            {
-                var report = SpectrumFormatter.Report(device.Name, spectrum, shown, applied, threshold);
-                report["warnings"] = new System.Text.Json.Nodes.JsonArray(warnings.Select(w => (System.Text.Json.Nodes.JsonNode?)w).ToArray());
-                Console.WriteLine(JsonValues.Write(report));
-            }
-            else if (csv) Console.Write(SpectrumFormatter.StatesCsv(spectrum, shown));
-            else Console.Write(SpectrumFormatter.Table(device.Name, spectrum, shown, threshold));
-            return ExitCodes.Ok;
+            var report = SpectrumFormatter.Report(device.Name, spectrum, shown, applied, threshold);
+            report["warnings"] = new System.Text.Json.Nodes.JsonArray(warnings.Select(w => (System.Text.Json.Nodes.JsonNode?)w).ToArray());
+            Console.WriteLine(JsonValues.Write(report));
         }
-        catch (Exception e) when (ComputationErrors.IsExpected(e))
-        {
-            return ComputationErrors.Report(path, e);
-        }
-    }
+        else if (csv) Console.Write(SpectrumFormatter.StatesCsv(spectrum, shown));
+        else Console.Write(SpectrumFormatter.Table(device.Name, spectrum, shown, threshold));
+        return ExitCodes.Ok;
+    });
 
     /// <summary>
     /// Solves for the states the solver's selection needs (by default all states up to two excitations, or the

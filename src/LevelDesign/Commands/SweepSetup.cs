@@ -15,8 +15,7 @@ public sealed record SweepSetup(DeviceDocument Document, IReadOnlyDictionary<str
     public static SweepSetup Create(DeviceDocument document, string? point, string[]? at, string[]? vary, string[]? links,
         string? sweepName, int maxAxes, int? defaultCount = null)
     {
-        if (DeviceInput.Resolve(document, point, at, out var applied) is null)
-            throw new UsageException("");   // DeviceInput has printed the problem
+        DeviceInput.Resolve(document, point, at, out var applied);   // checks the point and --at settings
         var start = applied.ToDictionary(kv => kv.Key, kv => kv.Value!.GetValue<double>());
         IReadOnlyList<SweepAxis> axes;
         if (vary is { Length: > 0 })

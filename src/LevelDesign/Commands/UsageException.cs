@@ -1,4 +1,11 @@
 namespace LevelDesign.Commands;
 
-/// <summary>A bad command-line argument: printed as one clear line on stderr, exit 2, never a stack trace.</summary>
-public sealed class UsageException(string message) : Exception(message);
+/// <summary>
+/// Bad input — an argument, or a device file with located problems: every line is printed on stderr, exit 2, never a
+/// stack trace. <see cref="CommandGuard"/> is the one place that prints it.
+/// </summary>
+public sealed class UsageException(string message, IReadOnlyList<string>? lines = null) : Exception(message)
+{
+    /// <summary>What to print: the message, or the located problems (FILE:LINE:COL: field: message) and a summary.</summary>
+    public IReadOnlyList<string> Lines { get; } = lines ?? [message];
+}

@@ -18,3 +18,14 @@ public class FrequencyTextTests
     [Fact]
     public void Non_finite_values_are_a_dash() => Assert.Equal("—", FrequencyText.Format(double.NaN));
 }
+
+public class DurationTextTests
+{
+    [Theory]
+    [InlineData(3.9639e-5, "39.6 µs")]
+    [InlineData(3.317e-3, "3.32 ms")]
+    [InlineData(1.2, "1.20 s")]
+    [InlineData(2.5e-7, "250 ns")]
+    [InlineData(double.PositiveInfinity, "no limit")]
+    public void Three_significant_digits_and_a_prefix(double seconds, string text) => Assert.Equal(text, DurationText.Format(seconds));
+}

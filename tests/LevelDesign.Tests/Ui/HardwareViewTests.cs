@@ -94,7 +94,7 @@ public class HardwareViewTests
         ui.WaitIdle();
         ui.Window.ShowPage(Page.Shifts);
         ui.Draw();
-        Assert.Contains("qa via ra: γ = 0.004015 MHz, T1 limit 39.6 µs", ui.Screen);
+        Assert.Contains("qa via ra: γ = 4.015 kHz, T1 limit 39.6 µs", ui.Screen);
     }
 
     /// <summary>The README's zero-ZZ search in the UI: the one root lies where |qa1 qb1⟩ is hybridized, and F9 says so.</summary>

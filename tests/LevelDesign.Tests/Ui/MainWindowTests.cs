@@ -135,15 +135,15 @@ public class MainWindowTests
         ui.WaitFor(() => ui.Window.LastSweep is { Completed: true }, "the sweep");
         string screen = ui.Screen;
         Assert.Contains(screen, c => c >= '\u2801' && c <= '\u28FF');   // braille dots drawn
-        Shows(screen, "cursor q_flux = 0.0000");
+        Shows(screen, "cursor q_flux = 0 Φ0");   // in the unit of the file's bias
 
         for (int i = 0; i < 10; i++) ui.Press(Key.CursorRight);
         Assert.Equal(10, ui.Window.Spectrum.CursorIndex);
-        Shows(ui.Screen, "q_flux = 0.1000");
+        Shows(ui.Screen, "q_flux = 0.1 Φ0");
 
         while (ui.Window.CurrentPage != Page.States) ui.Press(Key.F3);
         screen = ui.Screen;
-        Shows(screen, "q_flux = 0.1000 (point 11/51)");
+        Shows(screen, "q_flux = 0.1 Φ0 (point 11/51)");
         var point = ui.Window.LastSweep!.Points[10];
         Shows(screen, point.Spectrum.EnergyOf([1, 0]).ToString("F4", CultureInfo.InvariantCulture));
         // and agrees with an independent solve with the bias at 0.1 (target q.flux = 0.1 through the bias)

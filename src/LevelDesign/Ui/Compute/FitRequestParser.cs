@@ -1,5 +1,4 @@
 using System.Text.RegularExpressions;
-using LevelDesign.Commands;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Sweeps;
 
@@ -7,8 +6,8 @@ namespace LevelDesign.Ui.Compute;
 
 /// <summary>
 /// Reads "fit PATH [LOW..HIGH] ... to QUANTITY = VALUE [at POINT | at BIAS=V], ..." from the target prompt.
-/// Bounds and targets are read by the fit command's own rules (<see cref="FitCommand.Parameter"/>,
-/// <see cref="FitCommand.Target"/>); a parameter the file cannot take back as it is written (<see cref="FitField"/>)
+/// Bounds and targets are read by the fit command's own rules (<see cref="FitTerms.Parameter"/>,
+/// <see cref="FitTerms.Target"/>); a parameter the file cannot take back as it is written (<see cref="FitField"/>)
 /// is refused before any work, with the reason.
 /// </summary>
 public static partial class FitRequestParser
@@ -37,15 +36,14 @@ public static partial class FitRequestParser
                 return null;
             }
             var targets = body[(to + 4)..].Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)
-                .Select(t => FitCommand.Target(document, AtSign().Replace(t, "@"), available)).ToArray();
+                .Select(t => FitTerms.Target(document, AtSign().Replace(t, "@"), available)).ToArray();
             if (targets.Length == 0) { error = "give at least one target after 'to', e.g. qa.f01 = 5.2 GHz"; return null; }
             error = null;
             return new FitRequest(parameters, fields, targets);
         }
-        catch (UsageException e)
+        catch (InputTermException e)
         {
-            // the command's messages name its options; here the same text was typed in the prompt
-            error = e.Message.Replace("--param ", "").Replace("--target ", "");
+            error = e.Message;
             return null;
         }
     }
@@ -63,7 +61,7 @@ public static partial class FitRequestParser
                 Flush();
                 path = word;
             }
-            else if (path is null) throw new UsageException($"'{word}': start with a parameter path such as qa.ej_sum");
+            else if (path is null) throw new InputTermException($"'{word}': start with a parameter path such as qa.ej_sum");
             else bounds.Add(word);
         }
         Flush();
@@ -77,10 +75,10 @@ public static partial class FitRequestParser
             if (range.Length > 0)
             {
                 var ends = range.Split("..");
-                if (ends.Length != 2) throw new UsageException($"{path} {range}: write bounds as LOW..HIGH, e.g. {path} 10 GHz..40 GHz");
+                if (ends.Length != 2) throw new InputTermException($"{path} {range}: write bounds as LOW..HIGH, e.g. {path} 10 GHz..40 GHz");
                 argument = $"{path}={ends[0].Trim()}:{ends[1].Trim()}";
             }
-            result.Add(FitCommand.Parameter(document.Device, argument));
+            result.Add(FitTerms.Parameter(document.Device, argument));
             bounds.Clear();
         }
     }

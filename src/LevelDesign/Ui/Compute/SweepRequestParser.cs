@@ -1,3 +1,4 @@
+using LevelDesign.Core.Presentation;
 using System.Globalization;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Units;

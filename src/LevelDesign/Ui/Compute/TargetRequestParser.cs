@@ -1,3 +1,4 @@
+using LevelDesign.Core.Presentation;
 using System.Globalization;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Units;
@@ -67,7 +68,7 @@ public static class TargetRequestParser
         if (dot < 0) return null;
         string owner = biasOrPath[..dot], name = biasOrPath[(dot + 1)..];
         string section = document.Device.IndexOf(owner) >= 0 ? "elements" : "couplers";
-        return ($"{section}.{owner}.{name}", FieldUnits.Format(value, FieldUnits.Of(name)));
+        return ($"{section}.{owner}.{name}", ParameterText.Format(value, ParameterKinds.Of(name)));
     }
 
     private static bool IsParameter(DeviceDocument document, string path)

@@ -1,3 +1,4 @@
+using LevelDesign.Core.Presentation;
 using LevelDesign.Core.Couplers;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Elements;
@@ -58,9 +59,9 @@ public static class BoardOutline
                 var fileKeys = ElementKeys.For(element.Kind);
                 foreach (var (name, value) in element.Parameters)
                 {
-                    var kind = FieldUnits.Of(name);
+                    var kind = ParameterKinds.Of(name);
                     string path = $"elements.{element.Id}.{name}";
-                    string shown = FieldUnits.Display(value, kind);
+                    string shown = ParameterText.Display(value, kind);
                     // The file's biases override element values: show where the value comes from and edit the bias.
                     if (document.Biases.FirstOrDefault(b => b.Target == $"{element.Id}.{name}") is { } bias)
                         rows.Add(new FieldRow(name, shown, $"biases.{bias.Name}.value",
@@ -78,7 +79,7 @@ public static class BoardOutline
                 // Values the file gives in circuit form (capacitance, junction currents or resistances, inductance).
                 foreach (var key in fileKeys.Where(k => k is not ("kind" or "levels") && !element.Parameters.ContainsKey(k)))
                     if (document.ValueTextOf($"elements.{element.Id}.{key}") is string text && !text.StartsWith('['))
-                        rows.Add(new FieldRow(key, text, $"elements.{element.Id}.{key}", FieldUnits.Of(key).ExampleText()));
+                        rows.Add(new FieldRow(key, text, $"elements.{element.Id}.{key}", ParameterKinds.Of(key).ExampleText()));
                 rows.Add(new FieldRow("levels kept", device.Truncation.LevelsOf(element.Id).ToString(), null, ""));
                 rows.Add(new FieldRow("operators", string.Join(" ", element.OperatorNames), null, ""));
                 return rows;
@@ -101,14 +102,14 @@ public static class BoardOutline
                 };
                 string strengthPath = $"couplers.{c.Id}.{name}";
                 rows.Add(document.ValueTextOf(strengthPath) is string written
-                    ? new FieldRow(name, FieldUnits.Display(value, unit), strengthPath, unit.ExampleText(), written)
-                    : new FieldRow(name, FieldUnits.Display(value, unit), null, "", Note: "(from [capacitance_matrix])", ShortNote: ""));
+                    ? new FieldRow(name, ParameterText.Display(value, unit), strengthPath, unit.ExampleText(), written)
+                    : new FieldRow(name, ParameterText.Display(value, unit), null, "", Note: "(from [capacitance_matrix])", ShortNote: ""));
                 if (here?.FirstOrDefault(r => r.Id == c.Id) is ResolvedCoupler resolved)
                 {
                     // the coefficient is fixed hardware; g follows the elements' matrix elements at this point
                     string at = resolved.ConvertedAt is { } point ? $"(g converted at the {point.PointName} point)" : "";
-                    rows.Add(new FieldRow("coefficient", FieldUnits.Display(resolved.CoefficientGHz, UnitKind.Frequency), null, "", Note: at, ShortNote: ""));
-                    rows.Add(new FieldRow("g here", FieldUnits.Display(resolved.GHereGHz, UnitKind.Frequency), null, "", Note: "(at the point computed)", ShortNote: ""));
+                    rows.Add(new FieldRow("coefficient", ParameterText.Display(resolved.CoefficientGHz, UnitKind.Frequency), null, "", Note: at, ShortNote: ""));
+                    rows.Add(new FieldRow("g here", ParameterText.Display(resolved.GHereGHz, UnitKind.Frequency), null, "", Note: "(at the point computed)", ShortNote: ""));
                 }
                 return rows;
             }
@@ -121,7 +122,7 @@ public static class BoardOutline
                     new("value", QuantityFormatter.Format(b.Value, b.ControlKind), $"biases.{b.Name}.value", "control value" + ControlUnitHint(b)),
                     new("period", QuantityFormatter.Format(b.Period, b.ControlKind), $"biases.{b.Name}.period", "control per unit of the target"),
                     new("offset", QuantityFormatter.Format(b.Offset, b.ControlKind), $"biases.{b.Name}.offset", "control value at target zero"),
-                    new("sets", $"{b.Target} = {FieldUnits.Format(b.ToParameter(b.Value), FieldUnits.Of(b.Target[(b.Target.LastIndexOf('.') + 1)..]))}", null, ""),
+                    new("sets", $"{b.Target} = {ParameterText.Format(b.ToParameter(b.Value), ParameterKinds.Of(b.Target[(b.Target.LastIndexOf('.') + 1)..]))}", null, ""),
                 ];
             }
             case BoardNodeKind.Device:
@@ -133,7 +134,7 @@ public static class BoardOutline
                     new("file", document.Path, null, ""),
                     new("levels each", t.DefaultLevels.ToString(), null, ""),
                     new("max excitations", t.MaxExcitations?.ToString() ?? "none", null, ""),
-                    new("max bare energy", t.MaxBareEnergyGHz is double e ? FieldUnits.Format(e, UnitKind.Frequency) : "none", null, ""),
+                    new("max bare energy", t.MaxBareEnergyGHz is double e ? ParameterText.Format(e, UnitKind.Frequency) : "none", null, ""),
                     new("operating points", string.Join(", ", document.Points.Select(p => p.Name)), null, ""),
                     new("sweeps", string.Join(", ", document.Sweeps.Select(s => s.Name)), null, ""),
                 ];

@@ -1,3 +1,4 @@
+using LevelDesign.Core.Presentation;
 using System.Globalization;
 using LevelDesign.Core.Analysis;
 using LevelDesign.Core.Model;
@@ -52,7 +53,7 @@ public static class ShiftsText
             lines.Add(new TextLine("Purcell", Heading: true));
             lines.AddRange(Wrapped(Conventions.Purcell, width));
             foreach (var p in q.Purcell)
-                lines.AddRange(Wrapped($"  {p.Qubit} via {p.Resonator}: γ = {Numbers.MHz(p.RateGHz, 6)} MHz, T1 limit {T1(p.T1LimitSeconds)}{(p.Purity < purityThreshold ? " !" : "")}", width));
+                lines.AddRange(Wrapped($"  {p.Qubit} via {p.Resonator}: γ = {FrequencyText.Format(p.RateGHz, FrequencyText.ShiftResolutionGHz)}, T1 limit {DurationText.Format(p.T1LimitSeconds)}{(p.Purity < purityThreshold ? " !" : "")}", width));
         }
         if (coherence is { Count: > 0 }) lines.AddRange(Coherence(coherence, width));
         if (convergence is not null && device is not null) lines.AddRange(Convergence(convergence, device, width));
@@ -141,11 +142,6 @@ public static class ShiftsText
 
     private static string Kilohertz(double ghz) =>
         double.IsFinite(ghz) ? (ghz * 1e6).ToString("+0.0;−0.0;0.0", CultureInfo.InvariantCulture) : "n/a";
-
-    private static string T1(double seconds) =>
-        double.IsPositiveInfinity(seconds) ? "none" : seconds >= 1e-3
-            ? (seconds * 1e3).ToString("0.###", CultureInfo.InvariantCulture) + " ms"
-            : (seconds * 1e6).ToString("0.#", CultureInfo.InvariantCulture) + " µs";
 
     private static string Cut(string id) => id.Length <= 8 ? id : id[..7] + "…";
 }

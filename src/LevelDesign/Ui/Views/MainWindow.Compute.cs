@@ -1,3 +1,4 @@
+using LevelDesign.Core.Presentation;
 using System.Diagnostics;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.DeviceFiles;
@@ -133,51 +134,12 @@ public sealed partial class MainWindow
         }, CancellationToken.None);
     }
 
-    /// <summary>Crossings are located to this fraction of the sweep span (each refinement step is a full solve; a sweep step is ~1/60).</summary>
-    public const double CrossingToleranceOfSpan = 1e-3;
-
-    /// <summary>At most this many of the lowest states are paired in the crossing search (pairs grow as its square).</summary>
-    public const int MaxCrossingLevels = 12;
-
     /// <summary>How the screen searches a finished one-axis sweep for crossings.</summary>
     public static CrossingOptions CrossingOptionsFor(DeviceDocument document, SweepResult sweep)
     {
-        var axis = sweep.Plan.Axes[0];
-        return new CrossingOptions
-        {
-            OperatingPoints = OperatingPointsOn(document, axis.Path),
-            Levels = CrossingLevels(sweep),
-            BiasTolerance = CrossingToleranceOfSpan * Math.Max(Math.Abs(axis.Stop - axis.Start), 1e-12),
-        };
-    }
-
-    /// <summary>
-    /// The lowest states at the first point up to the last one with at most two excitations (the states the
-    /// spectrum shows by default), capped at <see cref="MaxCrossingLevels"/>.
-    /// </summary>
-    private static int CrossingLevels(SweepResult sweep)
-    {
-        var first = sweep.Points[0].Spectrum;
-        int last = 0;
-        for (int k = 0; k < first.Count; k++)
-            if (first.LabelLevels(k).Sum() <= 2) last = k;
-        return Math.Clamp(last + 1, 2, MaxCrossingLevels);
-    }
-
-    /// <summary>
-    /// The file's named operating points as values of the swept axis: a point setting the swept bias directly,
-    /// or (when the axis is a parameter path such as qa.flux) the bias that targets that path.
-    /// </summary>
-    public static IReadOnlyList<double> OperatingPointsOn(DeviceDocument document, string axisPath)
-    {
-        var values = new List<double>();
-        foreach (var point in document.Points)
-            foreach (var (name, control) in point.BiasValues)
-            {
-                if (name == axisPath) values.Add(control);
-                else if (document.Bias(name) is { } bias && bias.Target == axisPath) values.Add(bias.ToParameter(control));
-            }
-        return values;
+        string axis = sweep.Plan.Axes[0].Path;
+        var points = CrossingSearch.OperatingPoints(document, axis, CrossingSearch.FileValue(document, axis));
+        return CrossingSearch.Options(sweep, points.Select(p => p.Value).ToArray());
     }
 
     private void ApplyCrossings(int generation, SweepResult sweep, IReadOnlyList<Crossing> crossings)
@@ -254,7 +216,7 @@ public sealed partial class MainWindow
 
     /// <summary>A bias in its control unit; plain axes as before (4 decimals), so "0.1000" reads as a flux.</summary>
     private string AxisText(string path, double value) =>
-        _session.Document?.Bias(path) is { ControlKind: not LevelDesign.Core.Units.UnitKind.Dimensionless } ? BiasText.Format(_session.Document, path, value) : Numbers.Plain(value);
+        ShownUnit.Of(_session.Document, path).Text(value);
 
     private PointSnapshot? Shown => _cursorSnapshot ?? _snapshot;
 
@@ -293,7 +255,7 @@ public sealed partial class MainWindow
                 break;
             case Page.Crossings:
                 _crossingList.SetLines(CrossingsText.Build(_crossings, _sweep, _series?.AxisName, _crossingsPending,
-                    v => BiasText.Format(_session.Document, _series?.AxisName ?? "", v, digits: 4), width - 1));
+                    v => ShownUnit.Of(_session.Document, _series?.AxisName ?? "").Text(v, 4), width - 1));
                 break;
         }
         SetNeedsDraw();
@@ -306,6 +268,6 @@ public sealed partial class MainWindow
         var mark = _crossings[at];
         _spectrum.SetCursor(mark.PointIndex);
         ShowPage(Page.Spectrum);
-        Say($"cursor at the sweep point nearest the crossing {mark.LabelA} ↔ {mark.LabelB} ({_series?.AxisName} = {BiasText.Format(_session.Document, _series?.AxisName ?? "", mark.Crossing.Bias)})");
+        Say($"cursor at the sweep point nearest the crossing {mark.LabelA} ↔ {mark.LabelB} ({_series?.AxisName} = {ShownUnit.Of(_session.Document, _series?.AxisName ?? "").Text(mark.Crossing.Bias)})");
     }
 }

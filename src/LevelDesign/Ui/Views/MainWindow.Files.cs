@@ -1,3 +1,4 @@
+using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Files;
 using LevelDesign.Core.Presentation;
 using LevelDesign.Core.Composite;
@@ -191,7 +192,7 @@ public sealed partial class MainWindow
         if (document is null) { Say("no device is open", warning: true); return; }
         var bias = document.Biases.FirstOrDefault();
         string range = bias is null ? "qa.flux 0 to 0.5"
-            : $"{bias.Name} {BiasText.Format(document, bias.Name, bias.Offset)} to {BiasText.Format(document, bias.Name, bias.Offset + bias.Period / 2)}";
+            : $"{bias.Name} {ShownUnit.Of(document, bias.Name).Text(bias.Offset)} to {ShownUnit.Of(document, bias.Name).Text(bias.Offset + bias.Period / 2)}";
         string quantity = _snapshot?.Quantities.Named().Keys.FirstOrDefault() ?? "qa.f01";
         _prompt.Ask(TargetQuestion, $"{quantity} = 5 GHz by {range}", text =>
         {
@@ -248,7 +249,7 @@ public sealed partial class MainWindow
         for (int i = 0; i < roots.Count && i < 9; i++)
         {
             var root = roots[i];
-            string at = BiasText.Format(solvedOn, request.Bias, root.Bias);
+            string at = ShownUnit.Of(solvedOn, request.Bias).Text(root.Bias);
             string note = !root.Refined ? " (jump, not a root)"
                 : root.IsHybridized(solvedOn.PurityThreshold) ? $" ! hybridized, purity {root.Purity.ToString("0.00", System.Globalization.CultureInfo.InvariantCulture)}" : "";
             parts.Add($"[{i + 1}] {at}{note}");
@@ -314,7 +315,7 @@ public sealed partial class MainWindow
             : "the device changed while fitting; the values are for the device as it was");
         string values = string.Join(" · ", request.Fields.Select(f => $"{f.DevicePath} = {f.Display(result.Values[f.DevicePath])}"));
         string residuals = string.Join(" · ", result.Residuals.Select(r =>
-            $"{r.Target.Quantity} off by {FieldUnits.Display(r.Residual, UnitKind.Frequency, ResidualDigits)}"));
+            $"{r.Target.Quantity} off by {ParameterText.Display(r.Residual, UnitKind.Frequency, ResidualDigits)}"));
         string bounds = result.AtBounds.Count > 0 ? $" · at a bound: {string.Join(", ", result.AtBounds)}" : "";
         string how = result.Converged ? $"fit ({result.Iterations} steps)" : $"fit NOT converged ({result.Message})";
         var edits = request.Fields.Select(f => (f.FieldPath!, f.Format(result.Values[f.DevicePath]))).ToList();
