@@ -1,4 +1,7 @@
 namespace LevelDesign.Ui.Compute;
 
-/// <summary>One labelled level followed across a sweep: its label and its frequency (GHz) at every point (NaN when absent).</summary>
+/// <summary>
+/// One level of the spectrum followed across a sweep in energy order: the name of its character where it ends (drawn
+/// there), and its frequency (GHz) at every point (NaN when absent).
+/// </summary>
 public sealed record Branch(string Label, int Excitations, double[] Frequencies);

@@ -183,14 +183,14 @@ public sealed class SpectrumView : View
             }
         }
 
-        // Branch names at the right end, nudged down so two never share a row.
+        // Branch names at the right end, on their own branch's row or one row off; a name with no free row that
+        // close is left out rather than put beside another branch.
         var used = new HashSet<int>();
         foreach (var (row, label) in ends.OrderBy(e => e.Row))
         {
             if (labelWidth == 0) break;
-            int r = row;
-            while (used.Contains(r) && r < plotRows - 1) r++;
-            if (used.Contains(r)) continue;
+            int r = new[] { row, row + 1, row - 1 }.FirstOrDefault(x => x >= 0 && x < plotRows && !used.Contains(x), -1);
+            if (r < 0) continue;
             used.Add(r);
             Move(AxisWidth + plotColumns, r + 1);
             AddStr(RowList.Pad(" " + label, labelWidth));
