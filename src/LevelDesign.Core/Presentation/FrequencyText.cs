@@ -38,6 +38,17 @@ public static class FrequencyText
         return rounded.ToString("F" + decimals, CultureInfo.InvariantCulture) + " " + unit;
     }
 
+    /// <summary>Four significant digits with the prefix ("178.5 MHz", "-52.80 kHz"), for axis ticks.</summary>
+    public static string Short(double ghz)
+    {
+        if (!double.IsFinite(ghz)) return "—";
+        double magnitude = Math.Abs(ghz);
+        var (unit, scale) = Prefixes.FirstOrDefault(p => magnitude >= p.GHz, Prefixes[^1]);
+        double value = ghz / scale;
+        int decimals = Math.Abs(value) >= 100 ? 1 : Math.Abs(value) >= 10 ? 2 : 3;
+        return value.ToString("F" + decimals, CultureInfo.InvariantCulture) + " " + unit;
+    }
+
     /// <summary>Same, for a named quantity (its resolution from its name).</summary>
     public static string Of(string quantity, double ghz) => Format(ghz, ResolutionOf(quantity));
 }

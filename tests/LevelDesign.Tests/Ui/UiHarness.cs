@@ -87,7 +87,7 @@ public sealed class UiHarness : IDisposable
     public void Replace(string text)
     {
         Press(Key.End);
-        for (int i = 0; i < 40; i++) App.InjectKey(Key.Backspace);
+        for (int i = 0; i < 200; i++) App.InjectKey(Key.Backspace);
         Type(text);
     }
 

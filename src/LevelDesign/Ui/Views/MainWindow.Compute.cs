@@ -230,6 +230,7 @@ public sealed partial class MainWindow
             Page.States => "States at cursor",
             Page.Shifts => "Shifts at cursor",
             Page.Crossings => "Crossings (Enter: go to)",
+            Page.Quantities => "Quantities along the sweep (Enter: choose, ←/→ cursor)",
             Page.Help => _showLimits ? "Help: limits of the model" : "Help: keys",
             Page.Errors => "Errors in the device file",
             _ => "",
@@ -253,6 +254,9 @@ public sealed partial class MainWindow
             case Page.Errors:
                 _page.SetLines(LoadErrorText.Build(_session.LoadErrors, _session.LoadedText, width));
                 break;
+            case Page.Quantities:
+                _page.SetLines(QuantityPage(width));
+                break;
             case Page.Crossings:
                 _crossingList.SetLines(CrossingsText.Build(_crossings, _sweep, _series?.AxisName, _crossingsPending,
                     v => ShownUnit.Of(_session.Document, _series?.AxisName ?? "").Text(v, 4), width - 1));
@@ -269,5 +273,41 @@ public sealed partial class MainWindow
         _spectrum.SetCursor(mark.PointIndex);
         ShowPage(Page.Spectrum);
         Say($"cursor at the sweep point nearest the crossing {mark.LabelA} ↔ {mark.LabelB} ({_series?.AxisName} = {ShownUnit.Of(_session.Document, _series?.AxisName ?? "").Text(mark.Crossing.Bias)})");
+    }
+
+    /// <summary>Quantities chosen for the quantities page; null: the default set (every ZZ, purity of single excitations).</summary>
+    private IReadOnlyList<string>? _quantityNames;
+
+    private IReadOnlyList<TextLine> QuantityPage(int width)
+    {
+        var sweep = _sweep;
+        if (sweep is null || sweep.Plan.Axes.Count != 1 || sweep.Points.Count == 0)
+            return QuantitiesText.Build([], [], 0, ShownUnit.Plain, "", width, 0, 0);
+        string axis = sweep.Plan.Axes[0].Path;
+        var names = _quantityNames ?? QuantitySeries.Default(sweep);
+        var series = names.Select(n => QuantitySeries.From(sweep, n)).ToList();
+        var values = sweep.Points.Select(p => p.AxisValues[0]).ToArray();
+        int cursor = Math.Clamp(_spectrum.CursorIndex, 0, values.Length - 1);
+        int height = Math.Max(8, _page.Viewport.Height);
+        return QuantitiesText.Build(series, values, cursor, ShownUnit.Of(_session.Document, axis), axis, width, height,
+            _session.Document?.PurityThreshold ?? Core.Analysis.Conventions.DefaultPurityThreshold);
+    }
+
+    private void AskQuantities()
+    {
+        if (_sweep is not { Points.Count: > 0 } sweep) { Say("run a sweep first (F5)"); return; }
+        var available = QuantitySeries.Available(sweep);
+        string current = string.Join(", ", _quantityNames ?? QuantitySeries.Default(sweep));
+        _prompt.Ask($"plot along the sweep (comma-separated): {string.Join(", ", available.Take(12))}{(available.Count > 12 ? ", …" : "")}", current, text =>
+        {
+            var chosen = text.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries).ToList();
+            if (chosen.Count == 0) { _quantityNames = null; RefreshPage(); return null; }
+            var unknown = chosen.FirstOrDefault(c => !available.Contains(c));
+            if (unknown is not null)
+                return $"'{unknown}' is not computed along this sweep{Core.DeviceFiles.EditDistance.Suggestion(unknown, available)}";
+            _quantityNames = chosen;
+            RefreshPage();
+            return null;
+        });
     }
 }

@@ -199,6 +199,10 @@ public sealed partial class MainWindow : Window
         AddCommand(Command.PreviousTabStop, () => { CycleFocus(-1); return true; });
         KeyBindings.ReplaceCommands(Key.Tab, Command.NextTabStop);
         KeyBindings.ReplaceCommands(Key.Tab.WithShift, Command.PreviousTabStop);
+        // the quantities page: Enter chooses what is plotted, ←/→ move the cursor it shares with the spectrum
+        _page.Bind(Key.Enter, Command.Accept, () => { if (_pageShown != Page.Quantities) return false; AskQuantities(); return true; });
+        _page.Bind(Key.CursorLeft, Command.Left, () => { if (_pageShown != Page.Quantities) return false; _spectrum.SetCursor(_spectrum.CursorIndex - 1); return true; });
+        _page.Bind(Key.CursorRight, Command.Right, () => { if (_pageShown != Page.Quantities) return false; _spectrum.SetCursor(_spectrum.CursorIndex + 1); return true; });
         _page.Bind(Key.L, Command.Context, () => { ToggleLimits(); return true; });
         _page.Bind(Key.L.WithShift, Command.Context, () => { ToggleLimits(); return true; });   // the help writes "L"
     }
@@ -303,6 +307,7 @@ public sealed partial class MainWindow : Window
             Page.States => Page.Shifts,
             Page.Shifts => Page.Spectrum,
             Page.Spectrum => Page.Crossings,
+            Page.Crossings => Page.Quantities,
             _ => Page.States,
         };
         ShowPage(next);

@@ -7,6 +7,7 @@ public enum Page
     Shifts,
     Spectrum,
     Crossings,
+    Quantities,
     Help,
     Errors,
 }
