@@ -87,3 +87,35 @@ public class SpectrumPlotTests
         Assert.Equal("ra.frequency (GHz)", Core.Presentation.AxisCaption.Of(document, "ra.frequency"));
     }
 }
+
+public class QuantityPlotTests
+{
+    private static async Task<SweepResult> QubitThroughResonator()
+    {
+        var device = new Device("demo",
+            [new TunableTransmon("q", 0.2, 30, 0.35, 0), new Resonator("r", 5.6)],
+            [Coupler.Create("g", CouplerKind.Exchange, "q", "r", new CouplingStrength.Coefficient(0.05))],
+            new Truncation { DefaultLevels = 3 });
+        var axis = new SweepAxis("q.flux", 0, 0.5, 61, []);
+        return await SweepRunner.RunAsync(ParameterResolver.ForPaths(device, [axis]), new SweepPlan([axis], Levels: 5));
+    }
+
+    /// <summary>
+    /// A quantity against the bias: the line holds every point's own value, points read from hybridized states (at
+    /// the qubit–resonator crossing) are marked and named in the legend, and purities are not mixed with frequencies.
+    /// </summary>
+    [Fact]
+    public async Task Quantities_are_drawn_with_hybridized_points_marked()
+    {
+        var sweep = await QubitThroughResonator();
+        var plot = QuantityPlot.Build(sweep, ["chi2:q:r"], null, 0.9);
+        var line = plot.GetPlottables().OfType<ScottPlot.Plottables.Scatter>().First(p => p.LegendText == "chi2:q:r");
+        var points = line.Data.GetScatterPoints();
+        Assert.Equal(sweep.Points.Count(p => double.IsFinite(p.Quantities["chi2:q:r"])), points.Count);
+        Assert.Contains(plot.GetPlottables().OfType<ScottPlot.Plottables.Scatter>(), p => p.LegendText.Contains("below purity 0.9"));
+        string svg = plot.GetSvgXml(800, 600);
+        Assert.Contains("q.flux (Φ0)", svg);
+        Assert.Contains("Limits of the model", svg);
+        Assert.Throws<ArgumentException>(() => QuantityPlot.Build(sweep, ["chi2:q:r", "purity:q1"], null, 0.9));
+    }
+}

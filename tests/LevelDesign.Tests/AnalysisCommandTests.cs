@@ -154,6 +154,29 @@ public sealed class AnalysisCommandTests
         }
     }
 
+    /// <summary>J_eff and ZZ along the coupler bias as a picture (the zero-J_eff and zero-ZZ search, drawn).</summary>
+    [Fact]
+    public void PlotDrawsQuantitiesAlongTheSweep()
+    {
+        string output = Path.Combine(Path.GetTempPath(), $"leveldesign-quantities-{Guid.NewGuid():N}.svg");
+        try
+        {
+            var run = Executable.Run("plot", Device("pair.toml"), "--vary", "qc_flux=0.15mA:1.05mA:7", "--quantity", "jeff:qa:qb,zz:qa:qb", "--out", output);
+            Assert.True(run.ExitCode == 0, run.ToString());
+            string svg = File.ReadAllText(output);
+            Assert.Contains("jeff:qa:qb", svg);
+            Assert.Contains("zz:qa:qb", svg);
+            Assert.Contains("qc_flux (mA)", svg);
+            var bad = Executable.Run("plot", Device("pair.toml"), "--vary", "qc_flux=0.15mA:1.05mA:5", "--quantity", "jeff:qa:qx", "--out", output);
+            Assert.Equal(2, bad.ExitCode);
+            Assert.Contains("did you mean 'jeff:qa:qb'", bad.Stderr);
+        }
+        finally
+        {
+            File.Delete(output);
+        }
+    }
+
     [Fact]
     public void PlotWritesAnSvgOfOneManifold()
     {

@@ -27,17 +27,21 @@ public static class PlotCommand
         var levels = CommonOptions.Levels(
             "number of lowest labelled states drawn and searched for crossings (default: the lowest 12, or every labelled state with --manifold)");
         var labels = SweepCommand.Labels();
+        var quantity = new Option<string[]?>("--quantity")
+        {
+            Description = "draw these quantities against the bias instead of the spectrum: zz:qa:qb, jeff:qa:qb, qa.f01, chi2:qa:ra, purity:qa1 …; repeatable or comma-separated",
+        };
         var allowLarge = CommonOptions.AllowLarge();
         var command = new Command("plot", "picture (SVG or PNG) of the labelled spectrum along a sweep, crossings marked with their gaps")
-            { file, vary, link, sweep, output, manifold, width, height, at, point, levels, labels, allowLarge };
+            { file, vary, link, sweep, output, manifold, width, height, at, point, levels, labels, quantity, allowLarge };
         command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(vary), parse.GetValue(link), parse.GetValue(sweep), parse.GetValue(output),
             parse.GetValue(manifold), parse.GetValue(width), parse.GetValue(height), parse.GetValue(at), parse.GetValue(point), parse.GetValue(levels),
-            parse.GetValue(labels), parse.GetValue(allowLarge)));
+            parse.GetValue(labels), parse.GetValue(allowLarge), parse.GetValue(quantity)));
         return command;
     }
 
     public static int Run(string path, string[]? vary, string[]? links, string? sweepName, string? output, string? manifoldText, int? width, int? height,
-        string[]? at, string? point, int? levels, string? labels, bool allowLarge) => CommandGuard.Run(path, () =>
+        string[]? at, string? point, int? levels, string? labels, bool allowLarge, string[]? quantities = null) => CommandGuard.Run(path, () =>
     {
         if (output is null) throw new UsageException("give --out PATH.svg or --out PATH.png");
         string extension = Path.GetExtension(output).ToLowerInvariant();
@@ -56,6 +60,8 @@ public static class PlotCommand
         var document = CommandGuard.Load(path, allowLarge);
         var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 1);
         if (setup.Axes[0].Count < 3) throw new UsageException($"--vary: a plot needs at least 3 points (got {setup.Axes[0].Count})");
+        if (quantities is { Length: > 0 })
+            return DrawQuantities(document, setup, mode, levels, quantities, output, extension, w, h);
         var (result, crossings, judged) = CrossingsCommand.Find(setup, mode, levels, 0, 0.5, []);
         if (result is null) return ExitCodes.Cancelled;
         // all judged labels when one manifold is picked (its branches may lie above the lowest 12), else the lowest 12
@@ -72,4 +78,28 @@ public static class PlotCommand
         Console.Error.WriteLine($"wrote {output} ({result.Points.Count} points, {crossings.Count} crossing(s))");
         return ExitCodes.Ok;
     });
+
+    /// <summary>Quantities along the sweep (no crossing search): one picture, purities apart from frequencies.</summary>
+    private static int DrawQuantities(Core.DeviceFiles.DeviceDocument document, SweepSetup setup, LabelMode mode, int? levels, string[] quantities,
+        string output, string extension, int w, int h)
+    {
+        var names = quantities.SelectMany(q => q.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)).Distinct().ToArray();
+        var solver = new Core.Composite.DeviceSolver();
+        var (planLevels, _) = SweepExecution.Levels(setup, levels, solver);
+        var result = SweepExecution.Run(setup, mode, planLevels, solver);
+        if (result.Points.Count == 0) return ExitCodes.Cancelled;
+        var available = QuantitySeries.Available(result);
+        if (names.FirstOrDefault(n => !available.Contains(n)) is string unknown)
+            throw new UsageException($"--quantity {unknown}: not computed along this sweep{Core.DeviceFiles.EditDistance.Suggestion(unknown, available)} (available: {string.Join(", ", available)})");
+        ScottPlot.Plot plot;
+        try { plot = QuantityPlot.Build(result, names, document, document.PurityThreshold); }
+        catch (ArgumentException e) { throw new UsageException($"--quantity: {e.Message}"); }
+        OutputFile.Write(output, () =>
+        {
+            if (extension == ".svg") SpectrumPlot.SaveSvg(plot, output, w, h);
+            else SpectrumPlot.SavePng(plot, output, w, h);
+        });
+        Console.Error.WriteLine($"wrote {output} ({result.Points.Count} points{(result.Completed ? "" : ", cancelled: only the points computed")})");
+        return result.Completed ? ExitCodes.Ok : ExitCodes.Cancelled;
+    }
 }
