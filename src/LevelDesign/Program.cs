@@ -30,6 +30,8 @@ public static class Program
             CoherenceCommand.Create(),
             EffectiveCommand.Create(),
             MatrixCommand.Create(),
+            SpreadCommand.Create(),
+            MergeCommand.Create(),
         };
         root.SetAction(parse => OpenInteractive(parse.GetValue(file)));
         var parse = root.Parse(args);
