@@ -107,6 +107,7 @@ public static class SlurmJobScripts
     private static void Save(string path, string text)
     {
         OutputFile.Write(path, () => AtomicFile.Write(path, text));
+        if (OperatingSystem.IsWindows()) return;
         try { File.SetUnixFileMode(path, File.GetUnixFileMode(path) | UnixFileMode.UserExecute); }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or PlatformNotSupportedException) { }
     }
