@@ -1,4 +1,3 @@
-using System.Diagnostics;
 using System.Text.RegularExpressions;
 using LevelDesign.Tests.Support;
 using Xunit;
@@ -83,26 +82,10 @@ public sealed class SpreadCommandTests
     {
         if (!OperatingSystem.IsLinux() && !OperatingSystem.IsMacOS()) return; // SIGINT is sent with kill(1)
         using var temp = new TempFolder();
-        var start = new ProcessStartInfo("dotnet")
-        {
-            RedirectStandardOutput = true, RedirectStandardError = true, RedirectStandardInput = true, UseShellExecute = false,
-            WorkingDirectory = RepositoryPaths.Root,
-        };
-        foreach (var a in new[] { Executable.DllPath, "spread", Device, "--samples", "5000", "--threads", "2", "--out", temp.Path })
-            start.ArgumentList.Add(a);
-        using var process = Process.Start(start)!;
-        process.StandardInput.Close();
-        var stdout = process.StandardOutput.ReadToEndAsync();
-        string? line;
-        do line = process.StandardError.ReadLine();
-        while (line is not null && !line.StartsWith("progress", StringComparison.Ordinal));
-        Assert.NotNull(line);
-        using (var kill = Process.Start("kill", ["-INT", process.Id.ToString()])) kill.WaitForExit();
-        string stderr = process.StandardError.ReadToEnd();
-        Assert.True(process.WaitForExit(TimeSpan.FromMinutes(2)));
-        Assert.Equal(130, process.ExitCode);
-        Assert.Contains("cancelled: keeping the", stderr);
-        Assert.Contains("(cancelled: only the samples finished)", stdout.Result);
+        var r = InterruptedRun.AfterFirstProgress("spread", Device, "--samples", "5000", "--threads", "2", "--out", temp.Path);
+        Assert.Equal(130, r.ExitCode);
+        Assert.Contains("cancelled: keeping the", r.Stderr);
+        Assert.Contains("(cancelled: only the samples finished)", r.Stdout);
         string json = File.ReadAllText(temp.File("spread.json"));
         Assert.Contains("\"completed\": false", json);
         int rows = File.ReadAllLines(temp.File("samples.csv")).Length - 2;
