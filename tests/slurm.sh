@@ -31,7 +31,8 @@ if [ ! -s /etc/munge/munge.key ]; then
   chown munge:munge /etc/munge/munge.key && chmod 400 /etc/munge/munge.key
 fi
 mkdir -p /run/munge /var/log/munge /var/lib/munge && chown munge:munge /run/munge /var/log/munge /var/lib/munge
-runuser -u munge -- /usr/sbin/munged --force --foreground >"$work/munged.log" 2>&1 &
+# setpriv execs munged itself (runuser would stay as its parent), so the PID below is munged's own
+setpriv --reuid=munge --regid=munge --init-groups /usr/sbin/munged --force --foreground >"$work/munged.log" 2>&1 &
 pids+=($!)
 
 host=$(hostname)

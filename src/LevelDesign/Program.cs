@@ -6,7 +6,7 @@ namespace LevelDesign;
 
 /// <summary>
 /// The leveldesign executable: with no command it opens the terminal UI (on FILE or the built-in demo);
-/// commands check, describe, spectrum, sweep, crossings, solve, fit, plot, coherence, effective and matrix work without a terminal. Exit codes: see <see cref="ExitCodes"/>.
+/// commands check, describe, spectrum, sweep, crossings, solve, fit, plot, coherence, effective, matrix, spread and merge work without a terminal. Exit codes: see <see cref="ExitCodes"/>.
 /// </summary>
 public static class Program
 {
