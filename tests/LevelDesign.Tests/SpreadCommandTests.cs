@@ -30,9 +30,9 @@ public sealed class SpreadCommandTests
         var m = Executable.Run(["merge", .. Directory.GetFiles(parts, "shard-*.json").Order(), "--out", merged]);
         Assert.True(m.ExitCode == 0, m.ToString());
         Assert.Equal(one.Stdout, m.Stdout);
-        foreach (string name in Directory.GetFiles(whole).Select(Path.GetFileName))
+        foreach (string name in Directory.GetFiles(whole).Select(f => Path.GetFileName(f)))
         {
-            if (name!.EndsWith(".json", StringComparison.Ordinal))
+            if (name.EndsWith(".json", StringComparison.Ordinal))
                 Assert.Equal(WithoutTiming(File.ReadAllText(Path.Combine(whole, name))), WithoutTiming(File.ReadAllText(Path.Combine(merged, name))));
             else Assert.True(File.ReadAllBytes(Path.Combine(whole, name)).AsSpan().SequenceEqual(File.ReadAllBytes(Path.Combine(merged, name))), name + " differs");
         }

@@ -1,7 +1,9 @@
 using System.CommandLine;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Spread;
+using System.Text.Json.Nodes;
 using LevelDesign.Core.Spread.Export;
+using LevelDesign.Core.Sweeps.Export;
 
 namespace LevelDesign.Commands;
 
@@ -15,18 +17,22 @@ public static class MergeCommand
 {
     public static Command Create()
     {
-        var shards = new Argument<string[]>("SHARD") { Description = "shard files (DIR/shard-I-of-N.json), all N of them", Arity = ArgumentArity.OneOrMore };
-        var output = new Option<string?>("--out") { Description = "folder for the merged study's files (as `spread --out` writes them)", Required = true };
+        var shards = new Argument<string[]>("SHARD") { Description = "shard files (DIR/shard-I-of-N.json of `spread`, DIR/sweep-shard-I-of-N.json of `sweep`), all N of them", Arity = ArgumentArity.OneOrMore };
+        var output = new Option<string?>("--out") { Description = "spread shards: the folder for the study's files (as `spread --out` writes them); sweep shards: the output file", Required = true };
         var device = new Option<string?>("--device") { Description = "the device file, when it has moved since the shards were computed (default: the path recorded in the shards)" };
         var json = CommonOptions.Json();
-        var command = new Command("merge", "combine the shard files of a spread study into the result of one unsharded run") { shards, output, device, json };
+        var command = new Command("merge", "combine the shard files of a spread study or a sweep into the result of one unsharded run") { shards, output, device, json };
         command.SetAction(parse => Run(parse.GetValue(shards)!, parse.GetValue(output)!, parse.GetValue(device), parse.GetValue(json)));
         return command;
     }
 
     public static int Run(string[] shardPaths, string output, string? devicePath, bool json) => CommandGuard.Run(devicePath ?? shardPaths.FirstOrDefault() ?? "", () =>
     {
-        var shards = shardPaths.Select(Read).ToList();
+        var files = shardPaths.Select(p => (Path: p, Json: ReadJson(p))).ToList();
+        int sweeps = files.Count(f => SweepShardFile.Is(f.Json));
+        if (sweeps > 0 && sweeps < files.Count) throw new UsageException("these files mix sweep shards and spread-study shards; merge one kind at a time");
+        if (sweeps > 0) return SweepShards.Merge(files, output, devicePath);
+        var shards = files.Select(f => Parse(f.Path, f.Json)).ToList();
         var first = shards[0];
         foreach (var (path, contents) in shardPaths.Zip(shards))
         {
@@ -58,19 +64,23 @@ public static class MergeCommand
         return ExitCodes.Ok;
     });
 
-    private static SpreadResultFile.Contents Read(string path)
+    private static JsonObject ReadJson(string path)
     {
-        string? text = null;
         try
         {
             var info = new FileInfo(path);
             if (!info.Exists) throw new UsageException($"{path}: no such file");
             if (info.Length > 1L << 30) throw new UsageException($"{path}: larger than 1 GiB; not a shard file of this program");
-            text = File.ReadAllText(path);
-            return SpreadResultFile.Read(text);
+            return JsonNode.Parse(File.ReadAllText(path)) as JsonObject ?? throw new UsageException($"{path}: not a JSON object; not a shard file of this program");
         }
-        catch (FormatException e) { throw new UsageException($"{path}: {e.Message}"); }
+        catch (System.Text.Json.JsonException e) { throw new UsageException($"{path}: not JSON ({e.Message}); not a shard file of this program"); }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException) { throw new UsageException($"{path}: {e.Message}"); }
+    }
+
+    private static SpreadResultFile.Contents Parse(string path, JsonObject json)
+    {
+        try { return SpreadResultFile.Read(json); }
+        catch (FormatException e) { throw new UsageException($"{path}: {e.Message}"); }
     }
 
     private static string Short(string s) => s.Length > 60 ? s[..57] + "..." : s;

@@ -1,8 +1,7 @@
 using System.Globalization;
-using System.Text;
-using System.Text.Encodings.Web;
 using System.Text.Json;
 using System.Text.Json.Nodes;
+using LevelDesign.Core.Sweeps.Export;
 
 namespace LevelDesign.Core.Spread.Export;
 
@@ -16,9 +15,6 @@ namespace LevelDesign.Core.Spread.Export;
 public static class SpreadResultFile
 {
     public const string Kind = "leveldesign spread study";
-
-    private static readonly JsonSerializerOptions Indented = new() { WriteIndented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping };
-    private static readonly JsonSerializerOptions Compact = new() { WriteIndented = false, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping };
 
     public static string Write(SpreadStudyHeader header, ShardRange? shard, bool completed, double elapsedSeconds, DateTimeOffset started,
         IReadOnlyList<SampleOutcome> outcomes, JsonObject? summary, string limitsOfModel)
@@ -52,15 +48,7 @@ public static class SpreadResultFile
         o["figures"] = "per rule: the quantity at its point, or its worst value along its sweep (GHz; purities plain); crossing rules: the largest gap (GHz); root rules: the root's bias (NaN written as null: none)";
         o["deviations"] = "per parameter: the drawn deviation in units of its total sigma";
         o["limits_of_model"] = limitsOfModel;
-        o["sample_rows"] = new JsonArray();
-        string head = o.ToJsonString(Indented);
-        // the empty array closes the text as "[]\n}"; the rows go in its place, one a line
-        int open = head.LastIndexOf("[]", StringComparison.Ordinal);
-        var b = new StringBuilder(head[..open]).Append('[');
-        for (int i = 0; i < outcomes.Count; i++)
-            b.Append(i == 0 ? "\n    " : ",\n    ").Append(Row(outcomes[i]).ToJsonString(Compact));
-        b.Append(outcomes.Count > 0 ? "\n  ]" : "]").Append(head[(open + 2)..]).Append('\n');
-        return b.ToString();
+        return JsonRows.Write(o, "sample_rows", outcomes.Select(x => (JsonNode)Row(x)));
     }
 
     private static JsonObject Row(SampleOutcome s) => new()
@@ -74,9 +62,9 @@ public static class SpreadResultFile
         ["error"] = s.Error,
     };
 
-    private static JsonArray Numbers(IEnumerable<double> xs) => new(xs.Select(Number).ToArray());
+    private static JsonArray Numbers(IEnumerable<double> xs) => JsonRows.Numbers(xs);
 
-    private static JsonNode? Number(double x) => double.IsFinite(x) ? JsonValue.Create(x) : null;
+    private static JsonNode? Number(double x) => JsonRows.Number(x);
 
     /// <summary>A file read back: header, shard (null for a whole study), completion, timing and samples.</summary>
     public sealed record Contents(SpreadStudyHeader Header, ShardRange? Shard, bool Completed, double ElapsedSeconds, IReadOnlyList<SampleOutcome> Outcomes);
@@ -87,6 +75,11 @@ public static class SpreadResultFile
         JsonObject o;
         try { o = JsonNode.Parse(text)?.AsObject() ?? throw new FormatException("empty"); }
         catch (Exception e) when (e is JsonException or InvalidOperationException) { throw new FormatException("not a JSON object: " + e.Message); }
+        return Read(o);
+    }
+
+    public static Contents Read(JsonObject o)
+    {
         if ((string?)o["kind"] != Kind) throw new FormatException($"not a spread study file (its \"kind\" is not \"{Kind}\")");
         try
         {
@@ -112,5 +105,5 @@ public static class SpreadResultFile
         }
     }
 
-    private static double[] Doubles(JsonNode array) => array.AsArray().Select(x => x is null ? double.NaN : (double)x).ToArray();
+    private static double[] Doubles(JsonNode array) => JsonRows.Doubles(array);
 }
