@@ -101,4 +101,15 @@ for f in "$work/single"/*; do
   fi
 done
 [ "$status" = 0 ] && echo "slurm: 4-task array + dependent merge equals the unsharded study ($(ls "$work/single" | wc -l) files compared)"
+
+# the same for a sweep: the demo's 61-point coupler scan in 4 shards, merged, against one unsharded run
+"$exe" sweep "$root/devices/pair.toml" --sweep coupler_scan --json --slurm 4 --out "$work/sweep" </dev/null 2>/dev/null || { echo "FAILED: writing the sweep's job scripts"; exit 1; }
+bash "$work/sweep/submit.sh" || { echo "FAILED: submitting the sweep"; exit 1; }
+for _ in $(seq 1 600); do squeue -h 2>/dev/null | grep -q . || break; sleep 1; done
+"$exe" sweep "$root/devices/pair.toml" --sweep coupler_scan --json --out "$work/sweep-single.json" </dev/null 2>/dev/null || { echo "FAILED: unsharded sweep"; exit 1; }
+if cmp -s "$work/sweep/sweep.json" "$work/sweep-single.json"; then
+  echo "slurm: 4-task sweep array + dependent merge equals the unsharded sweep byte for byte"
+else
+  echo "FAILED: the merged sweep differs from the unsharded one"; cat "$work/sweep/logs/"*.err >&2 2>/dev/null; status=1
+fi
 exit "$status"

@@ -69,12 +69,12 @@ public sealed class SpreadCommandTests
         using var temp = new TempFolder();
         var r = Executable.Run("spread", Device, "--slurm", "4", "--out", temp.Path);
         Assert.True(r.ExitCode == 0, r.ToString());
-        string array = File.ReadAllText(temp.File("spread-array.sbatch"));
+        string array = File.ReadAllText(temp.File("shards.sbatch"));
         Assert.Contains("#SBATCH --array=0-3", array);
         Assert.Contains("--shard \"$shard/4\"", array);
         Assert.Matches(@"#SBATCH --mem=\d+M", array);
         Assert.Contains("--dependency=afterok:$array", File.ReadAllText(temp.File("submit.sh")));
-        Assert.Contains(" merge ", File.ReadAllText(temp.File("spread-merge.sbatch")));
+        Assert.Contains(" merge ", File.ReadAllText(temp.File("merge.sbatch")));
     }
 
     [Fact]

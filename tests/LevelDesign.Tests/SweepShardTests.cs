@@ -54,4 +54,19 @@ public sealed class SweepShardTests
         Assert.Equal(2, noOut.ExitCode);
         Assert.Contains("--shard needs --out", noOut.Stderr);
     }
+
+    [Fact]
+    public void TheSlurmOptionWritesAShardedSweepAndItsMerge()
+    {
+        using var temp = new TempFolder();
+        var r = Executable.Run("sweep", Pair, "--sweep", "coupler_scan", "--csv", "--slurm", "3", "--out", temp.Path);
+        Assert.True(r.ExitCode == 0, r.ToString());
+        string array = File.ReadAllText(temp.File("shards.sbatch"));
+        Assert.Contains("#SBATCH --array=0-2", array);
+        Assert.Contains("--sweep coupler_scan --csv --shard \"$shard/3\"", array);
+        Assert.Contains("--out " + Path.Combine(temp.Path, "sweep.csv"), File.ReadAllText(temp.File("merge.sbatch")));
+        var tooMany = Executable.Run("sweep", Pair, "--sweep", "coupler_scan", "--slurm", "9", "--out", temp.Path);
+        Assert.Equal(2, tooMany.ExitCode);
+        Assert.Contains("give 1 to 8 tasks", tooMany.Stderr);
+    }
 }

@@ -8,56 +8,59 @@ using LevelDesign.Core.Spread;
 namespace LevelDesign.Commands;
 
 /// <summary>
-/// Writes a ready Slurm job array for a spread study into its output folder: spread-array.sbatch (one task a
-/// shard, `--array=0-(N−1)`), spread-merge.sbatch (the merge), and submit.sh, which submits the array and then the
+/// Writes a ready Slurm job array for a spread study into its output folder: shards.sbatch (one task a
+/// shard, `--array=0-(N−1)`), merge.sbatch (the merge), and submit.sh, which submits the array and then the
 /// merge with `--dependency=afterok` on it. Paths are absolute so the jobs run from any folder; per-task memory is
 /// estimated from the device (see <see cref="MemoryMegabytes"/>). See docs/cluster.md.
 /// </summary>
 public static class SlurmJobScripts
 {
-    public const string ArrayScript = "spread-array.sbatch";
-    public const string MergeScript = "spread-merge.sbatch";
+    public const string ArrayScript = "shards.sbatch";
+    public const string MergeScript = "merge.sbatch";
     public const string SubmitScript = "submit.sh";
 
-    public static void Write(DeviceDocument document, SpreadDefinition definition, string folder, int tasks, int cpus,
-        int? samples, int? seed, string[]? rules, bool allowLarge)
+
+    /// <summary>
+    /// What a job array runs: <paramref name="command"/> ("spread" or "sweep") on the device with
+    /// <paramref name="arguments"/> (already quoted, each with a leading space), one shard a task; the merge writes
+    /// <paramref name="mergeOutput"/> (a folder for a study, a file for a sweep) from the shard files named by
+    /// <paramref name="shardFile"/>; <paramref name="what"/> describes the work in the scripts' first comment.
+    /// </summary>
+    public static void Write(DeviceDocument document, string folder, string command, string arguments, int tasks, int cpus, long memoryMegabytes,
+        long mergeMegabytes, Func<int, string> shardFile, string mergeOutput, string what)
     {
         string out_ = Path.GetFullPath(folder), device = Path.GetFullPath(document.Path), logs = Path.Combine(out_, "logs");
         Directory.CreateDirectory(logs);
         string program = Program();
-        string name = "spread-" + new string(document.Device.Name.Select(c => char.IsAsciiLetterOrDigit(c) || c is '_' or '-' ? c : '_').ToArray());
-        var extra = new StringBuilder();
-        if (samples is int n) extra.Append(CultureInfo.InvariantCulture, $" --samples {n}");
-        if (seed is int s) extra.Append(CultureInfo.InvariantCulture, $" --seed {s}");
-        foreach (string r in rules ?? []) extra.Append(" --rule ").Append(Quote(r));
-        if (allowLarge) extra.Append(" --allow-large");
-        long memory = MemoryMegabytes(document, definition, cpus);
-        long perTask = (definition.Samples + tasks - 1) / tasks;
-
+        string name = command + "-" + new string(document.Device.Name.Select(c => char.IsAsciiLetterOrDigit(c) || c is '_' or '-' ? c : '_').ToArray());
+        // .NET sizes its thread pool (and the sweep its workers) by the processor count: make it the task's CPUs
+        string threads = command == "spread" ? $" --threads \"${{SLURM_CPUS_PER_TASK:-{cpus}}}\"" : "";
         var array = new StringBuilder()
             .AppendLine("#!/bin/bash")
-            .AppendLine($"# Spread study of {document.Device.Name}: {definition.Samples} samples in {tasks} shards of about {perTask}, written by 'leveldesign spread --slurm'.")
+            .AppendLine($"# {what}, in {tasks} shards; written by 'leveldesign {command} --slurm'.")
             .AppendLine("# Submit with submit.sh (it also queues the merge); see docs/cluster.md.")
             .AppendLine($"#SBATCH --job-name={name}")
             .AppendLine($"#SBATCH --array=0-{tasks - 1}")
             .AppendLine(CultureInfo.InvariantCulture, $"#SBATCH --cpus-per-task={cpus}")
-            .AppendLine(CultureInfo.InvariantCulture, $"#SBATCH --mem={memory}M")
+            .AppendLine(CultureInfo.InvariantCulture, $"#SBATCH --mem={memoryMegabytes}M")
             .AppendLine($"#SBATCH --output={logs}/shard-%a.out")
             .AppendLine($"#SBATCH --error={logs}/shard-%a.err")
             .AppendLine("set -euo pipefail")
+            .AppendLine($"export DOTNET_PROCESSOR_COUNT=\"${{SLURM_CPUS_PER_TASK:-{cpus}}}\"")
             .AppendLine("shard=$((SLURM_ARRAY_TASK_ID + 1))")
-            .AppendLine($"exec {program} spread {Quote(device)}{extra} --shard \"$shard/{tasks}\" --out {Quote(out_)} --threads \"${{SLURM_CPUS_PER_TASK:-{cpus}}}\" </dev/null");
-        var shardFiles = string.Join(" ", Enumerable.Range(1, tasks).Select(i => Quote(Path.Combine(out_, $"shard-{i}-of-{tasks}.json"))));
+            .AppendLine($"exec {program} {command} {Quote(device)}{arguments} --shard \"$shard/{tasks}\" --out {Quote(out_)}{threads} </dev/null");
+        var shardFiles = string.Join(" ", Enumerable.Range(1, tasks).Select(i => Quote(Path.Combine(out_, shardFile(i)))));
         var merge = new StringBuilder()
             .AppendLine("#!/bin/bash")
-            .AppendLine("# Merges the shards into the study's files (spread.json, samples.csv, histograms); queued by submit.sh after the array.")
+            .AppendLine($"# Merges the shards into {Path.GetFileName(mergeOutput)}; queued by submit.sh to start when every shard has succeeded.")
             .AppendLine($"#SBATCH --job-name={name}-merge")
             .AppendLine("#SBATCH --cpus-per-task=1")
-            .AppendLine(CultureInfo.InvariantCulture, $"#SBATCH --mem={Math.Max(512, MergeMegabytes(definition))}M")
+            .AppendLine(CultureInfo.InvariantCulture, $"#SBATCH --mem={Math.Max(512, mergeMegabytes)}M")
             .AppendLine($"#SBATCH --output={logs}/merge.out")
             .AppendLine($"#SBATCH --error={logs}/merge.err")
             .AppendLine("set -euo pipefail")
-            .AppendLine($"{program} merge {shardFiles} --out {Quote(out_)} --device {Quote(device)} > {Quote(Path.Combine(out_, "summary.txt"))} </dev/null");
+            .AppendLine("export DOTNET_PROCESSOR_COUNT=1")
+            .AppendLine($"{program} merge {shardFiles} --out {Quote(mergeOutput)} --device {Quote(device)} > {Quote(Path.Combine(out_, "summary.txt"))} </dev/null");
         var submit = new StringBuilder()
             .AppendLine("#!/bin/bash")
             .AppendLine("# Queues the shards as a job array and the merge as a job that starts when every shard has succeeded.")
@@ -70,7 +73,41 @@ public static class SlurmJobScripts
         Save(Path.Combine(out_, ArrayScript), array.ToString());
         Save(Path.Combine(out_, MergeScript), merge.ToString());
         Save(Path.Combine(out_, SubmitScript), submit.ToString());
-        Console.Error.WriteLine($"wrote {ArrayScript}, {MergeScript} and {SubmitScript} to {out_}: {tasks} tasks × {cpus} CPUs, {memory} MB each; run: bash {Path.Combine(out_, SubmitScript)}");
+        Console.Error.WriteLine($"wrote {ArrayScript}, {MergeScript} and {SubmitScript} to {out_}: {tasks} tasks × {cpus} CPUs, {memoryMegabytes} MB each; run: bash {Path.Combine(out_, SubmitScript)}");
+    }
+
+    /// <summary>The scripts of a spread study: each task a block of samples; the merge writes the study's files into the folder.</summary>
+    public static void ForStudy(DeviceDocument document, SpreadDefinition definition, string folder, int tasks, int cpus,
+        int? samples, int? seed, string[]? rules, bool allowLarge)
+    {
+        var extra = new StringBuilder();
+        if (samples is int n) extra.Append(CultureInfo.InvariantCulture, $" --samples {n}");
+        if (seed is int s) extra.Append(CultureInfo.InvariantCulture, $" --seed {s}");
+        foreach (string r in rules ?? []) extra.Append(" --rule ").Append(Quote(r));
+        if (allowLarge) extra.Append(" --allow-large");
+        long perTask = (definition.Samples + tasks - 1) / tasks;
+        Write(document, folder, "spread", extra.ToString(), tasks, cpus, MemoryMegabytes(document, definition, cpus), MergeMegabytes(definition),
+            i => $"shard-{i}-of-{tasks}.json", Path.GetFullPath(folder),
+            $"Spread study of {document.Device.Name}: {definition.Samples} samples, about {perTask} a task");
+    }
+
+    /// <summary>
+    /// The scripts of a 1-D sweep: each task a run of blocks; the merge writes sweep.json (or sweep.csv) into the folder.
+    /// Memory: runtime plus one eigen solve and the kept states of the task's points (dimension × ~50 levels × 24 bytes
+    /// each), with 50 % margin.
+    /// </summary>
+    public static void ForSweep(DeviceDocument document, string folder, int tasks, int cpus, int points, IReadOnlyList<string> arguments, bool csv)
+    {
+        double dimension = document.CompositeDimension;
+        double solve = CompositeSizeEstimate.PathBytes(dimension, document.Device.Couplers.Count, DeviceSolver.DefaultIterativeMinimumDimension);
+        int blocks = Core.Sweeps.SweepBlocks.Count(points), size = Core.Sweeps.SweepBlocks.Size(points);
+        long taskPoints = ((blocks + tasks - 1) / tasks + 1) * (long)size + 1;
+        double bytes = 300e6 + cpus * solve + taskPoints * dimension * 50 * 24;
+        long memory = Math.Max(1024, (long)Math.Ceiling(1.5 * bytes / (1 << 20) / 100) * 100);
+        long merge = 300 + (long)(points * dimension / 20_000);
+        string output = Path.Combine(Path.GetFullPath(folder), csv ? "sweep.csv" : "sweep.json");
+        Write(document, folder, "sweep", string.Concat(arguments.Select(a => " " + Quote(a))), tasks, cpus, memory, merge,
+            i => $"sweep-shard-{i}-of-{tasks}.json", output, $"Sweep of {document.Device.Name}: {points} points in {blocks} blocks of {size}");
     }
 
     /// <summary>

@@ -48,7 +48,7 @@ public static class SpreadCommand
             if (shardText is not null) throw new UsageException("--slurm writes the scripts that run every shard; leave out --shard");
             if (tasks < 1 || tasks > definition.Samples) throw new UsageException($"--slurm {tasks}: give 1 to {definition.Samples} tasks (one shard each)");
             SpreadStudyFiles.Prepare(output);
-            SlurmJobScripts.Write(document, definition, output, tasks, threads ?? 2, samples, seed, rules, allowLarge);
+            SlurmJobScripts.ForStudy(document, definition, output, tasks, threads ?? 2, samples, seed, rules, allowLarge);
             return ExitCodes.Ok;
         }
         ShardRange range = ShardRange.Whole(definition.Samples);

@@ -30,6 +30,25 @@ public static class SweepShards
         ["format"] = csv ? "csv" : "json",
     };
 
+    /// <summary>The same arguments as options for the command line of a shard task.</summary>
+    public static IReadOnlyList<string> CommandLine(string[]? vary, string[]? links, string? sweepName, string[]? at, string? point, int? levels,
+        string? labels, double? purity, string? states, bool allowLarge, bool csv)
+    {
+        var a = new List<string>();
+        foreach (string v in vary ?? []) a.AddRange(["--vary", v]);
+        foreach (string l in links ?? []) a.AddRange(["--link", l]);
+        if (sweepName is not null) a.AddRange(["--sweep", sweepName]);
+        foreach (string x in at ?? []) a.AddRange(["--at", x]);
+        if (point is not null) a.AddRange(["--point", point]);
+        if (levels is int n) a.AddRange(["--levels", n.ToString(System.Globalization.CultureInfo.InvariantCulture)]);
+        if (labels is not null) a.AddRange(["--labels", labels]);
+        if (purity is double p) a.AddRange(["--purity", p.ToString("R", System.Globalization.CultureInfo.InvariantCulture)]);
+        if (states is not null) a.AddRange(["--states", states]);
+        if (allowLarge) a.Add("--allow-large");
+        a.Add(csv ? "--csv" : "--json");
+        return a;
+    }
+
     public static int RunShard(DeviceDocument document, SweepSetup setup, LabelMode mode, int? planLevels, int shown, double threshold,
         DeviceSolver solver, string shardText, JsonObject arguments, string folder)
     {
