@@ -50,6 +50,8 @@ public static class SpreadReader
                 string field = "rules." + entry.Key;
                 if (entry.Value.Kind != SourceValueKind.String) { errors.At(entry.Value, field, $"a rule is a text in quotes, {SpreadRuleParser.Syntax}"); continue; }
                 if (rules.Any(x => x.Name == entry.Key)) { errors.At(entry, field, $"rule '{entry.Key}' is given twice"); continue; }
+                // a rule's name names its histogram file, so it is a plain word (no path, no quotes)
+                if (!IsPlainName(entry.Key)) { errors.At(entry, field, $"'{TerminalText.Clean(entry.Key)}': a rule's name is letters, digits, '_' or '-', e.g. detuned_ab"); continue; }
                 var rule = SpreadRuleParser.Parse(entry.Key, entry.Value.Text!, document, out string? problem);
                 if (rule is null) errors.At(entry.Value, field, problem!);
                 else rules.Add(rule with { Line = entry.Value.Line, Column = entry.Value.Column });
@@ -59,6 +61,9 @@ public static class SpreadReader
             errors.At(anchor, "spread", "a spread study needs at least one [spread.NAME] table, e.g. [spread.junctions] with parameters = [\"qa.ej_sum\"] and sigma = \"3%\"");
         return new SpreadDefinition(samples, seed, groups, rules);
     }
+
+    public static bool IsPlainName(string name) =>
+        name.Length is > 0 and <= 64 && name.All(c => char.IsAsciiLetterOrDigit(c) || c is '_' or '-');
 
     private static SpreadGroup? ReadGroup(DeviceDocument document, SourceTable table, string name, ErrorList errors, Dictionary<string, string> owner)
     {

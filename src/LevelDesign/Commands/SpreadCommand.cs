@@ -109,7 +109,7 @@ public static class SpreadCommand
             {
                 int eq = text.IndexOf('=');
                 string name = eq > 0 ? text[..eq].Trim() : "";
-                if (name.Length == 0 || name.Any(c => !(char.IsAsciiLetterOrDigit(c) || c is '_' or '-')))
+                if (!SpreadReader.IsPlainName(name))
                     throw new UsageException($"--rule {text}: write NAME=TEXT with a plain name, e.g. detuned=qa.f01 - qb.f01 > 300 MHz at idle");
                 if (parsed.Any(r => r.Name == name)) throw new UsageException($"--rule {text}: the name '{name}' is used twice");
                 parsed.Add(SpreadRuleParser.Parse(name, text[(eq + 1)..].Trim(), document, out string? problem) ?? throw new UsageException($"--rule {name}: {problem}"));
