@@ -7,16 +7,7 @@ public static class InterruptedRun
 {
     public static CommandResult AfterFirstProgress(params string[] args)
     {
-        var start = new ProcessStartInfo("dotnet")
-        {
-            RedirectStandardOutput = true,
-            RedirectStandardError = true,
-            RedirectStandardInput = true,
-            UseShellExecute = false,
-            WorkingDirectory = RepositoryPaths.Root,
-        };
-        foreach (var a in new[] { Executable.DllPath }.Concat(args)) start.ArgumentList.Add(a);
-        using var process = Process.Start(start)!;
+        using var process = Process.Start(Executable.StartInfo(args))!;
         process.StandardInput.Close();
         var stdout = process.StandardOutput.ReadToEndAsync();
         string? line;
