@@ -6,7 +6,7 @@ namespace LevelDesign;
 
 /// <summary>
 /// The leveldesign executable: with no command it opens the terminal UI (on FILE or the built-in demo);
-/// commands check, describe, spectrum, sweep, crossings, solve, fit, plot, coherence, effective and matrix work without a terminal. Exit codes: see <see cref="ExitCodes"/>.
+/// commands check, describe, spectrum, sweep, crossings, solve, fit, plot, coherence, effective, matrix, spread and merge work without a terminal. Exit codes: see <see cref="ExitCodes"/>.
 /// </summary>
 public static class Program
 {
@@ -30,6 +30,8 @@ public static class Program
             CoherenceCommand.Create(),
             EffectiveCommand.Create(),
             MatrixCommand.Create(),
+            SpreadCommand.Create(),
+            MergeCommand.Create(),
         };
         root.SetAction(parse => OpenInteractive(parse.GetValue(file)));
         var parse = root.Parse(args);

@@ -14,6 +14,7 @@ public sealed class AnalysisCommandTests
     public static TheoryData<string, string, string, string> Ranges() => new()
     {
         { "pair.toml", "qc_flux", "0.15mA", "1.05mA" },
+        { "pair-spread.toml", "qc_flux", "0.15mA", "1.05mA" },
         { "single.toml", "q_flux", "0", "0.5" },
         { "fluxonium.toml", "f_flux", "0.4", "0.6" },
         { "defect.toml", "tls_energy", "5.0GHz", "5.2GHz" },

@@ -45,6 +45,9 @@ public sealed partial class DeviceDocument
             _source = content.Source,
             _options = options,
         };
+        var spreadErrors = new ErrorList(path);
+        document.Spread = Core.Spread.SpreadReader.Read(document, content.Source.Tables, spreadErrors);
+        if (spreadErrors.Count > 0) return new DeviceLoadResult(null, spreadErrors.Items);
         return new DeviceLoadResult(document, errors);
     }
 
@@ -85,6 +88,9 @@ public sealed partial class DeviceDocument
     public IReadOnlyList<OperatingPoint> Points { get; init; } = [];
     public IReadOnlyList<SweepDefinition> Sweeps { get; init; } = [];
 
+    /// <summary>The fabrication-spread study of [spread] and [rules], or null when the file has none.</summary>
+    public Core.Spread.SpreadDefinition? Spread { get; private set; }
+
     /// <summary>The noise and loss figures of the coherence budget from [coherence] (common-practice defaults where absent).</summary>
     public Analysis.CoherenceInputs Coherence { get; private init; } = new();
 
@@ -96,10 +102,13 @@ public sealed partial class DeviceDocument
 
     public BiasDefinition? Bias(string name) => Biases.FirstOrDefault(b => b.Name == name);
 
-    /// <summary>The device with the named biases (control values) or parameter paths ("qa.flux") set.</summary>
-    public Device At(IReadOnlyDictionary<string, double> values)
+    /// <summary>
+    /// The device with the named biases (control values) or parameter paths ("qa.flux") set, on top of
+    /// <paramref name="from"/> (default: the file's device; a spread study passes a drawn chip).
+    /// </summary>
+    public Device At(IReadOnlyDictionary<string, double> values, Device? from = null)
     {
-        var device = Device;
+        var device = from ?? Device;
         foreach (var (key, value) in values)
         {
             if (Bias(key) is BiasDefinition bias) device = device.WithParameter(bias.Target, bias.ToParameter(value));
@@ -113,7 +122,8 @@ public sealed partial class DeviceDocument
     /// The device at one point of a sweep: each axis's target set to its value and each linked path to
     /// Scale·value + Shift, on top of <paramref name="start"/> (default: the device at the file's bias values).
     /// </summary>
-    public Device Resolve(IReadOnlyList<SweepAxis> axes, IReadOnlyList<double> values, IReadOnlyDictionary<string, double>? start = null)
+    public Device Resolve(IReadOnlyList<SweepAxis> axes, IReadOnlyList<double> values, IReadOnlyDictionary<string, double>? start = null,
+        Device? from = null)
     {
         var settings = new Dictionary<string, double>(start ?? new Dictionary<string, double>());
         for (int i = 0; i < axes.Count; i++)
@@ -121,7 +131,7 @@ public sealed partial class DeviceDocument
             settings[axes[i].Path] = values[i];
             foreach (var link in axes[i].Links) settings[link.Path] = link.Scale * values[i] + link.Shift;
         }
-        return At(settings);
+        return At(settings, from);
     }
 
     /// <summary>The device at a named operating point.</summary>

@@ -15,7 +15,7 @@ namespace LevelDesign.Core.DeviceFiles;
 public static partial class DeviceReader
 {
     public static readonly IReadOnlyList<string> Sections =
-        ["device", "truncation", "capacitance_matrix", "elements", "couplers", "biases", "points", "sweeps", "coherence"];
+        ["device", "truncation", "capacitance_matrix", "elements", "couplers", "biases", "points", "sweeps", "coherence", "spread", "rules"];
 
     private static readonly IReadOnlyList<string> DeviceKeys = ["name", "description", "purity_threshold"];
 
@@ -60,6 +60,8 @@ public static partial class DeviceReader
                 errors.At(table, table.Name, $"unknown table [{table.Name}]{EditDistance.Suggestion(head, Sections)} (tables: {string.Join(", ", Sections)})");
                 continue;
             }
+            // read against the finished document by Spread.SpreadReader (DeviceDocument.Parse)
+            if (head is "spread" or "rules") continue;
             bool single = head is "device" or "truncation" or "capacitance_matrix" or "coherence";
             if (single)
             {

@@ -33,5 +33,13 @@ public sealed record SweepOptions
     /// <summary>Two candidate labels of one state closer than this are called ambiguous.</summary>
     public double AmbiguityMargin { get; init; } = Labeller.DefaultAmbiguityMargin;
 
+    /// <summary>
+    /// When set, only these stretches of flat point indices [Start, End) are computed, each cold-started at its start and
+    /// warm-started forward, and a point whose predecessor was not computed is labelled afresh: the numbers then depend
+    /// only on the stretches, not on the cores or the order of the work (see <see cref="SweepBlocks"/>). Null: all
+    /// points, shared out between workers as they go (fastest, but the last digits depend on where workers meet).
+    /// </summary>
+    public IReadOnlyList<(int Start, int End)>? Blocks { get; init; }
+
     public DeviceSolver CreateSolver() => Solver ?? new DeviceSolver();
 }

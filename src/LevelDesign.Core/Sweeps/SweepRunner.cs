@@ -29,6 +29,28 @@ public static class SweepRunner
         int workers = Math.Clamp(options.Parallelism, 1, total);
         int done = 0;
 
+        if (options.Blocks is { } blocks)
+        {
+            // fixed stretches, each walked forward from a cold start by whichever worker takes it
+            int nextBlock = -1, wanted = blocks.Sum(x => x.End - x.Start);
+            var walkers = Enumerable.Range(0, Math.Clamp(options.Parallelism, 1, Math.Max(1, blocks.Count))).Select(_ => Task.Run(() =>
+            {
+                int b;
+                while (!cancellation.IsCancellationRequested && (b = Interlocked.Increment(ref nextBlock)) < blocks.Count)
+                {
+                    var pointSolver = new PointSolver(solver, options);
+                    for (int i = blocks[b].Start; i < blocks[b].End && !cancellation.IsCancellationRequested; i++)
+                    {
+                        solved[i] = pointSolver.Solve(resolve(axisValues[i]), plan.Levels);
+                        progress?.Report(new SweepProgress(Interlocked.Increment(ref done), wanted));
+                    }
+                }
+            })).ToArray();
+            await Task.WhenAll(walkers).ConfigureAwait(false);
+            var kept = Label(plan, options, axisValues, solved);
+            return new SweepResult(plan, kept, kept.Count == wanted && !cancellation.IsCancellationRequested);
+        }
+
         // Workers come in pairs on contiguous segments: one walks forward from the segment's start, the other
         // backward from its end, each warm-started by the point it solved last, and they stop where they meet.
         // Cost varies a lot along a sweep (crossings need more iterations), so fixed halves would leave one core
@@ -71,6 +93,8 @@ public static class SweepRunner
         for (int i = 0; i < total; i++)
         {
             int previous = SweepGrid.Predecessor(plan, i);
+            // in fixed blocks a point after a gap starts a fresh chain of labels, as it would in the run that owns the gap
+            if (options.Blocks is not null) { neighbour[i] = previous >= 0 && solved[previous] is not null ? previous : -1; continue; }
             while (previous >= 0 && solved[previous] is null) previous--;
             neighbour[i] = previous;
         }

@@ -44,30 +44,51 @@ public static class SweepCommand
         var output = new Option<string?>("--out") { Description = "write the result to this file instead of stdout" };
         var allowLarge = CommonOptions.AllowLarge();
         var states = CommonOptions.States();
+        var shard = new Option<string?>("--shard") { Description = "I/N: compute only the I-th of N runs of points of a 1-D sweep and write DIR/sweep-shard-I-of-N.json (--out names the folder); 'leveldesign merge' joins them into exactly the unsharded output" };
+        var slurm = new Option<int?>("--slurm") { Description = "TASKS: write a Slurm job array for this 1-D sweep in --out DIR (TASKS shards of 2 CPUs and a dependent merge into DIR/sweep.json or .csv) instead of computing" };
         var command = new Command("sweep", "the labelled spectrum at every point of a bias sweep (parallel); progress on stderr, Ctrl-C keeps finished points")
-            { file, vary, link, sweep, at, point, levels, states, labels, purity, json, csv, output, allowLarge };
+            { file, vary, link, sweep, at, point, levels, states, labels, purity, json, csv, output, allowLarge, shard, slurm };
         command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(vary), parse.GetValue(link), parse.GetValue(sweep), parse.GetValue(at),
             parse.GetValue(point), parse.GetValue(levels), parse.GetValue(labels), parse.GetValue(purity), parse.GetValue(json), parse.GetValue(csv),
-            parse.GetValue(output), parse.GetValue(allowLarge), parse.GetValue(states)));
+            parse.GetValue(output), parse.GetValue(allowLarge), parse.GetValue(states), parse.GetValue(shard), parse.GetValue(slurm)));
         return command;
     }
 
     public static int Run(string path, string[]? vary, string[]? links, string? sweepName, string[]? at, string? point, int? levels,
-        string? labels, double? purity, bool json, bool csv, string? output, bool allowLarge, string? states = null) => CommandGuard.Run(path, () =>
+        string? labels, double? purity, bool json, bool csv, string? output, bool allowLarge, string? states = null, string? shard = null, int? slurm = null) => CommandGuard.Run(path, () =>
     {
         var selection = StateSelection.Auto;
         if (states is not null && !StateSelection.TryParse(states, out selection, out string stateError)) throw new UsageException($"--states {stateError}");
         CommandGuard.OneFormat(json, csv);
         var mode = CommandGuard.LabelMode(labels);
         if (purity is double p && !(p > 0 && p <= 1)) throw new UsageException($"--purity {p}: give a purity in (0, 1], e.g. 0.9");
-        OutputFile.Check(output, path);
+        if (slurm is not null && shard is not null) throw new UsageException("--slurm writes the scripts that run every shard; leave out --shard");
+        if (shard is null && slurm is null) OutputFile.Check(output, path);
+        else if (output is null) throw new UsageException($"{(shard is null ? "--slurm" : "--shard")} needs --out DIR: the folder for the shard files (sweep-shard-I-of-N.json) and the merged sweep");
         var document = CommandGuard.Load(path, allowLarge);
         if (selection.UnknownElement(document.Device) is string unknown) throw new UsageException(unknown);
         double threshold = CommonOptions.PurityThreshold(purity, document);
         var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 2);
+        if (slurm is int tasks)
+        {
+            if (setup.Axes.Count != 1) throw new UsageException("--slurm splits a 1-D sweep; a grid (two --vary) is not sharded");
+            int blockCount = SweepBlocks.Count(setup.Axes[0].Count);
+            if (tasks < 1 || tasks > blockCount) throw new UsageException($"--slurm {tasks}: give 1 to {blockCount} tasks (this sweep runs in {blockCount} blocks of {SweepBlocks.Size(setup.Axes[0].Count)} points)");
+            SpreadStudyFiles.Prepare(output!);
+            SlurmJobScripts.ForSweep(document, output!, tasks, 2, setup.Axes[0].Count,
+                SweepShards.CommandLine(vary, links, sweepName, at, point, levels, labels, purity, states, allowLarge, csv), csv);
+            return ExitCodes.Ok;
+        }
         var solver = new DeviceSolver { Selection = selection };
         var (planLevels, shown) = SweepExecution.Levels(setup, levels, solver);
-        var result = SweepExecution.Run(setup, mode, planLevels, solver);
+        if (shard is not null)
+        {
+            var arguments = SweepShards.Arguments(vary, links, sweepName, at, point, levels, labels, purity, states, allowLarge, csv);
+            return SweepShards.RunShard(document, setup, mode, planLevels, shown, threshold, solver, shard, arguments, output!);
+        }
+        // a 1-D sweep runs in fixed blocks, so its numbers do not depend on the cores or on a split into shards
+        var blocks = setup.Axes.Count == 1 ? SweepBlocks.All(setup.Axes[0].Count) : null;
+        var result = SweepExecution.Run(setup, mode, planLevels, solver, blocks);
         var table = SweepTable.From(result, shown, threshold);
         int total = SweepGrid.PointCount(result.Plan);
         if (!result.Completed) Console.Error.WriteLine($"cancelled: keeping the {result.Points.Count} of {total} points computed");

@@ -11,13 +11,15 @@ namespace LevelDesign.Commands;
 /// </summary>
 public static class SweepExecution
 {
-    public static SweepResult Run(SweepSetup setup, LabelMode labels, int? levels, DeviceSolver? solver = null)
+    /// <param name="blocks">Fixed stretches to compute (see <see cref="SweepOptions.Blocks"/>); null: every point, shared out as workers go.</param>
+    public static SweepResult Run(SweepSetup setup, LabelMode labels, int? levels, DeviceSolver? solver = null,
+        IReadOnlyList<(int Start, int End)>? blocks = null)
     {
         var plan = new SweepPlan(setup.Axes, labels, levels);
         var problems = SweepGrid.Validate(plan);
         if (problems.Count > 0) throw new UsageException(string.Join("; ", problems));
-        var options = new SweepOptions { Solver = solver ?? new DeviceSolver() };
-        var progress = new ProgressBar(SweepGrid.PointCount(plan));
+        var options = new SweepOptions { Solver = solver ?? new DeviceSolver(), Blocks = blocks };
+        var progress = new ProgressBar(blocks?.Sum(b => b.End - b.Start) ?? SweepGrid.PointCount(plan));
         return WithCancel(token => SweepRunner.RunAsync(setup.Resolve, plan, options, progress, token), progress.Finish);
     }
 

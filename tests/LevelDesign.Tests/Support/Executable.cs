@@ -20,7 +20,8 @@ public static class Executable
 
     public static CommandResult Run(params string[] args) => Run(args, TimeSpan.FromMinutes(2));
 
-    public static CommandResult Run(string[] args, TimeSpan timeout)
+    /// <summary>`dotnet leveldesign.dll ARGS` from the repository root, with all three standard streams redirected.</summary>
+    public static ProcessStartInfo StartInfo(IEnumerable<string> args)
     {
         var start = new ProcessStartInfo("dotnet")
         {
@@ -32,7 +33,12 @@ public static class Executable
         };
         start.ArgumentList.Add(DllPath);
         foreach (var a in args) start.ArgumentList.Add(a);
-        using var process = Process.Start(start)!;
+        return start;
+    }
+
+    public static CommandResult Run(string[] args, TimeSpan timeout)
+    {
+        using var process = Process.Start(StartInfo(args))!;
         process.StandardInput.Close();
         var stdout = process.StandardOutput.ReadToEndAsync();
         var stderr = process.StandardError.ReadToEndAsync();

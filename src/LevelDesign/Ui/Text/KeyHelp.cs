@@ -7,8 +7,7 @@ public static class KeyHelp
     [
         ("F1", "this help (Esc or F1 again to leave)"),
         ("Tab / Shift+Tab", "move between board, parameters and the page"),
-        ("F3", "next page: states → shifts → spectrum → crossings → quantities along the sweep"),
-        ("Enter (quantities page)", "choose what is plotted along the sweep: zz:qa:qb, qa.f01, chi2:qa:ra, jeff:qa:qb, purity:qa1 … (comma-separated; empty = every ZZ and the purity of each single excitation); ← → move the cursor shared with the spectrum"),
+        ("F3", "next page: states → shifts → spectrum → crossings → quantities"),
         ("F4", "wide page: hide or show the board column (small terminals)"),
         ("↑ ↓ PgUp PgDn Home End", "move in lists; scroll pages"),
         ("Enter or F2 (parameters)", "edit the value in place, units as in the file (\"210 MHz\", \"0.31 Φ0\"); a value marked ← bias edits that bias (the file's biases override element values); · marks values derived from others"),
