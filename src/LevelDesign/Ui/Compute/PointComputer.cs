@@ -32,7 +32,7 @@ public static class PointComputer
             { ConvergenceProblem = convergenceProblem, Coherence = coherence, CoherenceProblem = coherenceProblem, Warnings = TruncationWarnings.For(device) };
     }
 
-    /// <summary>A snapshot of an already computed spectrum (a sweep point), without convergence.</summary>
-    public static PointSnapshot FromSpectrum(DressedSpectrum spectrum, DateTime computedAt) =>
-        new(spectrum, DerivedQuantities.From(spectrum), null, computedAt, TimeSpan.Zero);
+    /// <summary>A snapshot of a computed sweep point (its quantities as the sweep derived them), without convergence.</summary>
+    public static PointSnapshot FromSweepPoint(Core.Sweeps.SweepPoint point, DateTime computedAt) =>
+        new(point.Spectrum, point.Derived, null, computedAt, TimeSpan.Zero);
 }

@@ -237,7 +237,7 @@ public sealed partial class MainWindow
     private void OnCursorMoved(int index)
     {
         if (_sweep is null || index >= _sweep.Points.Count) { _cursorSnapshot = null; RefreshPage(); return; }
-        _cursorSnapshot = PointComputer.FromSpectrum(_sweep.Points[index].Spectrum, DateTime.Now);
+        _cursorSnapshot = PointComputer.FromSweepPoint(_sweep.Points[index], DateTime.Now);
         RefreshPage();
     }
 
