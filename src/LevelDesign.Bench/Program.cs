@@ -19,6 +19,11 @@ if (Array.IndexOf(args, "--write-line") is int at and >= 0 && at + 2 < args.Leng
     File.WriteAllText(args[at + 2], Scale.LineToml(int.Parse(args[at + 1]), 4));
     return;
 }
+if (Array.IndexOf(args, "--write-matrix") is int m and >= 0 && m + 2 < args.Length)
+{
+    MatrixExport.Run(args[m + 1], args[m + 2], m + 3 < args.Length ? int.Parse(args[m + 3]) : 83);
+    return;
+}
 if (args.Contains("--scale"))
 {
     Scale.Run(args.Contains("--with-dense"));
