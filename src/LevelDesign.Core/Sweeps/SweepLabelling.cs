@@ -152,6 +152,16 @@ internal sealed class SweepLabelling
     /// <summary>Drops a solved point once it is labelled and every successor has its overlaps.</summary>
     private void ReleaseIfDone(int i)
     {
-        if (_points[i] is not null && _waitingSuccessors[i] == 0) _solved[i] = null;
+        if (_points[i] is null || _waitingSuccessors[i] != 0 || _solved[i] is not SolvedPoint point) return;
+        _solved[i] = null;
+        // Each point of a large module leaves its vectors, weights and matrix copies (about 80 MB at 46k states) on the
+        // large-object heap, which is collected only with generation 2; left to its own budget the heap grew with every
+        // point (51-point lattice sweep: 2.9 GB peak). Collecting once a point is done bounds it (measured: see
+        // docs/performance.md); a full collection of a heap of large arrays takes milliseconds against seconds a point.
+        if (!_keepVectors && (long)point.Dimension * point.Count * sizeof(double) >= LargePointBytes)
+            GC.Collect(2, GCCollectionMode.Forced, blocking: true);
     }
+
+    /// <summary>Points whose vectors take at least this much are followed by a full collection when dropped.</summary>
+    private const long LargePointBytes = 8L << 20;
 }
