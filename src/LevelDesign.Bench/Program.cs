@@ -24,6 +24,11 @@ if (Array.IndexOf(args, "--write-matrix") is int m and >= 0 && m + 2 < args.Leng
     MatrixExport.Run(args[m + 1], args[m + 2], m + 3 < args.Length ? int.Parse(args[m + 3]) : 83);
     return;
 }
+if (Array.IndexOf(args, "--count-cost") is int cc and >= 0 && cc + 1 < args.Length)
+{
+    CountCost.Run(args[cc + 1], args.Skip(cc + 2).TakeWhile(a => !a.StartsWith("--")).Select(int.Parse).ToArray());
+    return;
+}
 if (args.Contains("--scale"))
 {
     Scale.Run(args.Contains("--with-dense"));

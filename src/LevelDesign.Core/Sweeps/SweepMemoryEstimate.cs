@@ -21,6 +21,12 @@ public static class SweepMemoryEstimate
     /// <summary>How far (in points per worker) solving may run ahead of labelling when points do not keep vectors.</summary>
     public const int InFlightPerWorker = 2;
 
+    /// <summary>
+    /// The runtime, the code and the young generation of the collector (blocking workstation GC: a large gen0): the
+    /// peak of a 2-point sweep of a small device.
+    /// </summary>
+    private const double RuntimeBytes = 200L << 20;
+
     /// <summary>Bytes per stored lower-triangle entry of one point's matrix: complex values, the solver's real CSR copy (both triangles) and assembly scratch.</summary>
     private const int MatrixBytesPerEntry = 16 + 2 * 12 + 12;
 
@@ -44,9 +50,10 @@ public static class SweepMemoryEstimate
         // warm starts read the three points before (their vectors, and the matrices their problems still hold)
         double perWorker = solve + 3 * (vectors + matrix);
         double held = keepVectors ? points * vectors : (InFlightPerWorker + 1) * workers * vectors;
-        // every point: energies, labels with their top components, the bare → dressed index, derived quantities
-        double compact = points * (dimension * 4 + count * 400 + 16_384);
-        return workers * perWorker + held + compact;
+        // every point: its basis's bare energies and the bare → dressed index (12 bytes a state), energies, labels with
+        // their top components, derived quantities
+        double compact = points * (dimension * 12 + count * 400 + 16_384);
+        return workers * perWorker + held + compact + RuntimeBytes;
     }
 
     /// <summary>
