@@ -3,7 +3,8 @@
 # Starts the UI in its own tmux session (100×30) on a copy of DEVICE, waits until it shows "⟳ computing", then sends
 # KEYS arrow keys (Down/Up alternately on the board, which moves its '›' marker) and times, for each, how long until
 # the screen shows the change (polling tmux every few milliseconds). Only keys answered while the status still said
-# "computing" are counted as "while computing". Prints every latency, the median and the largest.
+# "computing" are counted as "while computing"; the others measure the same thing on an idle UI (tmux and polling
+# included). Prints every latency, the median and the largest.
 # Usage: src/LevelDesign.Bench/ui-latency.sh devices/line4.toml [KEYS] [COMMAND]
 #   COMMAND defaults to the Release build: src/LevelDesign/bin/Release/net10.0/leveldesign
 set -euo pipefail
@@ -21,7 +22,7 @@ now_ms() { date +%s%3N; }
 for _ in $(seq 200); do capture | grep -qF "⟳ computing" && break; sleep 0.05; done
 capture | grep -qF "⟳ computing" || { echo "the UI never showed '⟳ computing'"; capture; exit 1; }
 echo "load: $(cut -d' ' -f1-3 /proc/loadavg)"
-latencies=(); during=()
+latencies=(); during=(); after=()
 for ((k = 0; k < KEYS; k++)); do
   key=Down; ((k % 2)) && key=Up
   before=$(capture)
@@ -32,12 +33,13 @@ for ((k = 0; k < KEYS; k++)); do
   done
   ms=$(( $(now_ms) - start ))
   latencies+=("$ms")
-  if capture | grep -qF "⟳ computing"; then during+=("$ms"); fi
+  if capture | grep -qF "⟳ computing"; then during+=("$ms"); else after+=("$ms"); fi
   sleep 0.15
 done
-status=$(capture | grep -F "│ eigen" | head -1 | tr -s ' ')
+status=$(capture | grep -F "│ eigen" | head -1 | tr -s ' ' || true)
 echo "status after the keys: $status"
-stats() { printf '%s\n' "$@" | sort -n | awk '{a[NR]=$1} END {if (NR) printf "n=%d median %d ms, largest %d ms", NR, a[int((NR+1)/2)], a[NR]; else printf "n=0"}'; }
+stats() { (($#)) || { printf 'n=0'; return; }; printf '%s\n' "$@" | sort -n | awk '{a[NR]=$1} END {if (NR) printf "n=%d median %d ms, largest %d ms", NR, a[int((NR+1)/2)], a[NR]; else printf "n=0"}'; }
 echo "every key (ms): ${latencies[*]}"
 echo "all keys: $(stats "${latencies[@]}")"
 echo "keys answered while computing: $(stats "${during[@]}")"
+echo "keys answered after it (the same measurement on an idle UI): $(stats "${after[@]}")"
