@@ -108,7 +108,7 @@ public static class SweepRunner
         bool keep = SweepMemoryEstimate.KeepsVectors(options.KeepVectors, total, dimension, count, complex);
         if (options.MemoryLimitBytes is long limit && SweepMemoryEstimate.Refusal(dimension, problem.Hamiltonian.StoredEntries,
                 count, total, workers, keep, complex, iterativeFrom, limit) is string refusal)
-            throw new InvalidOperationException(refusal);
+            throw new SweepTooLargeException(refusal);
         return keep;
     }
 }

@@ -59,7 +59,7 @@ public class SweepMemoryTests
         var progress = new Progress<SweepProgress>(_ => Interlocked.Increment(ref reported));
         var limit = 300L << 20;   // one worker's solve of 1,287 states fits, the vectors of 200 points (about 150 MB) with it do not
         var axis = new SweepAxis("c.flux", 0.2, 0.44, 200, []);
-        var e = await Assert.ThrowsAsync<InvalidOperationException>(() => SweepRunner.RunAsync(ParameterResolver.ForPaths(Module, [axis]),
+        var e = await Assert.ThrowsAsync<SweepTooLargeException>(() => SweepRunner.RunAsync(ParameterResolver.ForPaths(Module, [axis]),
             new SweepPlan([axis]), new SweepOptions { KeepVectors = true, MemoryLimitBytes = limit }, progress));
         Assert.Contains("200 points", e.Message);
         Assert.Contains("use at most", e.Message);
@@ -68,7 +68,7 @@ public class SweepMemoryTests
 
         // without kept vectors the points are not what fills memory: fewer states or a smaller truncation is
         var tiny = 100L << 20;
-        e = await Assert.ThrowsAsync<InvalidOperationException>(() => SweepRunner.RunAsync(ParameterResolver.ForPaths(Module, [axis]),
+        e = await Assert.ThrowsAsync<SweepTooLargeException>(() => SweepRunner.RunAsync(ParameterResolver.ForPaths(Module, [axis]),
             new SweepPlan([axis]), new SweepOptions { KeepVectors = false, MemoryLimitBytes = tiny }));
         Assert.Contains("lower the number of states computed", e.Message);
 
