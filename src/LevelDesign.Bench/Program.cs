@@ -19,6 +19,16 @@ if (Array.IndexOf(args, "--write-line") is int at and >= 0 && at + 2 < args.Leng
     File.WriteAllText(args[at + 2], Scale.LineToml(int.Parse(args[at + 1]), 4));
     return;
 }
+if (Array.IndexOf(args, "--write-matrix") is int m and >= 0 && m + 2 < args.Length)
+{
+    MatrixExport.Run(args[m + 1], args[m + 2], m + 3 < args.Length ? int.Parse(args[m + 3]) : 83);
+    return;
+}
+if (Array.IndexOf(args, "--count-cost") is int cc and >= 0 && cc + 1 < args.Length)
+{
+    CountCost.Run(args[cc + 1], args.Skip(cc + 2).TakeWhile(a => !a.StartsWith("--")).Select(int.Parse).ToArray());
+    return;
+}
 if (args.Contains("--scale"))
 {
     Scale.Run(args.Contains("--with-dense"));

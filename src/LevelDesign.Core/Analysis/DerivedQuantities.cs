@@ -83,8 +83,9 @@ public sealed class DerivedQuantities
         int k = s.DressedIndexOf(StateWith(s, qubit, 1));
         if (k < 0) return double.NaN;
         double weight = 0;
+        var weights = s.RequireWeights();
         for (int j = 0; j < s.Dimension; j++)
-            if (s.Basis.States[j][resonator] > 0) weight += s.Weights[k * s.Dimension + j];
+            if (s.Basis.States[j][resonator] > 0) weight += weights[k * s.Dimension + j];
         return weight;
     }
 

@@ -58,5 +58,6 @@ public static class DressedMatrixElements
 
     /// <summary>⟨bare j|dressed k⟩.</summary>
     public static Complex Component(DressedSpectrum s, int bare, int dressed) =>
-        s.RealVectors is double[] real ? real[dressed * s.Dimension + bare] : s.ComplexVectors![dressed * s.Dimension + bare];
+        s.RealVectors is double[] real ? real[dressed * s.Dimension + bare]
+        : s.ComplexVectors is Complex[] complex ? complex[dressed * s.Dimension + bare] : throw DressedSpectrum.VectorsNotKept();
 }

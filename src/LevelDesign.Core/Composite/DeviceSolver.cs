@@ -67,6 +67,12 @@ public sealed class DeviceSolver
 
     public const int DefaultIterativeMinimumDimension = 800;
 
+    /// <summary>Stops this solver's iterative solves between iterations (the UI cancels a point an edit superseded).</summary>
+    public CancellationToken Cancellation { get; init; }
+
+    /// <summary>Told after every iteration of this solver's iterative single-point solves (the UI shows it).</summary>
+    public IProgress<SolveProgress>? Progress { get; init; }
+
     /// <summary>The states <see cref="Selection"/> asks for at this point.</summary>
     public SelectedStates Select(CompositeProblem problem) => Selection.Resolve(problem);
 
@@ -87,7 +93,7 @@ public sealed class DeviceSolver
 
     /// <summary>One standalone point's eigenpairs (no warm start, so it does not depend on any other point).</summary>
     internal SolvedPoint SolvePoint(CompositeProblem problem, int count) =>
-        PointEigenSolve.Solve(EigenSolver, problem, count, new BlockDavidson(), IterativeMinimumDimension);
+        PointEigenSolve.Solve(EigenSolver, problem, count, new BlockDavidson { Cancellation = Cancellation, Progress = Progress }, IterativeMinimumDimension);
 
     private static DressedSpectrum Finish(SolvedPoint point, SelectedStates selected)
     {

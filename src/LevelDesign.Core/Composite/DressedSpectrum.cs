@@ -34,6 +34,40 @@ public sealed class DressedSpectrum
         for (int k = 0; k < labels.Length; k++) _dressedOfBare[labels[k].BareIndex] = k;
     }
 
+    /// <summary>The same spectrum without its eigenvectors and bare weights (see <see cref="WithoutVectors"/>).</summary>
+    private DressedSpectrum(DressedSpectrum full)
+    {
+        Device = full.Device;
+        Bare = full.Bare;
+        Couplers = full.Couplers;
+        Basis = full.Basis;
+        GroundEnergy = full.GroundEnergy;
+        Energies = full.Energies;
+        Labels = full.Labels;
+        SolverName = full.SolverName;
+        IsComplex = full.IsComplex;
+        MaxResidual = full.MaxResidual;
+        Selection = full.Selection;
+        _dressedOfBare = full._dressedOfBare;
+    }
+
+    /// <summary>
+    /// A copy that keeps energies, labels (with each state's largest components) and everything else except the
+    /// D-long eigenvectors and weights: what a large sweep keeps of each point once its labels and derived quantities
+    /// are computed (46k states × 72 computed: 53 MB a point with them, about 0.2 MB without).
+    /// </summary>
+    public DressedSpectrum WithoutVectors() => Weights is null ? this : new DressedSpectrum(this);
+
+    /// <summary>Whether the eigenvectors and weights are kept (false for the points of a large sweep).</summary>
+    public bool HasVectors => Weights is not null;
+
+    /// <summary>The weights, or a clear refusal for a point whose vectors a sweep did not keep.</summary>
+    internal double[] RequireWeights() => Weights ?? throw VectorsNotKept();
+
+    internal static InvalidOperationException VectorsNotKept() =>
+        new("the eigenvectors of this sweep point were not kept (a large sweep keeps only energies, labels and derived " +
+            "quantities); compute the point alone, or sweep with the vectors kept (fewer points or states)");
+
     /// <summary>Dressed states closer than this (GHz, 1 Hz) count as exactly degenerate.</summary>
     public const double DegenerateGHz = 1e-9;
 
@@ -66,8 +100,8 @@ public sealed class DressedSpectrum
     /// <summary>Dressed energies above the dressed ground, ascending (GHz).</summary>
     public double[] Energies { get; }
 
-    /// <summary>|⟨bare j|dressed k⟩|², column-major: Weights[k*Dimension + j].</summary>
-    public double[] Weights { get; }
+    /// <summary>|⟨bare j|dressed k⟩|², column-major: Weights[k*Dimension + j]; null when not kept (<see cref="HasVectors"/>).</summary>
+    public double[]? Weights { get; }
 
     public double[]? RealVectors { get; }
     public Complex[]? ComplexVectors { get; }

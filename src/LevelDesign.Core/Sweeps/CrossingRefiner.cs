@@ -30,7 +30,7 @@ internal static class CrossingRefiner
         CancellationToken cancellation = default)
     {
         var sampler = new SeparationSampler(solver, resolve, states, SampleCount(sweep, states));
-        var sweepSamples = sweep.Points.Select(p => sampler.FromSweepPoint(p.AxisValues[0], p.Spectrum)).ToArray();
+        var sweepSamples = sweep.Points.Select(p => sampler.FromSweepPoint(p.AxisValues[0], p.Spectrum)).OfType<SeparationSample>().ToArray();
         var order = Enumerable.Range(0, candidates.Count)
             .OrderBy(c => candidates[c].SignChange ? 0 : 1)
             .ThenBy(c => Math.Min(candidates[c].Lower, candidates[c].Upper)).ThenBy(c => Math.Max(candidates[c].Lower, candidates[c].Upper))

@@ -41,15 +41,14 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
         return (Build(point, weights, labels), ambiguous);
     }
 
-    public (DressedSpectrum Spectrum, bool Ambiguous) Next(SolvedPoint point, LabelInputs inputs, SolvedPoint previous,
-        DressedSpectrum previousSpectrum)
+    /// <param name="previousSpectrum">The labelled neighbour (its labels and basis only: its vectors may be gone).</param>
+    public (DressedSpectrum Spectrum, bool Ambiguous) Next(SolvedPoint point, LabelInputs inputs, DressedSpectrum previousSpectrum)
     {
         var weights = inputs.Weights;
-        int n = point.Dimension, count = point.Count;
         // the neighbour's labels, as indices of this point's basis
-        var previousLabels = new int[previous.Count];
-        for (int i = 0; i < previous.Count; i++)
-            previousLabels[i] = point.Problem.Basis.IndexOf(previous.Problem.Basis.States[previousSpectrum.Labels[i].BareIndex]);
+        var previousLabels = new int[previousSpectrum.Count];
+        for (int i = 0; i < previousLabels.Length; i++)
+            previousLabels[i] = point.Problem.Basis.IndexOf(previousSpectrum.Basis.States[previousSpectrum.Labels[i].BareIndex]);
 
         return mode == LabelMode.ByOrder
             ? ByOrder(point, weights, inputs.Top, previousLabels)

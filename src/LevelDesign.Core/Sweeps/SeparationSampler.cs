@@ -31,9 +31,13 @@ internal sealed class SeparationSampler
     /// <summary>Dense solves done so far.</summary>
     public int Solves => _solves;
 
-    /// <summary>A solved sweep point as a sample: its iterative solve is accurate enough to start a refinement from, not to report.</summary>
-    public SeparationSample FromSweepPoint(double bias, DressedSpectrum spectrum) =>
-        Reduce(bias, spectrum.Energies, spectrum.Weights, spectrum.Basis, exact: false);
+    /// <summary>
+    /// A solved sweep point as a sample: its iterative solve is accurate enough to start a refinement from, not to
+    /// report. Null when the sweep did not keep the point's weights (a large module): the refinement then starts from
+    /// its own solves.
+    /// </summary>
+    public SeparationSample? FromSweepPoint(double bias, DressedSpectrum spectrum) =>
+        spectrum.Weights is double[] weights ? Reduce(bias, spectrum.Energies, weights, spectrum.Basis, exact: false) : null;
 
     /// <summary>The standalone solve at this bias (cached): dense, or cold iterative for a large module.</summary>
     public SeparationSample At(double bias) => _solved.GetOrAdd(bias, b => new Lazy<SeparationSample>(() => Solve(b))).Value;

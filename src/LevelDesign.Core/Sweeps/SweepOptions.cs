@@ -41,5 +41,16 @@ public sealed record SweepOptions
     /// </summary>
     public IReadOnlyList<(int Start, int End)>? Blocks { get; init; }
 
+    /// <summary>
+    /// Keep every point's eigenvectors and bare weights in the result (needed for matrix elements, coherence budgets,
+    /// root refinement from the scan). Null: keep them when all points' vectors take at most
+    /// <see cref="SweepMemoryEstimate.KeptVectorsBudgetBytes"/>; otherwise a point keeps only energies, labels and
+    /// derived quantities, and the sweep walks in order so only a few points hold vectors at once.
+    /// </summary>
+    public bool? KeepVectors { get; init; }
+
+    /// <summary>Refuse, before computing, a sweep estimated to need more than this (bytes); null: no limit.</summary>
+    public long? MemoryLimitBytes { get; init; } = DeviceFiles.CompositeSizeEstimate.DefaultLimitBytes;
+
     public DeviceSolver CreateSolver() => Solver ?? new DeviceSolver();
 }

@@ -11,4 +11,10 @@ public sealed record SweepPoint(int Index, IReadOnlyList<double> AxisValues, Dre
 {
     /// <summary>For each quantity, the lowest purity of the labelled states it is read from (DerivedQuantities.NamedPurities).</summary>
     public IReadOnlyDictionary<string, double> QuantityPurities { get; init; } = new Dictionary<string, double>();
+
+    /// <summary>
+    /// Everything derived from this point's spectrum, computed while its vectors were there (a large sweep keeps no
+    /// vectors, see <see cref="DressedSpectrum.HasVectors"/>, so they cannot be derived again from <see cref="Spectrum"/>).
+    /// </summary>
+    public required Analysis.DerivedQuantities Derived { get; init; }
 }

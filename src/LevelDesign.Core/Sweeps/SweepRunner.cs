@@ -1,4 +1,3 @@
-using LevelDesign.Core.Analysis;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.Model;
 
@@ -8,7 +7,8 @@ namespace LevelDesign.Core.Sweeps;
 /// Runs a sweep in parallel on all cores, cancellable; points computed before cancellation are kept.
 /// Workers walk contiguous stretches (two per stretch, from both ends) so every point is warm-started from its
 /// neighbour; one <see cref="DeviceSolver"/> (and bare-spectrum cache) is shared.
-/// Labels are then carried point to point (see <see cref="LabelTracker"/>) and derived quantities computed.
+/// Labels are carried point to point while the points are solved (see <see cref="SweepLabelling"/>), and the whole
+/// sweep is sized first (<see cref="SweepMemoryEstimate"/>): one that would not fit is refused before any solve.
 /// </summary>
 public static class SweepRunner
 {
@@ -25,112 +25,119 @@ public static class SweepRunner
         var axisValues = SweepGrid.Points(plan);
         int total = axisValues.Length;
         var solver = options.CreateSolver();
-        var solved = new SolvedPoint?[total];
         int workers = Math.Clamp(options.Parallelism, 1, total);
+        bool keepVectors = Guard(resolve(axisValues[0]), plan, options, solver, total, workers);
+        var labelling = new SweepLabelling(plan, options, axisValues, keepVectors);
+        using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancellation);
         int done = 0;
+        int wanted = options.Blocks?.Sum(x => x.End - x.Start) ?? total;
 
+        var tasks = new List<Task>();
         if (options.Blocks is { } blocks)
         {
-            // fixed stretches, each walked forward from a cold start by whichever worker takes it
-            int nextBlock = -1, wanted = blocks.Sum(x => x.End - x.Start);
-            var walkers = Enumerable.Range(0, Math.Clamp(options.Parallelism, 1, Math.Max(1, blocks.Count))).Select(_ => Task.Run(() =>
-            {
-                int b;
-                while (!cancellation.IsCancellationRequested && (b = Interlocked.Increment(ref nextBlock)) < blocks.Count)
+            // fixed stretches, each walked forward from a cold start by whichever worker takes it next (in order, so
+            // labelling follows close behind and only a few points hold vectors at once)
+            int nextBlock = -1;
+            for (int w = 0; w < Math.Clamp(workers, 1, Math.Max(1, blocks.Count)); w++)
+                tasks.Add(Task.Run(() =>
                 {
-                    var pointSolver = new PointSolver(solver, options);
-                    for (int i = blocks[b].Start; i < blocks[b].End && !cancellation.IsCancellationRequested; i++)
+                    try
                     {
-                        solved[i] = pointSolver.Solve(resolve(axisValues[i]), plan.Levels);
-                        progress?.Report(new SweepProgress(Interlocked.Increment(ref done), wanted));
+                        int b;
+                        while (!stop.IsCancellationRequested && (b = Interlocked.Increment(ref nextBlock)) < blocks.Count)
+                        {
+                            var pointSolver = new PointSolver(solver, options);
+                            for (int i = blocks[b].Start; i < blocks[b].End && !stop.IsCancellationRequested; i++)
+                            {
+                                labelling.Add(i, pointSolver.Solve(resolve(axisValues[i]), plan.Levels));
+                                progress?.Report(new SweepProgress(Interlocked.Increment(ref done), wanted));
+                            }
+                        }
                     }
-                }
-            })).ToArray();
-            await Task.WhenAll(walkers).ConfigureAwait(false);
-            var kept = Label(plan, options, axisValues, solved);
-            return new SweepResult(plan, kept, kept.Count == wanted && !cancellation.IsCancellationRequested);
+                    catch
+                    {
+                        stop.Cancel();
+                        throw;
+                    }
+                }));
         }
-
-        // Workers come in pairs on contiguous segments: one walks forward from the segment's start, the other
-        // backward from its end, each warm-started by the point it solved last, and they stop where they meet.
-        // Cost varies a lot along a sweep (crossings need more iterations), so fixed halves would leave one core
-        // idle; meeting wherever the work balances keeps both busy with only one cold start per worker.
-        int segments = (workers + 1) / 2;
-        var tasks = new List<Task>();
-        for (int g = 0; g < segments; g++)
+        else if (keepVectors)
         {
-            int start = (int)((long)g * total / segments), end = (int)((long)(g + 1) * total / segments);
-            var segment = new SegmentCursor(start, end - 1);
-            bool paired = 2 * g + 1 < workers;
-            tasks.Add(Task.Run(() => Walk(segment, forward: true)));
-            if (paired) tasks.Add(Task.Run(() => Walk(segment, forward: false)));
+            // Workers come in pairs on contiguous segments: one walks forward from the segment's start, the other
+            // backward from its end, each warm-started by the point it solved last, and they stop where they meet.
+            // Cost varies a lot along a sweep (crossings need more iterations), so fixed halves would leave one core
+            // idle; meeting wherever the work balances keeps both busy with only one cold start per worker. The
+            // backward walker's points wait, vectors and all, until labelling reaches them: hence only when kept.
+            int segments = (workers + 1) / 2;
+            for (int g = 0; g < segments; g++)
+            {
+                int start = (int)((long)g * total / segments), end = (int)((long)(g + 1) * total / segments);
+                var segment = new SegmentCursor(start, end - 1);
+                bool paired = 2 * g + 1 < workers;
+                tasks.Add(Task.Run(() => Walk((out int i) => segment.TryTake(forward: true, out i))));
+                if (paired) tasks.Add(Task.Run(() => Walk((out int i) => segment.TryTake(forward: false, out i))));
+            }
+        }
+        else
+        {
+            // Points that keep no vectors: worker w takes points w, w + W, w + 2W… (warm starts extrapolate over the
+            // stride, which is still evenly spaced) and waits when it runs more than a few points ahead of labelling,
+            // so only that many points hold vectors at once.
+            for (int w = 0; w < workers; w++)
+            {
+                int next = w;
+                tasks.Add(Task.Run(() => Walk((out int i) =>
+                {
+                    i = next;
+                    next += workers;
+                    if (i >= total) return false;
+                    labelling.WaitForRoom(i, SweepMemoryEstimate.InFlightPerWorker * workers, stop.Token);
+                    return true;
+                })));
+            }
         }
 
-        void Walk(SegmentCursor segment, bool forward)
+        void Walk(TakeNext take)
         {
             var pointSolver = new PointSolver(solver, options);
-            while (!cancellation.IsCancellationRequested && segment.TryTake(forward, out int i))
+            try
             {
-                solved[i] = pointSolver.Solve(resolve(axisValues[i]), plan.Levels);
-                progress?.Report(new SweepProgress(Interlocked.Increment(ref done), total));
+                while (!stop.IsCancellationRequested && take(out int i) && !stop.IsCancellationRequested)
+                {
+                    labelling.Add(i, pointSolver.Solve(resolve(axisValues[i]), plan.Levels));
+                    progress?.Report(new SweepProgress(Interlocked.Increment(ref done), total));
+                }
+            }
+            catch
+            {
+                stop.Cancel();   // the other workers stop too (one may be waiting for this one's points)
+                throw;
             }
         }
         await Task.WhenAll(tasks).ConfigureAwait(false);
 
-        var points = Label(plan, options, axisValues, solved);
-        bool completed = points.Count == total && !cancellation.IsCancellationRequested;
+        var points = labelling.Finish();
+        bool completed = points.Count == wanted && !cancellation.IsCancellationRequested;
         return new SweepResult(plan, points, completed);
     }
 
+    private delegate bool TakeNext(out int index);
+
     /// <summary>
-    /// Labels every solved point from its neighbour, in flat order, and computes its derived quantities. Only the
-    /// label hand-over is sequential: weights, overlaps and derived quantities are computed in parallel.
+    /// Sizes the sweep from its first point (prepared only, not solved) and refuses it before any solve when it would
+    /// not fit; returns whether every point keeps its vectors.
     /// </summary>
-    private static List<SweepPoint> Label(SweepPlan plan, SweepOptions options, double[][] axisValues, SolvedPoint?[] solved)
+    private static bool Guard(Device first, SweepPlan plan, SweepOptions options, DeviceSolver solver, int total, int workers)
     {
-        int total = solved.Length;
-        var neighbour = new int[total];
-        for (int i = 0; i < total; i++)
-        {
-            int previous = SweepGrid.Predecessor(plan, i);
-            // in fixed blocks a point after a gap starts a fresh chain of labels, as it would in the run that owns the gap
-            if (options.Blocks is not null) { neighbour[i] = previous >= 0 && solved[previous] is not null ? previous : -1; continue; }
-            while (previous >= 0 && solved[previous] is null) previous--;
-            neighbour[i] = previous;
-        }
-        var parallel = new ParallelOptions { MaxDegreeOfParallelism = Math.Max(1, options.Parallelism) };
-        var inputs = new LabelInputs?[total];
-        Parallel.For(0, total, parallel, i =>
-        {
-            if (solved[i] is SolvedPoint point)
-                inputs[i] = LabelTracker.Inputs(plan.Labels, point, neighbour[i] < 0 ? null : solved[neighbour[i]]);
-        });
-
-        var spectra = new DressedSpectrum?[total];
-        var ambiguous = new bool[total];
-        for (int i = 0; i < total; i++)
-        {
-            if (solved[i] is not SolvedPoint point) continue;
-            // a user-chosen level count is judged whole; the default count carries a 4-state margin at the top,
-            // where states mix with ones not computed, so ambiguity there is not reported
-            int judged = plan.Levels is not null ? point.Count : Math.Max(1, point.Count - 4);
-            var tracker = new LabelTracker(plan.Labels, options, judged);
-            int previous = neighbour[i];
-            (spectra[i], ambiguous[i]) = previous < 0
-                ? tracker.First(point, inputs[i]!)
-                : tracker.Next(point, inputs[i]!, solved[previous]!, spectra[previous]!);
-        }
-
-        var quantities = new DerivedQuantities?[total];
-        Parallel.For(0, total, parallel, i =>
-        {
-            if (spectra[i] is DressedSpectrum spectrum) quantities[i] = DerivedQuantities.From(spectrum);
-        });
-        var points = new List<SweepPoint>();
-        for (int i = 0; i < total; i++)
-            if (spectra[i] is DressedSpectrum spectrum)
-                points.Add(new SweepPoint(i, axisValues[i], spectrum, quantities[i]!.Named(), ambiguous[i])
-                    { QuantityPurities = quantities[i]!.NamedPurities() });
-        return points;
+        var problem = solver.Prepare(first);
+        int dimension = problem.Basis.Dimension;
+        int count = plan.Levels is int k ? Math.Min(k, dimension) : solver.Select(problem).Count;
+        bool complex = !problem.Hamiltonian.IsReal;
+        int iterativeFrom = options.Iterative ? options.IterativeMinimumDimension : int.MaxValue;
+        bool keep = SweepMemoryEstimate.KeepsVectors(options.KeepVectors, total, dimension, count, complex);
+        if (options.MemoryLimitBytes is long limit && SweepMemoryEstimate.Refusal(dimension, problem.Hamiltonian.StoredEntries,
+                count, total, workers, keep, complex, iterativeFrom, limit) is string refusal)
+            throw new SweepTooLargeException(refusal);
+        return keep;
     }
 }

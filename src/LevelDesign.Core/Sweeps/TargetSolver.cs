@@ -25,7 +25,8 @@ public static class TargetSolver
     {
         options ??= new SweepOptions();
         var solver = options.CreateSolver();
-        options = options with { Solver = solver };
+        // refinement points carry their labels from the scan's vectors, so the scan keeps them
+        options = options with { Solver = solver, KeepVectors = true };
         if (axis.Count < 2) throw new ArgumentException($"axis '{axis.Path}': a root search needs at least 2 scan points");
         const LabelMode labels = LabelMode.ByCharacter;
         var scan = await SweepRunner.RunAsync(resolve, new SweepPlan([axis], labels, levels), options, null, cancellation)
@@ -48,7 +49,7 @@ public static class TargetSolver
             var point = solver.SolvePoint(problem, levels ?? solver.DefaultCount(problem));
             var reference = ScanPoint(nearer);
             var (spectrum, _) = new LabelTracker(labels, options, point.Count)
-                .Next(point, LabelTracker.Inputs(labels, point, reference), reference, scan.Points[nearer].Spectrum);
+                .Next(point, LabelTracker.Inputs(labels, point, reference), scan.Points[nearer].Spectrum);
             var derived = DerivedQuantities.From(spectrum);
             return (QuantityLookup.Value(derived.Named(), quantity) - target, QuantityLookup.Purity(derived.NamedPurities(), quantity));
         }

@@ -57,7 +57,8 @@ public static class CoherenceCommand
         }
 
         var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 2);
-        var result = SweepExecution.Run(setup, LabelMode.ByCharacter, null, solver);
+        // the budgets read matrix elements from every point's vectors
+        var result = SweepExecution.Run(setup, LabelMode.ByCharacter, null, solver, keepVectors: true);
         // the budget needs extra solves per point (flux and charge derivatives); points are independent
         var rows = new (IReadOnlyList<double>, IReadOnlyList<CoherenceBudget>)[result.Points.Count];
         var progress = new ProgressBar(rows.Length);

@@ -2,7 +2,7 @@ namespace LevelDesign.Commands;
 
 /// <summary>
 /// Runs a command body and turns the expected failures into exit codes with one clear message each:
-/// bad arguments 2, a device that cannot be computed 3, Ctrl-C 130. Anything else is a bug and is left to surface.
+/// bad arguments (and a sweep too large for memory) 2, a device that cannot be computed 3, Ctrl-C 130. Anything else is a bug and is left to surface.
 /// </summary>
 public static class CommandGuard
 {
@@ -15,6 +15,12 @@ public static class CommandGuard
         catch (UsageException e)
         {
             foreach (string line in e.Lines) Console.Error.WriteLine(line);
+            return ExitCodes.InvalidInput;
+        }
+        catch (Core.Sweeps.SweepTooLargeException e)
+        {
+            // refused before computing, like any argument asking for too much
+            Console.Error.WriteLine($"{path}: {e.Message}");
             return ExitCodes.InvalidInput;
         }
         catch (OperationCanceledException)

@@ -12,13 +12,14 @@ namespace LevelDesign.Commands;
 public static class SweepExecution
 {
     /// <param name="blocks">Fixed stretches to compute (see <see cref="SweepOptions.Blocks"/>); null: every point, shared out as workers go.</param>
+    /// <param name="keepVectors">Keep every point's eigenvectors (for matrix elements afterwards); by default a large sweep keeps only energies, labels and quantities.</param>
     public static SweepResult Run(SweepSetup setup, LabelMode labels, int? levels, DeviceSolver? solver = null,
-        IReadOnlyList<(int Start, int End)>? blocks = null)
+        IReadOnlyList<(int Start, int End)>? blocks = null, bool? keepVectors = null)
     {
         var plan = new SweepPlan(setup.Axes, labels, levels);
         var problems = SweepGrid.Validate(plan);
         if (problems.Count > 0) throw new UsageException(string.Join("; ", problems));
-        var options = new SweepOptions { Solver = solver ?? new DeviceSolver(), Blocks = blocks };
+        var options = new SweepOptions { Solver = solver ?? new DeviceSolver(), Blocks = blocks, KeepVectors = keepVectors };
         var progress = new ProgressBar(blocks?.Sum(b => b.End - b.Start) ?? SweepGrid.PointCount(plan));
         return WithCancel(token => SweepRunner.RunAsync(setup.Resolve, plan, options, progress, token), progress.Finish);
     }
@@ -49,25 +50,9 @@ public static class SweepExecution
         // the default count carries 4 states of margin at the top, where states mix with ones not computed
         int judged = Math.Max(1, needed - 4);
         int solved = levels is int l && l > judged ? Math.Min(l, problem.Basis.Dimension) : needed;
-        CheckMemory(setup, problem.Basis.Dimension, solved);
+        // the whole sweep is sized (and refused when it would not fit) by the engine before its first solve
         if (levels is null) return (null, judged);
         if (levels <= judged) return (null, levels.Value);
         return (solved, solved);
-    }
-
-    /// <summary>Most memory the kept points of one sweep may take (the machine this runs on has a few tens of GB).</summary>
-    public const long MaxSweepBytes = 8L << 30;
-
-    /// <summary>
-    /// Refuses, before computing, a sweep whose kept states would not fit: every point keeps its dressed vectors
-    /// (complex, 16 bytes per entry) and weights (8 bytes), so about points × dimension × states × 24 bytes.
-    /// </summary>
-    private static void CheckMemory(SweepSetup setup, int dimension, int states)
-    {
-        long points = setup.Axes.Aggregate(1L, (n, a) => n * Math.Max(1, a.Count));
-        double bytes = (double)points * dimension * states * 24;
-        if (bytes > MaxSweepBytes)
-            throw new UsageException($"this sweep would keep about {bytes / (1L << 30):N1} GiB of dressed states ({points:N0} points × {dimension:N0} states × {states} levels; " +
-                                     $"limit {MaxSweepBytes >> 30} GiB); use fewer points, fewer --levels or a smaller truncation");
     }
 }

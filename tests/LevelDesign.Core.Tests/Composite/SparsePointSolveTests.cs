@@ -40,6 +40,30 @@ public class SparsePointSolveTests
     }
 
     [Fact]
+    public void A_sparse_point_reports_its_iterations_and_a_cancelled_one_stops()
+    {
+        var reports = new List<SolveProgress>();
+        var solver = new DeviceSolver { IterativeMinimumDimension = 1, Progress = new Inline(reports.Add) };
+        var problem = solver.Prepare(Module);
+        var spectrum = solver.Solve(problem);
+        Assert.Contains("Davidson", spectrum.SolverName);
+        Assert.NotEmpty(reports);
+        Assert.Equal(spectrum.Count, reports[^1].Wanted);
+        Assert.Equal(reports[^1].Wanted, reports[^1].Converged);
+
+        // the UI's token: a superseded point stops with OperationCanceledException, never falls back to a dense solve
+        using var cancel = new CancellationTokenSource();
+        cancel.Cancel();
+        var cancelled = new DeviceSolver { IterativeMinimumDimension = 1, Cancellation = cancel.Token };
+        Assert.Throws<OperationCanceledException>(() => cancelled.Solve(problem));
+    }
+
+    private sealed class Inline(Action<SolveProgress> report) : IProgress<SolveProgress>
+    {
+        public void Report(SolveProgress value) => report(value);
+    }
+
+    [Fact]
     public void Residual_is_measured_on_the_matrix_and_catches_a_wrong_pair()
     {
         var solver = new DeviceSolver { IterativeMinimumDimension = int.MaxValue };

@@ -139,4 +139,30 @@ public sealed class BlockDavidsonTests
                 Assert.Equal(expected, g[i * (columns + 1) + j], 1e-10);
             }
     }
+
+    [Fact]
+    public void Reports_every_iteration_and_stops_when_cancelled_between_iterations()
+    {
+        var a = CompositeLike(300, seed: 3, out _);
+        var reports = new List<SolveProgress>();
+        var result = new BlockDavidson { Progress = new Inline(reports.Add) }.TryLowest(a, 25);
+        Assert.NotNull(result);
+        Assert.Equal(Enumerable.Range(1, reports.Count), reports.Select(r => r.Iteration));
+        Assert.All(reports, r => Assert.Equal(25, r.Wanted));
+        Assert.Equal(25, reports[^1].Converged);
+        Assert.True(reports[0].Converged < 25);
+
+        // cancelled after the second iteration: the third never starts
+        using var cancel = new CancellationTokenSource();
+        int seen = 0;
+        var stopped = new BlockDavidson { Cancellation = cancel.Token, Progress = new Inline(r => { seen = r.Iteration; if (r.Iteration == 2) cancel.Cancel(); }) };
+        Assert.Throws<OperationCanceledException>(() => stopped.TryLowest(a, 25));
+        Assert.Equal(2, seen);
+    }
+
+    /// <summary>Reports on the calling thread (Progress&lt;T&gt; would post them elsewhere).</summary>
+    private sealed class Inline(Action<SolveProgress> report) : IProgress<SolveProgress>
+    {
+        public void Report(SolveProgress value) => report(value);
+    }
 }

@@ -1,9 +1,7 @@
-using LevelDesign.Core.Sweeps;
-
 namespace LevelDesign.Ui.Compute;
 
-/// <summary>Progress reports from worker threads, forwarded to the UI thread through the scheduler.</summary>
-public sealed class PostingProgress(IUiScheduler scheduler, Action<SweepProgress> onUiThread) : IProgress<SweepProgress>
+/// <summary>Progress reports from worker threads (sweep points, iterations of a point's solve), forwarded to the UI thread through the scheduler.</summary>
+public sealed class PostingProgress<T>(IUiScheduler scheduler, Action<T> onUiThread) : IProgress<T>
 {
-    public void Report(SweepProgress value) => scheduler.Post(() => onUiThread(value));
+    public void Report(T value) => scheduler.Post(() => onUiThread(value));
 }

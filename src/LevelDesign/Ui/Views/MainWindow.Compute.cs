@@ -2,6 +2,7 @@ using LevelDesign.Core.Presentation;
 using System.Diagnostics;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Eigen;
 using LevelDesign.Core.Model;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Ui.Compute;
@@ -16,14 +17,22 @@ public sealed partial class MainWindow
         var (generation, token) = _pointJobs.Begin();
         var coherenceInputs = _session.Document?.Coherence;
         _computing = true;
+        _pointProgressText = "";
+        // a module's point takes seconds: its iterations are shown, and an edit cancels it between two of them
+        var progress = new PostingProgress<SolveProgress>(_scheduler, p =>
+        {
+            if (!_pointJobs.IsCurrent(generation) || !_computing) return;
+            _pointProgressText = $"iteration {p.Iteration}: {p.Converged}/{p.Wanted} states converged";
+            UpdateStatus();
+        });
         Task.Run(() =>
         {
             try
             {
                 string eigen = NativeEigen() ? "native" : "managed";
-                var quick = PointComputer.Compute(device, checkConvergence: false, token);
+                var quick = PointComputer.Compute(device, checkConvergence: false, token, progress: progress);
                 _scheduler.Post(() => ApplyPoint(generation, quick, eigen, final: false));
-                var full = PointComputer.Compute(device, checkConvergence: true, token, coherenceInputs);
+                var full = PointComputer.Compute(device, checkConvergence: true, token, coherenceInputs, progress, quick);
                 _scheduler.Post(() => ApplyPoint(generation, full, eigen, final: true));
             }
             catch (OperationCanceledException) { }
@@ -97,7 +106,7 @@ public sealed partial class MainWindow
         _spectrum.Status = "⟳ " + _progressText;
         UpdateStatus();
         var plan = new SweepPlan(request.Axes);
-        var progress = new PostingProgress(_scheduler, p =>
+        var progress = new PostingProgress<SweepProgress>(_scheduler, p =>
         {
             if (!_sweepJobs.IsCurrent(generation)) return;
             _progressText = $"sweeping {p.Done}/{p.Total} {Bar(p.Done, p.Total)}";
@@ -199,7 +208,7 @@ public sealed partial class MainWindow
     private void OnCursorMoved(int index)
     {
         if (_sweep is null || index >= _sweep.Points.Count) { _cursorSnapshot = null; RefreshPage(); return; }
-        _cursorSnapshot = PointComputer.FromSpectrum(_sweep.Points[index].Spectrum, DateTime.Now);
+        _cursorSnapshot = PointComputer.FromSweepPoint(_sweep.Points[index], DateTime.Now);
         RefreshPage();
     }
 

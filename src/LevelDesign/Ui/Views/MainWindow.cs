@@ -54,7 +54,7 @@ public sealed partial class MainWindow : Window
     private bool _crossingsPending;
     private Manifold _manifold = Manifold.UpToTwo;
     private object? _resweepTimer;
-    private string _progressText = "";
+    private string _progressText = "", _pointProgressText = "";
     private string _sweepSummary = "";
 
     public MainWindow(EditSession session, IUiScheduler scheduler, ISweepService? sweeps = null, ITargetSolver? targets = null, IPlotExporter? plots = null)
@@ -528,7 +528,7 @@ public sealed partial class MainWindow : Window
         string dirty = _session.IsDirty ? " ● unsaved" : "";
         string disk = (_diskChanged ? " ⚠ changed on disk" : "") + (_session.IsReadOnly ? " read-only" : "")
                       + (_session.AutosaveProblem is null ? "" : " ⚠ autosave failed");
-        string computed = _computing ? "⟳ computing" : _snapshot is null ? "not computed" : $"at {_snapshot.ComputedAt:HH:mm:ss} ({_snapshot.Elapsed.TotalSeconds:0.00} s)";
+        string computed = _computing ? (_pointProgressText.Length > 0 ? "⟳ computing, " + _pointProgressText : "⟳ computing") : _snapshot is null ? "not computed" : $"at {_snapshot.ComputedAt:HH:mm:ss} ({_snapshot.Elapsed.TotalSeconds:0.00} s)";
         string trunc = _snapshot?.ConvergenceText ?? "…";
         string work = string.Join(" · ", new[] { _sweeping ? _progressText : "", _fitting ? "⟳ fitting" : "", _solving ? "⟳ solving" : "" }.Where(w => w.Length > 0));
         // Ranks: what is left out first on a narrow screen is the largest (eigensolver, then the time of the last result).
