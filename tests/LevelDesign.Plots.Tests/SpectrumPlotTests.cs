@@ -9,7 +9,7 @@ namespace LevelDesign.Plots.Tests;
 
 public class SpectrumPlotTests
 {
-    private static async Task<(SweepResult Sweep, IReadOnlyList<Crossing> Crossings)> TunableQubitAndResonator()
+    internal static async Task<(SweepResult Sweep, IReadOnlyList<Crossing> Crossings)> TunableQubitAndResonator()
     {
         var device = new Device("demo",
             [new TunableTransmon("q", 0.2, 30, 0.35, 0), new Resonator("r", 5.6)],
@@ -90,16 +90,6 @@ public class SpectrumPlotTests
 
 public class QuantityPlotTests
 {
-    private static async Task<SweepResult> QubitThroughResonator()
-    {
-        var device = new Device("demo",
-            [new TunableTransmon("q", 0.2, 30, 0.35, 0), new Resonator("r", 5.6)],
-            [Coupler.Create("g", CouplerKind.Exchange, "q", "r", new CouplingStrength.Coefficient(0.05))],
-            new Truncation { DefaultLevels = 3 });
-        var axis = new SweepAxis("q.flux", 0, 0.5, 61, []);
-        return await SweepRunner.RunAsync(ParameterResolver.ForPaths(device, [axis]), new SweepPlan([axis], Levels: 5));
-    }
-
     /// <summary>
     /// A quantity against the bias: the line holds every point's own value, points read from hybridized states (at
     /// the qubit–resonator crossing) are marked and named in the legend, and purities are not mixed with frequencies.
@@ -107,7 +97,7 @@ public class QuantityPlotTests
     [Fact]
     public async Task Quantities_are_drawn_with_hybridized_points_marked()
     {
-        var sweep = await QubitThroughResonator();
+        var (sweep, _) = await SpectrumPlotTests.TunableQubitAndResonator();
         var plot = QuantityPlot.Build(sweep, ["chi2:q:r"], null, 0.9);
         var line = plot.GetPlottables().OfType<ScottPlot.Plottables.Scatter>().First(p => p.LegendText == "chi2:q:r");
         var points = line.Data.GetScatterPoints();
