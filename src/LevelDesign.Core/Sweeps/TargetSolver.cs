@@ -9,7 +9,9 @@ namespace LevelDesign.Core.Sweeps;
 /// Solves for every bias in a range where a named quantity equals a target (e.g. "qa.f01" = 5.25 GHz, or
 /// "zz:qa:qb" = 0): the range is scanned with a labelled sweep, and each sign change of (quantity − target)
 /// between neighbouring points is refined by Brent's bracketing root finder. Every root is reported; a sign
-/// change that is a jump rather than a root is reported with Refined = false and its residual.
+/// change that is a jump rather than a root is reported with Refined = false and its residual. With
+/// <c>refineBelowPurity</c>, every scan step with a hybridized end is sampled <see cref="RefinementSamples"/> times finer
+/// first, so a root sharing a step with a label jump is found as a finer scan would find it.
 /// </summary>
 /// <remarks>
 /// Points inside a bracket are labelled as the scan labels its points: carried, by bare character and eigenvector
@@ -21,7 +23,7 @@ public static class TargetSolver
 {
     public static async Task<IReadOnlyList<TargetRoot>> FindAllAsync(Func<IReadOnlyList<double>, Device> resolve, SweepAxis axis,
         string quantity, double target, SweepOptions? options = null, int? levels = null, double tolerance = 1e-12,
-        CancellationToken cancellation = default)
+        CancellationToken cancellation = default, double? refineBelowPurity = null)
     {
         options ??= new SweepOptions();
         var solver = options.CreateSolver();
@@ -64,26 +66,47 @@ public static class TargetSolver
                 roots.Add(new TargetRoot(quantity, target, x[i], target, 0, true) { Purity = QuantityLookup.Purity(scan.Points[i].QuantityPurities, quantity) });
                 continue;
             }
-            if (i + 1 >= f.Length || !double.IsFinite(f[i]) || !double.IsFinite(f[i + 1]) || f[i + 1] == 0 || Math.Sign(f[i]) == Math.Sign(f[i + 1]))
-                continue;
+            if (i + 1 >= f.Length || !double.IsFinite(f[i]) || !double.IsFinite(f[i + 1])) continue;
             int bracket = i;
-            if (MathNet.Numerics.RootFinding.Brent.TryFindRoot(b => Residual(b, bracket), x[i], x[i + 1], tolerance, 200, out double root))
+            // Inside a hybridized stretch a label jump and a root can share one scan step (the ends then have the same
+            // sign, or the sign change is the jump's): there the step is sampled finer, each sample labelled as the
+            // refinement labels it (carried from the nearer scan point), and every sign change between samples refined.
+            var samples = new List<(double Bias, double F)> { (x[i], f[i]) };
+            if (refineBelowPurity is double threshold && Math.Min(PurityAt(i), PurityAt(i + 1)) < threshold)
+                for (int k = 1; k < RefinementSamples; k++)
+                {
+                    double b = x[i] + (x[i + 1] - x[i]) * k / RefinementSamples;
+                    samples.Add((b, Residual(b, bracket)));
+                }
+            samples.Add((x[i + 1], f[i + 1]));
+            for (int s = 0; s + 1 < samples.Count; s++)
             {
-                var (r, purity) = Evaluate(root, bracket);
-                // a jump (e.g. a label moving to another state) changes sign without a root: Brent converges onto
-                // the jump and leaves a residual of the jump's size, so it is reported as not refined
-                bool isRoot = Math.Abs(r) <= Math.Max(1e-9, 1e-6 * Math.Max(Math.Abs(f[i]), Math.Abs(f[i + 1])));
-                roots.Add(new TargetRoot(quantity, target, root, target + r, r, isRoot) { Purity = purity });
-            }
-            else
-            {
-                // the bracket holds a sign change but no smooth root (e.g. a label jump): report it unrefined
-                double middle = 0.5 * (x[i] + x[i + 1]);
-                roots.Add(new TargetRoot(quantity, target, middle, double.NaN, double.NaN, false));
+                var (lo, flo) = samples[s];
+                var (hi, fhi) = samples[s + 1];
+                if (!double.IsFinite(flo) || !double.IsFinite(fhi) || fhi == 0 || Math.Sign(flo) == Math.Sign(fhi)) continue;
+                if (s > 0 && flo == 0) continue;
+                if (MathNet.Numerics.RootFinding.Brent.TryFindRoot(b => Residual(b, bracket), lo, hi, tolerance, 200, out double root))
+                {
+                    var (r, purity) = Evaluate(root, bracket);
+                    // a jump (e.g. a label moving to another state) changes sign without a root: Brent converges onto
+                    // the jump and leaves a residual of the jump's size, so it is reported as not refined
+                    bool isRoot = Math.Abs(r) <= Math.Max(1e-9, 1e-6 * Math.Max(Math.Abs(flo), Math.Abs(fhi)));
+                    roots.Add(new TargetRoot(quantity, target, root, target + r, r, isRoot) { Purity = purity });
+                }
+                else
+                {
+                    // the bracket holds a sign change but no smooth root (e.g. a label jump): report it unrefined
+                    roots.Add(new TargetRoot(quantity, target, 0.5 * (lo + hi), double.NaN, double.NaN, false));
+                }
             }
         }
         return roots;
+
+        double PurityAt(int i) => QuantityLookup.Purity(scan.Points[i].QuantityPurities, quantity);
     }
+
+    /// <summary>Sub-steps a scan step is split into when refined (see refineBelowPurity).</summary>
+    public const int RefinementSamples = 8;
 
     /// <summary>A scan point's eigenpairs in the form the label tracker carries labels from (same states, same order).</summary>
     private static SolvedPoint AsSolvedPoint(DeviceSolver solver, DressedSpectrum spectrum) =>

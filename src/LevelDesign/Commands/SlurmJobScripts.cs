@@ -134,7 +134,9 @@ public static class SlurmJobScripts
     {
         string process = Environment.ProcessPath ?? "leveldesign";
         if (Path.GetFileNameWithoutExtension(process) == "dotnet")
-            return Quote(process) + " " + Quote(typeof(SlurmJobScripts).Assembly.Location);
+            // run through dotnet: name the program's own assembly (AppContext, not Assembly.Location, which a single
+            // file leaves empty)
+            return Quote(process) + " " + Quote(Path.Combine(AppContext.BaseDirectory, typeof(SlurmJobScripts).Assembly.GetName().Name + ".dll"));
         return Quote(process);
     }
 

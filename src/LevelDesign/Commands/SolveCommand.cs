@@ -50,7 +50,7 @@ public static class SolveCommand
         var (quantity, value) = FitCommand.Term("--target", () => TargetTerm.Parse(target, available));
         var options = new SweepOptions { Solver = solver };
         var roots = SweepExecution.WithCancel(token =>
-            TargetSolver.FindAllAsync(setup.Resolve, axis, quantity, value, options, planLevels, ToleranceFor(axis), token));
+            TargetSolver.FindAllAsync(setup.Resolve, axis, quantity, value, options, planLevels, ToleranceFor(axis), token, refineBelowPurity: threshold));
         Console.Write(json ? TargetReport.Json(document, axis, quantity, value, roots, threshold) : TargetReport.Table(document, axis, quantity, value, roots, threshold));
         if (roots.Any(r => r.Refined && r.IsHybridized(threshold)))
             Console.Error.WriteLine(string.Create(System.Globalization.CultureInfo.InvariantCulture, $"warning: {roots.Count(r => r.Refined && r.IsHybridized(threshold))} root(s) lie inside a hybridized region (purity below {threshold:G3})"));

@@ -54,6 +54,34 @@ public class HardwareViewTests
         return ui.Screen;
     }
 
+    /// <summary>
+    /// The untouched demo's zero-ZZ search over the whole coil range: the default 41-point scan puts a label jump in
+    /// the same step as the root, so the scan alone offered only "jump, not a root" entries. Hybridized steps are now
+    /// sampled finer, and the root the reference script finds (0.2512200622 Φ0 = 0.752928 mA,
+    /// tests/reference/zz_zero_pair.py) is offered.
+    /// </summary>
+    [Fact]
+    public void F9_finds_the_root_beside_a_label_jump_on_the_default_scan() =>
+        Assert.Contains("0.752928 mA", TargetOffer("zz:qa:qb = 0 MHz by qc_flux 0.15 mA to 1.05 mA", 140, 40));
+
+    [Fact]
+    public void F9_remembers_the_last_entry_and_takes_a_scan_count()
+    {
+        using var ui = new UiHarness(120, 40, device: "pair.toml");
+        ui.WaitIdle();
+        ui.Press(Key.F9);
+        ui.Replace("qa.f01 = 5.5 GHz by qa_flux 0 to 0.3 in 9");
+        ui.Press(Key.Enter);
+        ui.WaitForScreen("9-point scan", 60000);
+        ui.WaitForScreen("digit applies", 120000);
+        ui.Press(Key.Esc);
+        ui.Press(Key.F9);
+        Assert.Contains("qa.f01 = 5.5 GHz by qa_flux 0 to 0.3 in 9", ui.Screen);
+        ui.Replace("qa.f01 = 5.5 GHz by qa_flux 0 to 0.3 in 2");
+        ui.Press(Key.Enter);
+        Assert.Contains("scan count must be a whole number from 3 to 2001", ui.Screen);
+    }
+
     [Fact]
     public void F9_takes_a_relative_target() =>
         Assert.Contains("qa.f01 - qb.f01", TargetOffer("qa.f01 - qb.f01 = 700 MHz by qb_flux 0 to 0.3", 100, 30));

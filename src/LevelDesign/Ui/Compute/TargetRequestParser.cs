@@ -13,7 +13,7 @@ namespace LevelDesign.Ui.Compute;
 /// </summary>
 public static class TargetRequestParser
 {
-    public const string Syntax = "QUANTITY = VALUE by BIAS LOW to HIGH, e.g. qa.f01 = 5.2 GHz by qa_flux 0 to 0.5";
+    public const string Syntax = "QUANTITY = VALUE by BIAS LOW to HIGH [in N], e.g. qa.f01 = 5.2 GHz by qa_flux 0 to 0.5 in 81";
 
     public static TargetRequest? Parse(string text, DeviceDocument document, IEnumerable<string>? knownQuantities, out string? error)
     {
@@ -34,6 +34,18 @@ public static class TargetRequestParser
         if (space < 0) return null;
         string bias = rest[..space];
         string range = rest[(space + 1)..].Trim();
+        // "in N" at the end sets the scan count
+        int scan = TargetSearch.ScanPoints;
+        int inAt = range.LastIndexOf(" in ", StringComparison.Ordinal);
+        if (inAt >= 0)
+        {
+            if (!int.TryParse(range[(inAt + 4)..].Trim(), NumberStyles.None, CultureInfo.InvariantCulture, out scan) || scan is < 3 or > 2001)
+            {
+                error = "in N: the scan count must be a whole number from 3 to 2001";
+                return null;
+            }
+            range = range[..inAt].Trim();
+        }
         string[] ends = range.Contains(" to ") ? range.Split(" to ", 2, StringSplitOptions.TrimEntries) : range.Split(' ', StringSplitOptions.RemoveEmptyEntries);
         if (ends.Length != 2) return null;
         var definition = document.Bias(bias);
@@ -51,7 +63,7 @@ public static class TargetRequestParser
         else if (!Number(ends[0], out low) || !Number(ends[1], out high)) { error = "LOW and HIGH must be numbers for a parameter path"; return null; }
         if (low == high) { error = "LOW and HIGH must differ"; return null; }
         error = null;
-        return new TargetRequest(quantity, goal, bias, low, high);
+        return new TargetRequest(quantity, goal, bias, low, high) { ScanPoints = scan };
     }
 
     /// <summary>

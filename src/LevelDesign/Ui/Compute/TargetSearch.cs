@@ -3,7 +3,10 @@ using LevelDesign.Core.Sweeps;
 
 namespace LevelDesign.Ui.Compute;
 
-/// <summary>Core's <see cref="TargetSolver"/>: a labelled scan of the range, then Brent on every sign change.</summary>
+/// <summary>
+/// Core's <see cref="TargetSolver"/>: a labelled scan of the range, each step with a hybridized end sampled finer, then
+/// Brent on every sign change — so a root beside a label jump is found as a finer scan would find it.
+/// </summary>
 public sealed class TargetSearch : ITargetSolver
 {
     /// <summary>Scan points over the range; two roots closer than one step apart can be missed.</summary>
@@ -11,8 +14,8 @@ public sealed class TargetSearch : ITargetSolver
 
     public Task<IReadOnlyList<TargetRoot>> FindAllAsync(DeviceDocument document, TargetRequest request, CancellationToken cancellation)
     {
-        var axis = new SweepAxis(request.Bias, request.Low, request.High, ScanPoints, []);
+        var axis = new SweepAxis(request.Bias, request.Low, request.High, request.ScanPoints, []);
         return TargetSolver.FindAllAsync(values => document.Resolve([axis], values), axis, request.Quantity, request.GoalGHz,
-            new SweepOptions(), cancellation: cancellation);
+            new SweepOptions(), cancellation: cancellation, refineBelowPurity: document.PurityThreshold);
     }
 }

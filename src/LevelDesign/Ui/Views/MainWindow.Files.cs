@@ -194,8 +194,9 @@ public sealed partial class MainWindow
         string range = bias is null ? "qa.flux 0 to 0.5"
             : $"{bias.Name} {ShownUnit.Of(document, bias.Name).Text(bias.Offset)} to {ShownUnit.Of(document, bias.Name).Text(bias.Offset + bias.Period / 2)}";
         string quantity = _snapshot?.Quantities.Named().Keys.FirstOrDefault() ?? "qa.f01";
-        _prompt.Ask(TargetQuestion, $"{quantity} = 5 GHz by {range}", text =>
+        _prompt.Ask(TargetQuestion, _lastTarget ?? $"{quantity} = 5 GHz by {range}", text =>
         {
+            _lastTarget = text;   // offered again next time, so a search is repeated or adjusted, not retyped
             if (FitRequestParser.IsFit(text)) return StartFit(text, document);
             var request = TargetRequestParser.Parse(text, document, _snapshot?.Quantities.Named().Keys, out string? error);
             if (request is null) return error;
@@ -204,12 +205,15 @@ public sealed partial class MainWindow
         });
     }
 
+    /// <summary>The last F9 entry, offered again.</summary>
+    private string? _lastTarget;
+
     private void StartSolve(Core.DeviceFiles.DeviceDocument document, TargetRequest request)
     {
         var (generation, token) = _solveJobs.Begin();
         _solving = true;
         UpdateStatus();
-        Say($"⟳ solving {request.Quantity} = {Numbers.GHz(request.GoalGHz)} GHz by {request.Bias} ({TargetSearch.ScanPoints}-point scan, then Brent); Esc cancels");
+        Say($"⟳ solving {request.Quantity} = {FrequencyText.Of(request.Quantity, request.GoalGHz)} by {request.Bias} ({request.ScanPoints}-point scan, hybridized steps sampled {TargetSolver.RefinementSamples}× finer, then Brent); Esc cancels");
         Task.Run(async () =>
         {
             try
@@ -240,8 +244,12 @@ public sealed partial class MainWindow
     /// <summary>Lists every root; a digit applies that one to the device (an ordinary, undoable edit of the bias value).</summary>
     private void OfferRoots(Core.DeviceFiles.DeviceDocument solvedOn, TargetRequest request, IReadOnlyList<TargetRoot> roots)
     {
-        string goal = $"{request.Quantity} = {Numbers.GHz(request.GoalGHz)} GHz";
-        if (roots.Count == 0) { Say($"✗ {goal} is not reached for {request.Bias} in the range (no sign change on the scan)", warning: true); return; }
+        string goal = $"{request.Quantity} = {FrequencyText.Of(request.Quantity, request.GoalGHz)}";
+        if (roots.Count == 0)
+        {
+            Say($"✗ {goal} is not reached for {request.Bias} in the range: no sign change on the {request.ScanPoints}-point scan; widen the range or add 'in 81'", warning: true);
+            return;
+        }
         Say(ReferenceEquals(solvedOn, _session.Document) ? "target search done; a digit applies one of the values listed, Esc leaves the device as it is"
             : "the device changed while solving; the roots are for the device as it was");
         var offers = new Dictionary<char, Action>();
