@@ -4,7 +4,6 @@ using LevelDesign.Core.Analysis;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Output;
-using LevelDesign.Core.Presentation;
 
 namespace LevelDesign.Commands;
 

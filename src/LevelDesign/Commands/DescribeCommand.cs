@@ -1,7 +1,6 @@
 using LevelDesign.Core.Presentation;
 using System.CommandLine;
 using LevelDesign.Core.Composite;
-using LevelDesign.Core.Presentation;
 
 namespace LevelDesign.Commands;
 

@@ -2,7 +2,6 @@ using LevelDesign.Core.Presentation;
 using System.CommandLine;
 using LevelDesign.Core.Analysis;
 using LevelDesign.Core.Composite;
-using LevelDesign.Core.Presentation;
 
 namespace LevelDesign.Commands;
 

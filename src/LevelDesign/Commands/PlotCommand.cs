@@ -1,7 +1,6 @@
 using LevelDesign.Core.Presentation;
 using System.CommandLine;
 using LevelDesign.Core.Sweeps;
-using LevelDesign.Core.Presentation;
 using LevelDesign.Plots;
 
 namespace LevelDesign.Commands;

@@ -4,7 +4,6 @@ using LevelDesign.Core.Composite;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Files;
 using LevelDesign.Core.Sweeps;
-using LevelDesign.Core.Presentation;
 
 namespace LevelDesign.Commands;
 
