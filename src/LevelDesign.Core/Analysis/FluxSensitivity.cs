@@ -29,7 +29,7 @@ public static class FluxSensitivity
         var f = new double[5][];
         try
         {
-            Parallel.For(0, 5, new ParallelOptions { CancellationToken = cancellation }, o => f[o] = Frequencies(x + (o - 2) * step));
+            Parallel.For(0, 5, Eigen.ComputeCores.Options(cancellation), o => f[o] = Frequencies(x + (o - 2) * step));
         }
         catch (AggregateException e)
         {

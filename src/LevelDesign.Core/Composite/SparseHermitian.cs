@@ -85,7 +85,7 @@ public sealed class SparseHermitian
     {
         int n = Dimension, count = values.Length;
         var worst = new double[count];
-        var options = new ParallelOptions { MaxDegreeOfParallelism = (long)_lower.Length * count > 4_000_000 ? Environment.ProcessorCount : 1 };
+        var options = new ParallelOptions { MaxDegreeOfParallelism = (long)_lower.Length * count > 4_000_000 ? Eigen.ComputeCores.Limit : 1 };
         var rows = _pattern.SlotRow;
         var columns = _pattern.SlotColumn;
         Parallel.For(0, count, options, () => (new Complex[n], new Complex[n]), (k, _, work) =>

@@ -40,7 +40,7 @@ public static class BlockProducts
                     fixed (double* vp = v, kp = coefficients, yp = y)
                     {
                         var (vq, kq, yq, vl, kl, yl) = ((nint)vp, (nint)kp, (nint)yp, v.Length, coefficients.Length, y.Length);
-                        Parallel.For(0, blocks, b =>
+                        Parallel.For(0, blocks, ComputeCores.Options(), b =>
                         {
                             var vs = new ReadOnlySpan<double>((double*)vq, vl);
                             var ks = new ReadOnlySpan<double>((double*)kq, kl);
@@ -129,7 +129,7 @@ public static class BlockProducts
                     fixed (double* vp = v, wp = w)
                     {
                         var (vq, wq, vl, wl) = ((nint)vp, (nint)wp, v.Length, w.Length);
-                        Parallel.For(0, blocks, b =>
+                        Parallel.For(0, blocks, ComputeCores.Options(), b =>
                         {
                             var part = partial[b] = new double[4 * groups * wColumns];
                             DotsBlock(new ReadOnlySpan<double>((double*)vq, vl), n, groups, new ReadOnlySpan<double>((double*)wq, wl), wColumns,

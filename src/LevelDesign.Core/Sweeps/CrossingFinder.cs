@@ -23,7 +23,7 @@ public static class CrossingFinder
         var states = SearchedStates(sweep, options);
         var candidates = Candidates(sweep, states, options);
         var refined = CrossingRefiner.RefineAll(sweep, resolve, states, candidates, options.BiasTolerance, solver ?? new DeviceSolver(),
-            Environment.ProcessorCount, cancellation);
+            Eigen.ComputeCores.Limit, cancellation);
         return Keep(candidates, refined, options, Math.Abs(sweep.Points[1].AxisValues[0] - sweep.Points[0].AxisValues[0]));
     }
 

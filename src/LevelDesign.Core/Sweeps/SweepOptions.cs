@@ -12,8 +12,8 @@ public sealed record SweepOptions
     /// <summary>Shared solver (and bare-spectrum cache); null makes one with the active eigensolver.</summary>
     public DeviceSolver? Solver { get; init; }
 
-    /// <summary>Points computed at once (workers walking contiguous stretches); default all cores.</summary>
-    public int Parallelism { get; init; } = Environment.ProcessorCount;
+    /// <summary>Points computed at once (workers walking contiguous stretches); default the cores computations may use (<see cref="Eigen.ComputeCores"/>).</summary>
+    public int Parallelism { get; init; } = Eigen.ComputeCores.Limit;
 
     /// <summary>Use the warm-started iterative eigensolver on real matrices (dense fallback when it does not converge).</summary>
     public bool Iterative { get; init; } = true;

@@ -1,4 +1,5 @@
 using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Eigen;
 using LevelDesign.Ui.Compute;
 using LevelDesign.Ui.Export;
 using LevelDesign.Ui.Session;
@@ -18,6 +19,8 @@ public static class TerminalApp
 
     public static int Run(DeviceDocument? document, string? path)
     {
+        // keep a core for keys and drawing while a module's point or a sweep computes
+        ComputeCores.Limit = ComputeCores.AllButOne;
         var session = new EditSession();
         if (document is not null) session.OpenDocument(document, path ?? (document.Path.Length > 0 && document.Path != DeviceDocument.DemoPath ? document.Path : null));
         else if (path is not null) session.OpenFile(path);
