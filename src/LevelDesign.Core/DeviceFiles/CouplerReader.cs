@@ -1,6 +1,7 @@
 using LevelDesign.Core.Couplers;
 using LevelDesign.Core.DeviceFiles.Source;
 using LevelDesign.Core.Elements;
+using LevelDesign.Core.Kinds;
 using LevelDesign.Core.Units;
 
 namespace LevelDesign.Core.DeviceFiles;
@@ -13,14 +14,6 @@ public static class CouplerReader
 {
     public static readonly IReadOnlyList<string> Keys = ["kind", "between", "operators", "form", "g", "g_at", "coefficient", "capacitance"];
 
-    private static readonly Dictionary<string, CouplerKind> Kinds = new()
-    {
-        ["capacitive"] = CouplerKind.Capacitive,
-        ["inductive"] = CouplerKind.Inductive,
-        ["exchange"] = CouplerKind.Exchange,
-        ["custom"] = CouplerKind.Custom,
-    };
-
     /// <param name="declared">Every element id of the file, also those whose table had errors (already reported).</param>
     public static Coupler? Read(string id, SourceTable table, ErrorList errors, IReadOnlyDictionary<string, Element> elements,
         IReadOnlySet<string>? declared = null)
@@ -28,13 +21,13 @@ public static class CouplerReader
         string path = "couplers." + id;
         int before = errors.Count;
         var r = new TableReader(table, path, errors, Keys.ToHashSet());
-        string? kindText = r.Choice("kind", Kinds.Keys, required: true);
+        string? kindText = r.Choice("kind", CouplerKindInfo.Names, required: true);
         var between = r.TextArray("between", 2, required: true, "the two element ids, e.g. between = [\"qa\", \"ra\"]");
         var operators = r.TextArray("operators", 2);
         string? formText = r.Choice("form", ["full", "exchange"]);
         if (kindText is null || between is null) return null;
-        var kind = Kinds[kindText];
-        if (kind == CouplerKind.Custom && operators is null && !r.Has("operators"))
+        var kind = CouplerKindInfo.Named(kindText)!.Kind;
+        if (CouplerKindInfo.Of(kind).NeedsOperators && operators is null && !r.Has("operators"))
             r.Missing("operators", "a custom coupler names one operator of each element, e.g. operators = [\"n\", \"phi\"]");
 
         for (int side = 0; side < 2; side++)

@@ -1,7 +1,7 @@
 using System.Text.RegularExpressions;
 using LevelDesign.Core.Couplers;
 using LevelDesign.Core.DeviceFiles.Source;
-using LevelDesign.Core.Elements;
+using LevelDesign.Core.Kinds;
 
 namespace LevelDesign.Core.DeviceFiles;
 
@@ -19,49 +19,55 @@ public sealed partial class DeviceDocument
     private static readonly string[] IdSections = ["elements", "couplers", "biases", "points", "sweeps"];
 
     /// <summary>
-    /// Appends [elements.ID] with default values for the kind (marked as defaults in a comment), after the last
-    /// element table. A level list has no sensible defaults (it needs its own energies and matrices), so it is refused.
+    /// Appends [elements.ID] with the kind's default values (marked as defaults in a comment), after the last
+    /// element table.
     /// </summary>
-    public DeviceDocument WithElement(string id, ElementKind kind, out DeviceFileError? error)
+    public DeviceDocument WithElement(string id, ElementKindInfo kind, out DeviceFileError? error)
     {
         string field = "elements." + id;
         if (NewIdProblem(id, "elements") is string problem) { error = Error(field, problem); return this; }
-        string? values = kind switch
-        {
-            ElementKind.Transmon => "ec = \"200 MHz\"\nej = \"16 GHz\"\n",
-            ElementKind.TunableTransmon => "ec = \"200 MHz\"\nej_sum = \"20 GHz\"\nasymmetry = 0.3\nflux = 0.0\n",
-            ElementKind.Fluxonium => "ec = \"1 GHz\"\nej = \"4 GHz\"\nel = \"1 GHz\"\nflux = 0.5\n",
-            ElementKind.KerrOscillator => "frequency = \"5 GHz\"\nanharmonicity = \"-200 MHz\"\n",
-            ElementKind.Resonator => "frequency = \"7 GHz\"\nkappa = \"1 MHz\"\n",
-            _ => null,
-        };
-        if (values is null)
-        {
-            error = Error(field, $"a {ElementKinds.Key(kind)} has no default values (it needs its own energies and operator matrices); write it in the file");
-            return this;
-        }
-        string block = $"[elements.{id}]\n# default values for a new {ElementKinds.Key(kind)}, not a design: set your own\nkind = \"{ElementKinds.Key(kind)}\"\n{values}";
+        string block = $"[elements.{id}]\n# default values for a new {kind.InsertName}, not a design: set your own\nkind = \"{kind.Name}\"\n{kind.NewElementValues}";
         return Inserted(block, AfterLastTable("elements"), field, out error);
     }
 
     /// <summary>
     /// Appends [couplers.ID] linking elements a and b with strength g (text such as "10 MHz"; the default is
-    /// marked as such), after the last coupler table. A custom coupler needs operators, so it is refused here.
+    /// marked as such), after the last coupler table. A kind that needs operators (custom) takes them as
+    /// (operator of a, operator of b).
     /// </summary>
-    public DeviceDocument WithCoupler(string id, CouplerKind kind, string a, string b, out DeviceFileError? error, string? g = null)
+    public DeviceDocument WithCoupler(string id, CouplerKindInfo kind, string a, string b, out DeviceFileError? error, string? g = null,
+        (string A, string B)? operators = null)
     {
         string field = "couplers." + id;
         if (NewIdProblem(id, "couplers") is string problem) { error = Error(field, problem); return this; }
-        if (kind == CouplerKind.Custom)
+        if (kind.NeedsOperators && operators is null)
         {
-            error = Error(field, "a custom coupler names an operator of each element; write it in the file with operators = [...]");
+            error = Error(field, $"a {kind.Name} coupler names an operator of each element, e.g. n and sx");
             return this;
         }
-        string kindKey = kind.ToString().ToLowerInvariant();
         string strength = g is null ? "g = \"10 MHz\"   # default strength, not a design: set your own\n" : $"g = {Literal(g, false)}\n";
-        string block = $"[couplers.{id}]\nkind = \"{kindKey}\"\nbetween = [{Quote(a)}, {Quote(b)}]\n{strength}";
+        string ops = operators is var (opA, opB) ? $"operators = [{Quote(opA)}, {Quote(opB)}]\n" : "";
+        string block = $"[couplers.{id}]\nkind = \"{kind.Name}\"\nbetween = [{Quote(a)}, {Quote(b)}]\n{ops}{strength}";
         int at = HasTables("couplers") ? AfterLastTable("couplers") : AfterLastTable("elements");
         return Inserted(block, at, field, out error);
+    }
+
+    /// <summary>
+    /// An id for a new coupler: "A_B" for the first two elements not yet coupled to each other (or the first two), with
+    /// a number added while it is taken.
+    /// </summary>
+    public string NewCouplerId(out string a, out string b)
+    {
+        var ids = Device.Elements.Select(e => e.Id).ToList();
+        (a, b) = (ids.ElementAtOrDefault(0) ?? "a", ids.ElementAtOrDefault(1) ?? "b");
+        var linked = Device.Couplers.Select(c => (c.ElementA, c.ElementB)).ToHashSet();
+        bool found = false;
+        for (int i = 0; i < ids.Count && !found; i++)
+            for (int j = i + 1; j < ids.Count && !found; j++)
+                if (!linked.Contains((ids[i], ids[j])) && !linked.Contains((ids[j], ids[i]))) { (a, b) = (ids[i], ids[j]); found = true; }
+        string stem = $"{a}_{b}", id = stem;
+        for (int n = 2; n < 1000 && NewIdProblem(id, "couplers") is not null; n++) id = $"{stem}_{n}";
+        return id;
     }
 
     /// <summary>

@@ -12,7 +12,7 @@ namespace LevelDesign.Core.DeviceFiles;
 public sealed record FitField(string DevicePath, UnitKind Kind, string? FieldPath, string UnitText, string? Refusal)
 {
     /// <summary>Keys that give the same physical quantity another way, named in the refusal.</summary>
-    private static readonly string[] OtherForms = ["ec", "capacitance", "ej", "ic", "rn", "ej_sum", "asymmetry", "ej1", "ej2", "ic1", "ic2", "rn1", "rn2", "el", "inductance", "g", "coefficient"];
+    private static readonly string[] OtherForms = [.. Kinds.ElementKindCatalog.CircuitFormKeys, "g", "coefficient"];
 
     public static FitField Of(DeviceDocument document, string devicePath)
     {

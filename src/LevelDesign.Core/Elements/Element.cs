@@ -6,8 +6,6 @@ namespace LevelDesign.Core.Elements;
 /// </summary>
 public abstract record Element(string Id)
 {
-    public abstract ElementKind Kind { get; }
-
     /// <summary>Whether ZZ, 2χ and anharmonicity are reported for this element.</summary>
     public virtual bool IsQubitLike => true;
 
@@ -39,5 +37,5 @@ public abstract record Element(string Id)
     public abstract IReadOnlyList<string> Validate();
 
     protected Exception UnknownParameter(string name) =>
-        new ArgumentException($"element '{Id}' ({ElementKinds.Key(Kind)}) has no parameter '{name}' (it has: {string.Join(", ", Parameters.Keys)})");
+        new ArgumentException($"element '{Id}' has no parameter '{name}' (it has: {string.Join(", ", Parameters.Keys)})");
 }

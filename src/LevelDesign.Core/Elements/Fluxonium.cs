@@ -3,7 +3,6 @@ namespace LevelDesign.Core.Elements;
 /// <summary>Fluxonium: H = 4E_C n² + ½E_L φ² − E_J cos(φ − 2πΦ/Φ0), Φ in Φ0.</summary>
 public sealed record Fluxonium(string Id, double Ec, double Ej, double El, double Flux) : Element(Id)
 {
-    public override ElementKind Kind => ElementKind.Fluxonium;
 
     public override IReadOnlyList<string> BiasParameters => ["flux"];
 

@@ -3,7 +3,6 @@ namespace LevelDesign.Core.Elements;
 /// <summary>Kerr (Duffing) oscillator: H = ω a†a + (α/2) a†a†aa. Optional E_C sets the physical charge scale.</summary>
 public sealed record KerrOscillator(string Id, double Frequency, double Anharmonicity, double? Ec = null) : Element(Id)
 {
-    public override ElementKind Kind => ElementKind.KerrOscillator;
 
     public override IReadOnlyList<string> OperatorNames { get; } = ["a", "adag", "number", "n", "phi"];
 

@@ -14,7 +14,6 @@ public sealed record LevelList(
     IReadOnlyDictionary<string, double[,]> OperatorMatrices,
     double[,]? Overlap = null) : Element(Id)
 {
-    public override ElementKind Kind => ElementKind.LevelList;
 
     public int BasisSize => Hamiltonian.GetLength(0);
 

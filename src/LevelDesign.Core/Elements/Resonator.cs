@@ -5,7 +5,6 @@ namespace LevelDesign.Core.Elements;
 /// </summary>
 public sealed record Resonator(string Id, double Frequency, double? Ec = null, double? Kappa = null) : Element(Id)
 {
-    public override ElementKind Kind => ElementKind.Resonator;
 
     public override bool IsQubitLike => false;
 

@@ -3,7 +3,6 @@ namespace LevelDesign.Core.Elements;
 /// <summary>Fixed-frequency transmon or Cooper-pair box: H = 4E_C(n − n_g)² − E_J cos φ.</summary>
 public sealed record Transmon(string Id, double Ec, double Ej, double Ng = 0) : Element(Id)
 {
-    public override ElementKind Kind => ElementKind.Transmon;
 
     public override IReadOnlyList<string> BiasParameters => ["ng"];
 

@@ -3,7 +3,6 @@ namespace LevelDesign.Core.Elements;
 /// <summary>Flux-tunable transmon with a two-junction SQUID: a transmon with E_J = E_J(Φ) of <see cref="SquidJosephsonEnergy"/>.</summary>
 public sealed record TunableTransmon(string Id, double Ec, double EjSum, double Asymmetry, double Flux, double Ng = 0) : Element(Id)
 {
-    public override ElementKind Kind => ElementKind.TunableTransmon;
 
     public override IReadOnlyList<string> BiasParameters => ["flux", "ng"];
 

@@ -1,3 +1,4 @@
+using LevelDesign.Core.Kinds;
 using System.Text.Json.Nodes;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.Couplers;
@@ -27,7 +28,7 @@ public static class DescribeFormatter
             elements.Add(new JsonObject
             {
                 ["id"] = e.Id,
-                ["kind"] = ElementKinds.Key(e.Kind),
+                ["kind"] = ElementKindCatalog.Of(e).Name,
                 ["parameters"] = Parameters(e),
                 ["basis"] = new JsonObject { ["kind"] = bare.Basis.Kind, ["size"] = bare.Basis.Size },
                 ["levels_kept"] = bare.Levels,
@@ -42,7 +43,7 @@ public static class DescribeFormatter
             couplers.Add(new JsonObject
             {
                 ["id"] = c.Id,
-                ["kind"] = c.Source.Kind.ToString().ToLowerInvariant(),
+                ["kind"] = CouplerKindInfo.Of(c.Source.Kind).Name,
                 ["elements"] = new JsonArray(c.Source.ElementA, c.Source.ElementB),
                 ["operators"] = new JsonArray(c.Source.OperatorA, c.Source.OperatorB),
                 ["form"] = c.Form == CouplerForm.Exchange ? "exchange" : "full",

@@ -463,6 +463,33 @@ public class MainWindowTests
     }
 
     [Fact]
+    public void Insert_offers_every_kind_selects_what_it_added_and_makes_a_defect_with_a_custom_coupler()
+    {
+        using var ui = new UiHarness();
+        ui.WaitIdle();
+        foreach (var kind in LevelDesign.Core.Kinds.ElementKindCatalog.All)
+        {
+            ui.Press(Key.InsertChar);
+            Shows(ui.Screen, $"{kind.InsertLetter} {kind.InsertName}");
+            ui.Press(new Key(kind.InsertLetter));
+            ui.Type($"e{kind.InsertLetter}");
+            ui.Press(Key.Enter);
+            ui.WaitForScreen($"e{kind.InsertLetter}  {kind.Name}");
+            Shows(ui.Screen, $"Parameters: e{kind.InsertLetter}");   // the new element is the one selected
+        }
+        // a custom coupler between the qubit and the new two-level defect, through its transition operator
+        ui.Press(Key.InsertChar);
+        Shows(ui.Screen, "o custom");
+        ui.Press(new Key('o'));
+        ui.Replace("q_tls q ed n sx 4 MHz");
+        ui.Press(Key.Enter);
+        ui.WaitFor(() => ui.Session.Document!.Device.Couplers.Any(c => c.Id == "q_tls"), "the custom coupler");
+        var coupler = ui.Session.Document!.Device.Couplers.Single(c => c.Id == "q_tls");
+        Assert.Equal(("q", "n", "ed", "sx"), (coupler.ElementA, coupler.OperatorA, coupler.ElementB, coupler.OperatorB));
+        Shows(ui.Screen, "Coupler: q_tls");
+    }
+
+    [Fact]
     public void Saving_does_not_rerun_the_sweep()
     {
         using var ui = new UiHarness();

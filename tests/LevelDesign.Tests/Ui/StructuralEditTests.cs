@@ -1,6 +1,7 @@
 using LevelDesign.Core.Couplers;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Elements;
+using LevelDesign.Core.Kinds;
 using LevelDesign.Tests.Support;
 
 namespace LevelDesign.Tests.Ui;
@@ -50,7 +51,7 @@ public sealed class StructuralEditTests : IDisposable
     public void AddedElementIsAppendedAfterTheLastElementWithMarkedDefaults()
     {
         var document = Load("pair.toml");
-        var added = document.WithElement("qd", ElementKind.Transmon, out var error);
+        var added = document.WithElement("qd", new TransmonKind(), out var error);
         Assert.Null(error);
         AssertKeptInOrder(document.ToText(), added.ToText());
         string text = added.ToText();
@@ -58,42 +59,82 @@ public sealed class StructuralEditTests : IDisposable
         Assert.True(text.IndexOf("[elements.qd]") < text.IndexOf("[couplers.qa_ra]"));
         Assert.Contains("# default values for a new transmon", text);
         var reloaded = SaveAndReload(added);
-        Assert.Equal(ElementKind.Transmon, reloaded.Device.Element("qd").Kind);
+        Assert.IsType<Transmon>(reloaded.Device.Element("qd"));
         Assert.Equal(0.2, reloaded.Device.GetParameter("qd.ec"), 12);
         Assert.Equal(document.Device.Elements.Count + 1, reloaded.Device.Elements.Count);
     }
 
+    public static TheoryData<string> KindNames => new(ElementKindCatalog.Names);
+
     [Theory]
-    [InlineData(ElementKind.TunableTransmon)]
-    [InlineData(ElementKind.Fluxonium)]
-    [InlineData(ElementKind.KerrOscillator)]
-    [InlineData(ElementKind.Resonator)]
-    public void EveryKindWithDefaultsReadsBack(ElementKind kind)
+    [MemberData(nameof(KindNames))]
+    public void EveryKindCanBeAddedWithItsDefaultsAndReadsBack(string name)
     {
+        var kind = ElementKindCatalog.Named(name)!;
         var added = Load("single.toml").WithElement("extra", kind, out var error);
         Assert.Null(error);
-        Assert.Equal(kind, SaveAndReload(added).Device.Element("extra").Kind);
+        var element = SaveAndReload(added).Device.Element("extra");
+        Assert.IsType(kind.ElementType, element);
+        Assert.Same(kind, ElementKindCatalog.Of(element));
     }
 
     [Fact]
-    public void BadOrTakenIdsAndLevelListsAreRefusedWithAReason()
+    public void A_new_level_list_is_a_two_level_defect_that_a_custom_coupler_can_reach()
+    {
+        var document = Load("single.toml").WithElement("tls", new LevelListKind(), out var error);
+        Assert.Null(error);
+        var tls = document.Device.Element("tls");
+        Assert.Equal(2, tls.MaxLevels);
+        Assert.Contains("sx", tls.OperatorNames);
+        string qubit = document.Device.Elements[0].Id;
+        var linked = document.WithCoupler("q_tls", CouplerKindInfo.Named("custom")!, qubit, "tls", out error, "3 MHz", ("n", "sx"));
+        Assert.Null(error);
+        var coupler = SaveAndReload(linked).Device.Couplers.Single(c => c.Id == "q_tls");
+        Assert.Equal(("n", "sx"), (coupler.OperatorA, coupler.OperatorB));
+        // without operators a custom coupler is refused with the reason
+        Assert.Same(document, document.WithCoupler("q_tls2", CouplerKindInfo.Named("custom")!, qubit, "tls", out error));
+        Assert.Contains("names an operator of each element", error!.Message);
+    }
+
+    [Fact]
+    public void A_new_coupler_id_links_the_first_uncoupled_pair_and_is_never_taken()
     {
         var document = Load("pair.toml");
-        Assert.Same(document, document.WithElement("qa", ElementKind.Transmon, out var taken));
+        string id = document.NewCouplerId(out string a, out string b);
+        Assert.DoesNotContain(document.Device.Couplers, c => (c.ElementA, c.ElementB) == (a, b) || (c.ElementA, c.ElementB) == (b, a));
+        Assert.DoesNotContain(document.Device.Couplers, c => c.Id == id);
+        // pair.toml couples qa–ra, qa–qc, qa–qb, qb–rb, qb–qc: qa and rb are the first pair left
+        Assert.Equal(("qa", "rb", "qa_rb"), (a, b, id));
+        document.WithCoupler(id, CouplerKindInfo.Named("capacitive")!, a, b, out var error);
+        Assert.Null(error);
+        // every pair of single.toml is coupled already: the first pair again, with a number: a numbered id
+        var single = Load("single.toml");
+        string first = single.NewCouplerId(out a, out b);
+        var once = single.WithCoupler(first, CouplerKindInfo.Named("exchange")!, a, b, out error);
+        Assert.Null(error);
+        string second = once.NewCouplerId(out string a2, out string b2);
+        Assert.Equal(("q_r_2", "q_r_3"), (first, second));
+        once.WithCoupler(second, CouplerKindInfo.Named("exchange")!, a2, b2, out error);
+        Assert.Null(error);
+    }
+
+    [Fact]
+    public void BadOrTakenIdsAreRefusedWithAReason()
+    {
+        var document = Load("pair.toml");
+        Assert.Same(document, document.WithElement("qa", new TransmonKind(), out var taken));
         Assert.Contains("already used", taken!.Message);
-        document.WithElement("2q", ElementKind.Transmon, out var shape);
+        document.WithElement("2q", new TransmonKind(), out var shape);
         Assert.Contains("not a valid id", shape!.Message);
-        document.WithElement("qa_ra", ElementKind.Transmon, out var coupler);
+        document.WithElement("qa_ra", new TransmonKind(), out var coupler);
         Assert.Contains("already used", coupler!.Message);
-        document.WithElement("ll", ElementKind.LevelList, out var levelList);
-        Assert.Contains("write it in the file", levelList!.Message);
     }
 
     [Fact]
     public void AddedCouplerLinksTwoElementsAndBadEndsAreReportedFromTheReader()
     {
         var document = Load("pair.toml");
-        var added = document.WithCoupler("qa_rb", CouplerKind.Capacitive, "qa", "rb", out var error, "3 MHz");
+        var added = document.WithCoupler("qa_rb", CouplerKindInfo.Named("capacitive")!, "qa", "rb", out var error, "3 MHz");
         Assert.Null(error);
         AssertKeptInOrder(document.ToText(), added.ToText());
         Assert.True(added.ToText().IndexOf("[couplers.qa_rb]") > added.ToText().IndexOf("[couplers.qa_qb]"));
@@ -101,11 +142,11 @@ public sealed class StructuralEditTests : IDisposable
         Assert.Equal(("qa", "rb"), (coupler.ElementA, coupler.ElementB));
         Assert.Equal(0.003, ((CouplingStrength.TargetG)coupler.Strength).GHz, 12);
 
-        var withDefault = document.WithCoupler("g2", CouplerKind.Exchange, "qa", "qb", out error);
+        var withDefault = document.WithCoupler("g2", CouplerKindInfo.Named("exchange")!, "qa", "qb", out error);
         Assert.Null(error);
         Assert.Contains("default strength", withDefault.ToText());
 
-        Assert.Same(document, document.WithCoupler("bad", CouplerKind.Capacitive, "qa", "qz", out var missing));
+        Assert.Same(document, document.WithCoupler("bad", CouplerKindInfo.Named("capacitive")!, "qa", "qz", out var missing));
         Assert.Equal("couplers.bad.between", missing!.Field);
         Assert.Contains("no element 'qz'", missing.Message);
     }

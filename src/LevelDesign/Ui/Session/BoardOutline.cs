@@ -1,3 +1,4 @@
+using LevelDesign.Core.Kinds;
 using LevelDesign.Core.Presentation;
 using LevelDesign.Core.Couplers;
 using LevelDesign.Core.DeviceFiles;
@@ -15,7 +16,7 @@ public static class BoardOutline
         var nodes = new List<BoardNode> { new(BoardNodeKind.Device, "", 0, $"device {device.Name}") };
         nodes.Add(new BoardNode(BoardNodeKind.Group, "elements", 1, $"elements ({device.Elements.Count})"));
         foreach (var e in device.Elements)
-            nodes.Add(new BoardNode(BoardNodeKind.Element, e.Id, 2, $"{e.Id}  {ElementKinds.Key(e.Kind)}"));
+            nodes.Add(new BoardNode(BoardNodeKind.Element, e.Id, 2, $"{e.Id}  {ElementKindCatalog.Of(e).Name}"));
         nodes.Add(new BoardNode(BoardNodeKind.Group, "couplers", 1, $"couplers ({device.Couplers.Count})"));
         foreach (var c in device.Couplers)
             nodes.Add(new BoardNode(BoardNodeKind.Coupler, c.Id, 2, $"{c.Id}  {c.ElementA}–{c.ElementB}"));
@@ -25,19 +26,11 @@ public static class BoardOutline
         return nodes;
     }
 
-    /// <summary>Alternatives in the file from which a model parameter is computed, e.g. ec from capacitance.</summary>
-    private static readonly Dictionary<string, string[]> Alternatives = new()
+    /// <summary>The circuit-form key in the file from which a model parameter is computed, e.g. ec from capacitance.</summary>
+    private static string? DerivedFrom(DeviceDocument document, Element element, string name)
     {
-        ["ec"] = ["capacitance"],
-        ["ej"] = ["ic", "rn"],
-        ["ej_sum"] = ["ej1", "ej2", "ic1", "ic2", "rn1", "rn2"],
-        ["asymmetry"] = ["ej1", "ej2", "ic1", "ic2", "rn1", "rn2"],
-        ["el"] = ["inductance"],
-    };
-
-    private static string? DerivedFrom(DeviceDocument document, string id, string name)
-    {
-        foreach (var key in Alternatives.GetValueOrDefault(name, []))
+        string id = element.Id;
+        foreach (var key in ElementKindCatalog.Of(element).CircuitFormsOf(name))
             if (document.ValueTextOf($"elements.{id}.{key}") is not null) return "from " + key;
         if (name == "ec" && document.ValueTextOf("capacitance_matrix.nodes") is not null) return "from [capacitance_matrix]";
         return null;
@@ -55,8 +48,8 @@ public static class BoardOutline
             case BoardNodeKind.Element:
             {
                 var element = device.Element(node.Id);
-                var rows = new List<FieldRow> { new("kind", ElementKinds.Key(element.Kind), null, "") };
-                var fileKeys = ElementKeys.For(element.Kind);
+                var rows = new List<FieldRow> { new("kind", ElementKindCatalog.Of(element).Name, null, "") };
+                var fileKeys = ElementKindCatalog.Of(element).FileKeys;
                 foreach (var (name, value) in element.Parameters)
                 {
                     var kind = ParameterKinds.Of(name);
@@ -69,7 +62,7 @@ public static class BoardOutline
                             QuantityFormatter.Format(bias.Value, bias.ControlKind), Note: $"← bias {bias.Name}", ShortNote: $"← {bias.Name}"));
                     else if (document.ValueTextOf(path) is string written)
                         rows.Add(new FieldRow(name, shown, path, kind.ExampleText(), written));
-                    else if (DerivedFrom(document, element.Id, name) is string source)
+                    else if (DerivedFrom(document, element, name) is string source)
                         rows.Add(new FieldRow(name, shown, null, "", Note: $"({source})", ShortNote: ""));
                     else if (fileKeys.Contains(name))
                         rows.Add(new FieldRow(name, shown, path, kind.ExampleText() + " (not in the file yet: the edit adds it)"));

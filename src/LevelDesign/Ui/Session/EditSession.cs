@@ -1,3 +1,4 @@
+using LevelDesign.Core.Kinds;
 using LevelDesign.Core.Couplers;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Elements;
@@ -160,11 +161,11 @@ public sealed class EditSession
             return (next, null);
         }, done);
 
-    public EditOutcome AddElement(ElementKind kind, string id) =>
-        Apply(d => (d.WithElement(id, kind, out var e), e), $"added {ElementKinds.Key(kind)} '{id}' with default values");
+    public EditOutcome AddElement(ElementKindInfo kind, string id) =>
+        Apply(d => (d.WithElement(id, kind, out var e), e), $"added {kind.InsertName} '{id}' with default values");
 
-    public EditOutcome AddCoupler(CouplerKind kind, string id, string a, string b, string? strength) =>
-        Apply(d => (d.WithCoupler(id, kind, a, b, out var e, strength), e), $"added {kind.ToString().ToLowerInvariant()} coupler '{id}'");
+    public EditOutcome AddCoupler(CouplerKindInfo kind, string id, string a, string b, string? strength, (string A, string B)? operators = null) =>
+        Apply(d => (d.WithCoupler(id, kind, a, b, out var e, strength, operators), e), $"added {kind.Name} coupler '{id}'");
 
     /// <summary>Removes by id with what depends on it (see DeviceDocument.Without); the message lists what went.</summary>
     public EditOutcome Remove(string id)

@@ -19,6 +19,23 @@ public static class TextFit
     /// <summary>Cut to the width, then padded with spaces to exactly that width.</summary>
     public static string Pad(string text, int width) => width <= 0 ? "" : Cut(text, width).PadRight(width);
 
+    /// <summary>
+    /// Items joined by <paramref name="separator"/> into lines of at most <paramref name="width"/>, a new line only between
+    /// items, so a choice such as "r resonator" is never split across two lines.
+    /// </summary>
+    public static string Packed(string head, IEnumerable<string> items, int width, string separator = " · ")
+    {
+        var lines = new List<string> { head };
+        foreach (var item in items)
+        {
+            string last = lines[^1];
+            bool empty = last == head;
+            if (!empty && last.Length + separator.Length + item.Length > width) lines.Add(new string(' ', head.Length) + item);
+            else lines[^1] = empty ? last + item : last + separator + item;
+        }
+        return string.Join("\n", lines);
+    }
+
     /// <summary>Words wrapped into lines of at most <paramref name="width"/>; a word longer than a line is split.</summary>
     public static IEnumerable<string> Wrap(string text, int width) => Wrap(text, width, width);
 

@@ -1,3 +1,4 @@
+using LevelDesign.Core.Kinds;
 using LevelDesign.Core.DeviceFiles;
 using LevelDesign.Core.Couplers;
 using LevelDesign.Core.Eigen;
@@ -42,6 +43,7 @@ public sealed partial class MainWindow : Window
 
     private readonly LatestOnly _pointJobs = new(), _sweepJobs = new(), _fitJobs = new(), _solveJobs = new();
     private IReadOnlyList<BoardNode> _nodes = [];
+    private string? _selectAfterEdit;
     private IReadOnlyList<FieldRow> _fields = [];
     private Page _pageShown = Page.States, _pageBeforeHelp = Page.States;
     private bool _showLimits, _wideOff, _allowQuit, _computing, _sweeping, _sweepStale, _fitting, _solving;
@@ -377,7 +379,9 @@ public sealed partial class MainWindow : Window
             UpdateStatus();
             return;
         }
-        string? selectedId = _board.SelectedIndex < _nodes.Count ? _nodes[_board.SelectedIndex].Id : null;
+        // a new element or coupler is selected; otherwise the selection stays on its item
+        string? selectedId = _selectAfterEdit ?? (_board.SelectedIndex < _nodes.Count ? _nodes[_board.SelectedIndex].Id : null);
+        _selectAfterEdit = null;
         _nodes = BoardOutline.Nodes(document);
         int found = _nodes.ToList().FindIndex(n => n.Id == selectedId && n.Kind != BoardNodeKind.Group);
         int select = found >= 0 ? found : Math.Min(_board.SelectedIndex, _nodes.Count - 1); // a renamed item keeps its place
@@ -450,34 +454,39 @@ public sealed partial class MainWindow : Window
 
     private void AskAdd()
     {
-        var kinds = new Dictionary<char, Action>
-        {
-            ['t'] = () => AskNewElement(ElementKind.Transmon), ['u'] = () => AskNewElement(ElementKind.TunableTransmon),
-            ['f'] = () => AskNewElement(ElementKind.Fluxonium), ['k'] = () => AskNewElement(ElementKind.KerrOscillator),
-            ['r'] = () => AskNewElement(ElementKind.Resonator),
-            ['c'] = () => AskNewCoupler(CouplerKind.Capacitive), ['i'] = () => AskNewCoupler(CouplerKind.Inductive),
-            ['x'] = () => AskNewCoupler(CouplerKind.Exchange),
-        };
-        _prompt.Choose("add: t transmon · u tunable transmon · f fluxonium · k kerr · r resonator\ncouplers: c capacitive · i inductive · x exchange", kinds);
+        // every kind the file format has, from the kinds' own descriptions
+        var choices = new Dictionary<char, Action>();
+        foreach (var kind in ElementKindCatalog.All) choices[kind.InsertLetter] = () => AskNewElement(kind);
+        foreach (var kind in CouplerKindInfo.All) choices[kind.InsertLetter] = () => AskNewCoupler(kind);
+        // lines of at most 60 columns, broken between choices (the prompt fits 80×24 and wider)
+        _prompt.Choose(TextFit.Packed("add: ", ElementKindCatalog.All.Select(k => $"{k.InsertLetter} {k.InsertName}"), 60)
+            + "\n" + TextFit.Packed("couplers: ", CouplerKindInfo.All.Select(k => $"{k.InsertLetter} {k.Name}"), 60), choices);
     }
 
-    private void AskNewElement(ElementKind kind) =>
-        _prompt.Ask($"id of the new {ElementKinds.Key(kind)} (default values, marked in the file)", "", id =>
+    private void AskNewElement(ElementKindInfo kind) =>
+        _prompt.Ask($"id of the new {kind.InsertName} (default values, marked in the file)", "", id =>
         {
+            _selectAfterEdit = id.Trim();
             var outcome = _session.AddElement(kind, id.Trim());
             Report(outcome);
             return outcome.Accepted ? null : outcome.Message;
         });
 
-    private void AskNewCoupler(CouplerKind kind)
+    private void AskNewCoupler(CouplerKindInfo kind)
     {
-        var ids = _session.Document?.Device.Elements.Select(e => e.Id).ToList() ?? [];
-        string suggestion = ids.Count >= 2 ? $"{ids[0]}_{ids[1]} {ids[0]} {ids[1]} 10 MHz" : "";
-        _prompt.Ask($"new {kind.ToString().ToLowerInvariant()} coupler: ID ELEMENT_A ELEMENT_B g", suggestion, text =>
+        var document = _session.Document;
+        if (document is null) { Say("no device is open", warning: true); return; }
+        string id = document.NewCouplerId(out string a, out string b);
+        string form = kind.NeedsOperators ? "ID ELEMENT_A ELEMENT_B OPERATOR_A OPERATOR_B g" : "ID ELEMENT_A ELEMENT_B g";
+        string suggestion = kind.NeedsOperators ? $"{id} {a} {b} n n 10 MHz" : $"{id} {a} {b} 10 MHz";
+        _prompt.Ask($"new {kind.Name} coupler: {form}", suggestion, text =>
         {
-            var w = text.Split(' ', 4, StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
-            if (w.Length < 3) return "write ID ELEMENT_A ELEMENT_B g, e.g. qa_qb qa qb 10 MHz (g may be left out: 10 MHz, marked as a default)";
-            var outcome = _session.AddCoupler(kind, w[0], w[1], w[2], w.Length > 3 ? w[3] : null);
+            int needed = kind.NeedsOperators ? 5 : 3;
+            var w = text.Split(' ', needed + 1, StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
+            if (w.Length < needed) return $"write {form}, e.g. {suggestion} (g may be left out: 10 MHz, marked as a default)";
+            _selectAfterEdit = w[0];
+            var outcome = _session.AddCoupler(kind, w[0], w[1], w[2], w.Length > needed ? w[needed] : null,
+                kind.NeedsOperators ? (w[3], w[4]) : null);
             Report(outcome);
             return outcome.Accepted ? null : outcome.Message;
         });
