@@ -61,6 +61,24 @@ public sealed class EditSessionTests : IDisposable
     }
 
     [Fact]
+    public void The_device_form_edits_truncation_and_the_purity_threshold()
+    {
+        var session = new EditSession();
+        session.OpenFile(UiHarness.CopyDevice("pair.toml", _folder));
+        var rows = BoardOutline.Fields(session.Document!, BoardOutline.Nodes(session.Document!)[0]);
+        string PathOf(string name) => rows.Single(r => r.Name == name).FieldPath!;
+        Assert.True(session.SetValue(PathOf("max excitations"), "3").Accepted);
+        Assert.Equal(3, session.Document!.Device.Truncation.MaxExcitations);
+        Assert.True(session.SetValue(PathOf("levels each"), "5").Accepted);
+        Assert.Equal(5, session.Document!.Device.Truncation.DefaultLevels);
+        Assert.True(session.SetValue(PathOf("purity threshold"), "0.95").Accepted);
+        Assert.Equal(0.95, session.Document!.PurityThreshold);
+        var refused = session.SetValue(PathOf("purity threshold"), "1.5");
+        Assert.False(refused.Accepted);
+        Assert.Equal(0.95, session.Document!.PurityThreshold);
+    }
+
+    [Fact]
     public void The_demo_has_no_file_so_save_asks_for_one()
     {
         var session = new EditSession();

@@ -490,6 +490,30 @@ public class MainWindowTests
     }
 
     [Fact]
+    public void Levels_and_basis_size_are_edited_in_the_form()
+    {
+        using var ui = new UiHarness();
+        ui.WaitIdle();
+        EditField(ui, "q", "levels");
+        ui.Replace("5");
+        ui.Press(Key.Enter);
+        ui.WaitFor(() => ui.Session.Document!.Device.Truncation.LevelsOf("q") == 5, "q keeps 5 levels");
+        EditField(ui, "q", "basis_size");
+        ui.Replace("41");
+        ui.Press(Key.Enter);
+        ui.WaitFor(() => ui.Session.Document!.ValueTextOf("elements.q.basis_size") == "41", "basis_size written");
+        // out of range: refused with the reason, the device unchanged
+        EditField(ui, "q", "levels");
+        ui.Replace("1");
+        ui.Press(Key.Enter);
+        Assert.True(ui.Window.Prompt.IsOpen);
+        Assert.Equal(5, ui.Session.Document!.Device.Truncation.LevelsOf("q"));
+        ui.Press(Key.Esc);
+
+        ui.Press(Key.Esc);
+    }
+
+    [Fact]
     public void Saving_does_not_rerun_the_sweep()
     {
         using var ui = new UiHarness();

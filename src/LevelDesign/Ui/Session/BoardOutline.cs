@@ -73,7 +73,19 @@ public static class BoardOutline
                 foreach (var key in fileKeys.Where(k => k is not ("kind" or "levels") && !element.Parameters.ContainsKey(k)))
                     if (document.ValueTextOf($"elements.{element.Id}.{key}") is string text && !text.StartsWith('['))
                         rows.Add(new FieldRow(key, text, $"elements.{element.Id}.{key}", ParameterKinds.Of(key).ExampleText()));
-                rows.Add(new FieldRow("levels kept", device.Truncation.LevelsOf(element.Id).ToString(), null, ""));
+                // kept levels and the basis size are edited like any value; the file gains the key when it lacks it
+                var kindInfo = ElementKindCatalog.Of(element);
+                string levelsPath = $"elements.{element.Id}.levels";
+                rows.Add(new FieldRow("levels", device.Truncation.LevelsOf(element.Id).ToString(), levelsPath,
+                    element.MaxLevels is int most ? $"bare levels kept, 2 … {most}" : "bare levels kept, a whole number ≥ 2",
+                    Note: document.ValueTextOf(levelsPath) is null ? "([truncation] default_levels)" : null, ShortNote: ""));
+                if (kindInfo.MaxBasisSize is int largest)
+                {
+                    string basisPath = $"elements.{element.Id}.basis_size";
+                    string? basis = document.ValueTextOf(basisPath);
+                    rows.Add(new FieldRow("basis_size", basis ?? "auto", basisPath,
+                        $"natural basis size, 3 … {largest} (leave the key out to grow it until the kept levels converge)", EditText: basis ?? ""));
+                }
                 rows.Add(new FieldRow("operators", string.Join(" ", element.OperatorNames), null, ""));
                 return rows;
             }
@@ -82,7 +94,7 @@ public static class BoardOutline
                 var c = device.Couplers.First(x => x.Id == node.Id);
                 var rows = new List<FieldRow>
                 {
-                    new("kind", c.Kind.ToString().ToLowerInvariant(), null, ""),
+                    new("kind", CouplerKindInfo.Of(c.Kind).Name, null, ""),
                     new("links", $"{c.ElementA}.{c.OperatorA} · {c.ElementB}.{c.OperatorB}", null, ""),
                     new("form", c.Form == CouplerForm.Exchange ? "exchange (rotating wave)" : "full", null, ""),
                 };
@@ -125,9 +137,13 @@ public static class BoardOutline
                 [
                     new("name", device.Name, null, ""),
                     new("file", document.Path, null, ""),
-                    new("levels each", t.DefaultLevels.ToString(), null, ""),
-                    new("max excitations", t.MaxExcitations?.ToString() ?? "none", null, ""),
-                    new("max bare energy", t.MaxBareEnergyGHz is double e ? ParameterText.Format(e, UnitKind.Frequency) : "none", null, ""),
+                    new("levels each", t.DefaultLevels.ToString(), "truncation.default_levels", "bare levels kept per element, a whole number ≥ 2"),
+                    new("max excitations", t.MaxExcitations?.ToString() ?? "none", "truncation.max_excitations",
+                        "keep product states with at most this many excitations, a whole number ≥ 1", EditText: t.MaxExcitations?.ToString() ?? ""),
+                    new("max bare energy", t.MaxBareEnergyGHz is double e ? ParameterText.Format(e, UnitKind.Frequency) : "none", "truncation.max_bare_energy",
+                        "keep product states below this bare energy, " + UnitKind.Frequency.ExampleText(), EditText: t.MaxBareEnergyGHz is null ? "" : null),
+                    new("purity threshold", document.PurityThreshold.ToString("0.###", System.Globalization.CultureInfo.InvariantCulture), "device.purity_threshold",
+                        "below this purity a result's labels count as hybridized, 0 … 1"),
                     new("operating points", string.Join(", ", document.Points.Select(p => p.Name)), null, ""),
                     new("sweeps", string.Join(", ", document.Sweeps.Select(s => s.Name)), null, ""),
                 ];
