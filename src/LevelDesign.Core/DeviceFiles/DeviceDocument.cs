@@ -124,15 +124,7 @@ public sealed partial class DeviceDocument
     /// </summary>
     public Device Resolve(IReadOnlyList<SweepAxis> axes, IReadOnlyList<double> values, IReadOnlyDictionary<string, double>? start = null,
         Device? from = null)
-    {
-        var settings = new Dictionary<string, double>(start ?? new Dictionary<string, double>());
-        for (int i = 0; i < axes.Count; i++)
-        {
-            settings[axes[i].Path] = values[i];
-            foreach (var link in axes[i].Links) settings[link.Path] = link.Scale * values[i] + link.Shift;
-        }
-        return At(settings, from);
-    }
+        => At(Core.Sweeps.ParameterResolver.Settings(axes, values, start), from);
 
     /// <summary>The device at a named operating point.</summary>
     public Device AtPoint(string name)

@@ -24,13 +24,26 @@ public static class ParameterResolver
 
     public static Device Apply(Device device, IReadOnlyList<SweepAxis> axes, IReadOnlyList<double> values)
     {
+        foreach (var (path, value) in Settings(axes, values)) device = device.WithParameter(path, value);
+        return device;
+    }
+
+    /// <summary>
+    /// What one point of a sweep sets, in order: each axis's path (a parameter path or, for a document, a bias name)
+    /// to its value and each linked path to Scale·value + Shift, after the <paramref name="start"/> settings. The one
+    /// place this rule is written; <see cref="DeviceFiles.DeviceDocument.Resolve"/> maps bias names on top of it.
+    /// </summary>
+    public static Dictionary<string, double> Settings(IReadOnlyList<SweepAxis> axes, IReadOnlyList<double> values,
+        IReadOnlyDictionary<string, double>? start = null)
+    {
         if (values.Count != axes.Count) throw new ArgumentException($"{values.Count} axis values given for {axes.Count} axes");
+        var settings = new Dictionary<string, double>(start ?? new Dictionary<string, double>());
         for (int i = 0; i < axes.Count; i++)
         {
-            device = device.WithParameter(axes[i].Path, values[i]);
-            foreach (var link in axes[i].Links) device = device.WithParameter(link.Path, link.Scale * values[i] + link.Shift);
+            settings[axes[i].Path] = values[i];
+            foreach (var link in axes[i].Links) settings[link.Path] = link.Scale * values[i] + link.Shift;
         }
-        return device;
+        return settings;
     }
 
     /// <summary>A one-axis resolver as a function of the bias alone (for crossings, targets and fits).</summary>

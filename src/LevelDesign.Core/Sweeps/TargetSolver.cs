@@ -23,6 +23,12 @@ public static class TargetSolver
 {
     public static async Task<IReadOnlyList<TargetRoot>> FindAllAsync(Func<IReadOnlyList<double>, Device> resolve, SweepAxis axis,
         string quantity, double target, SweepOptions? options = null, int? levels = null, double tolerance = 1e-12,
+        CancellationToken cancellation = default, double? refineBelowPurity = null) =>
+        (await SearchAsync(resolve, axis, quantity, target, options, levels, tolerance, cancellation, refineBelowPurity).ConfigureAwait(false)).Roots;
+
+    /// <summary>As <see cref="FindAllAsync"/>, with the scan point nearest the goal as well.</summary>
+    public static async Task<TargetSearchResult> SearchAsync(Func<IReadOnlyList<double>, Device> resolve, SweepAxis axis,
+        string quantity, double target, SweepOptions? options = null, int? levels = null, double tolerance = 1e-12,
         CancellationToken cancellation = default, double? refineBelowPurity = null)
     {
         options ??= new SweepOptions();
@@ -100,7 +106,11 @@ public static class TargetSolver
                 }
             }
         }
-        return roots;
+        int nearest = -1;
+        for (int i = 0; i < f.Length; i++)
+            if (double.IsFinite(f[i]) && (nearest < 0 || Math.Abs(f[i]) < Math.Abs(f[nearest]))) nearest = i;
+        var closest = nearest < 0 ? null : new TargetApproach(x[nearest], f[nearest] + target, PurityAt(nearest));
+        return new TargetSearchResult(roots, closest);
 
         double PurityAt(int i) => QuantityLookup.Purity(scan.Points[i].QuantityPurities, quantity);
     }

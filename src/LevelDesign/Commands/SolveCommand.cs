@@ -49,14 +49,21 @@ public static class SolveCommand
         var available = DerivedQuantities.From(solver.Solve(setup.Resolve([axis.Start]), planLevels)).Named().Keys.ToArray();
         var (quantity, value) = FitCommand.Term("--target", () => TargetTerm.Parse(target, available));
         var options = new SweepOptions { Solver = solver };
-        var roots = SweepExecution.WithCancel(token =>
-            TargetSolver.FindAllAsync(setup.Resolve, axis, quantity, value, options, planLevels, ToleranceFor(axis), token, refineBelowPurity: threshold));
+        var found = SweepExecution.WithCancel(token =>
+            TargetSolver.SearchAsync(setup.Resolve, axis, quantity, value, options, planLevels, ToleranceFor(axis), token, refineBelowPurity: threshold));
+        var roots = found.Roots;
         Console.Write(json ? TargetReport.Json(document, axis, quantity, value, roots, threshold) : TargetReport.Table(document, axis, quantity, value, roots, threshold));
         if (roots.Any(r => r.Refined && r.IsHybridized(threshold)))
             Console.Error.WriteLine(string.Create(System.Globalization.CultureInfo.InvariantCulture, $"warning: {roots.Count(r => r.Refined && r.IsHybridized(threshold))} root(s) lie inside a hybridized region (purity below {threshold:G3})"));
         foreach (var r in roots.Where(r => r.Refined))
             EffectiveCommand.WarnIfIllConditioned(solver.Solve(setup.Resolve([r.Bias]), planLevels), quantity, $"{axis.Path} = {r.Bias:G10}");
-        if (!roots.Any(r => r.Refined)) Console.Error.WriteLine($"no root of {quantity} = target between {axis.Start:G6} and {axis.Stop:G6}");
+        if (!roots.Any(r => r.Refined))
+        {
+            var unit = ShownUnit.Of(document, axis.Path);
+            string closest = found.Closest is { } c
+                ? $"; closest: {FrequencyText.Of(quantity, c.Value)} ({FrequencyText.Of(quantity, c.Value - value)} off) at {unit.Text(c.Bias)}" : "";
+            Console.Error.WriteLine($"no root of {quantity} = {FrequencyText.Of(quantity, value)} between {unit.Text(axis.Start)} and {unit.Text(axis.Stop)}{closest}");
+        }
         return ExitCodes.Ok;
     });
 

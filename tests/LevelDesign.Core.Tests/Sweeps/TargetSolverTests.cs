@@ -36,6 +36,27 @@ public class TargetSolverTests
         Assert.Equal(-roots[0].Bias, roots[1].Bias, 1e-8);   // E_J(Φ) is even in Φ
     }
 
+    /// <summary>
+    /// A goal above the whole tuning range: no root, and the closest approach is the sweet spot (flux 0), where f01 is
+    /// largest — the scan point whose f01 the search reports, equal to a plain solve there.
+    /// </summary>
+    [Fact]
+    public async Task A_missed_target_reports_the_scan_point_nearest_the_goal()
+    {
+        var device = new Device("one", [new TunableTransmon("q", 0.2, 30, 0.35, 0)], [], new Truncation { DefaultLevels = 3 });
+        var axis = new SweepAxis("q.flux", -0.5, 0.5, 21, []);
+        var result = await TargetSolver.SearchAsync(ParameterResolver.ForPaths(device, [axis]), axis, "q.f01", 9.0);
+        Assert.Empty(result.Roots);
+        var closest = Assert.IsType<TargetApproach>(result.Closest);
+        Assert.Equal(0, closest.Bias, 12);
+        var atSweetSpot = LevelDesign.Core.Analysis.DerivedQuantities.From(new LevelDesign.Core.Composite.DeviceSolver().Solve(device, 3)).Named()["q.f01"];
+        Assert.Equal(atSweetSpot, closest.Value, 9);
+        Assert.Equal(1.0, closest.Purity, 12);
+        // below the range: the closest point is an end, where f01 is lowest
+        var below = await TargetSolver.SearchAsync(ParameterResolver.ForPaths(device, [axis]), axis, "q.f01", 0.5);
+        Assert.Equal(0.5, Math.Abs(below.Closest!.Bias), 12);
+    }
+
     [Fact]
     public async Task Unknown_quantity_names_the_available_ones()
     {

@@ -58,6 +58,8 @@ public class FitPromptTests
         ui.WaitFor(() => ui.Window.Prompt.IsOpen && ui.Window.Prompt.Question.Contains("a applies"), "the fit result", 180000);
         string offer = ui.Window.Prompt.Question;
         Assert.Contains("q.ej_sum = ", offer);
+        // how the fit ended, in the command line's words
+        Assert.Matches(@"fit \(\d+ steps, (residuals at numerical precision|step below tolerance|no further decrease)", offer);
         Assert.Contains(" GHz", offer);          // shown in the file's unit of each field
         Assert.Contains(" MHz", offer);
         Assert.Contains("q.f01 off by", offer);   // every target's residual

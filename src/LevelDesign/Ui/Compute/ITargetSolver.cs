@@ -6,5 +6,5 @@ namespace LevelDesign.Ui.Compute;
 /// <summary>Solves a target for one bias: every bias in the range where the named quantity equals the goal.</summary>
 public interface ITargetSolver
 {
-    Task<IReadOnlyList<TargetRoot>> FindAllAsync(DeviceDocument document, TargetRequest request, CancellationToken cancellation);
+    Task<TargetSearchResult> FindAllAsync(DeviceDocument document, TargetRequest request, CancellationToken cancellation);
 }

@@ -12,10 +12,10 @@ public sealed class TargetSearch : ITargetSolver
     /// <summary>Scan points over the range; two roots closer than one step apart can be missed.</summary>
     public const int ScanPoints = 41;
 
-    public Task<IReadOnlyList<TargetRoot>> FindAllAsync(DeviceDocument document, TargetRequest request, CancellationToken cancellation)
+    public Task<TargetSearchResult> FindAllAsync(DeviceDocument document, TargetRequest request, CancellationToken cancellation)
     {
         var axis = new SweepAxis(request.Bias, request.Low, request.High, request.ScanPoints, []);
-        return TargetSolver.FindAllAsync(values => document.Resolve([axis], values), axis, request.Quantity, request.GoalGHz,
+        return TargetSolver.SearchAsync(values => document.Resolve([axis], values), axis, request.Quantity, request.GoalGHz,
             new SweepOptions(), cancellation: cancellation, refineBelowPurity: document.PurityThreshold);
     }
 }
