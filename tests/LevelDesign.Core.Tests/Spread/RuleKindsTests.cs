@@ -60,11 +60,10 @@ public sealed class RuleKindsTests
     }
 
     [Fact]
-    public void ARootRuleFindsTheTargetSearchsRootOrNone()
+    public async Task ARootRuleFindsTheTargetSearchsRootOrNone()
     {
         var axis = new SweepAxis("qc_flux", 0.15e-3, 1.05e-3, 31, []);
-        var roots = TargetSolver.FindAllAsync(v => Demo.Resolve([axis], v), axis, "zz:qa:qb", 0, new SweepOptions { Parallelism = 1 })
-            .GetAwaiter().GetResult();
+        var roots = await TargetSolver.FindAllAsync(v => Demo.Resolve([axis], v), axis, "zz:qa:qb", 0, new SweepOptions { Parallelism = 1 });
         var rule = Rule("root zz:qa:qb = 0 by qc_flux 0.15 mA to 1.05 mA");
         Assert.Equal(roots.First(r => r.Refined).Bias, Figure(rule), 12);
         Assert.True(double.IsNaN(Figure(Rule("root zz:qa:qb = 50 MHz by qc_flux 0.15 mA to 1.05 mA"))));
