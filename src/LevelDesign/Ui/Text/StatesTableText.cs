@@ -34,7 +34,8 @@ public static class StatesTableText
             string mark = (low ? "!" : " ") + (label.Ambiguous ? "?" : " ");
             string row = $"{mark}{k,2} {TextFit.Cut(Core.Presentation.StateNames.OfDressed(spectrum, k), 10),-10} {Numbers.GHz(spectrum.Energies[k]),8} {label.Purity,6:0.000}";
             var components = label.Components.Where(c => c.Weight >= MinWeight).Take(MaxComponents).ToList();
-            string Text(Core.Labels.Component c) => $"{Core.Presentation.StateNames.OfBare(spectrum, c.BareIndex)} {c.Weight:0.00}";
+            // three decimals: a 1 % admixture reads 0.010, not a rounded 0.01 next to 0.99
+            string Text(Core.Labels.Component c) => $"{Core.Presentation.StateNames.OfBare(spectrum, c.BareIndex)} {c.Weight:0.000}";
             var all = components.Select(Text).ToList();
             var partners = components.Where(c => c.BareIndex != label.BareIndex).Select(Text).ToList();
             lines.Add(new TextLine(row + Components(all, partners, width - row.Length), Warning: low || label.Ambiguous));
