@@ -104,6 +104,15 @@ public sealed class ExampleDeviceTests
     }
 
     [Fact]
+    public void An_unclosed_quote_is_reported_once_at_its_opening_quote()
+    {
+        var result = DeviceDocument.Load(Path.Combine(RepositoryPaths.Malformed, "unclosed_quote.toml"));
+        var error = Assert.Single(result.Errors);
+        Assert.Equal((9, 6), (error.Line, error.Column));
+        Assert.Contains("further syntax error", error.Message);
+    }
+
+    [Fact]
     public void MisspeltKeySuggestsTheNearestValidKey()
     {
         var result = DeviceDocument.Load(Path.Combine(RepositoryPaths.Malformed, "unknown_key_ejsum.toml"));

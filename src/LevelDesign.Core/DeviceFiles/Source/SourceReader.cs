@@ -14,9 +14,7 @@ public static class SourceReader
         DocumentSyntax syntax = SyntaxParser.Parse(text, path);
         var root = new SourceTable { Name = "", Line = 1, Column = 1 };
         var document = new SourceDocument { Root = root };
-        foreach (var d in syntax.Diagnostics)
-            if (d.Kind == DiagnosticMessageKind.Error)
-                document.SyntaxErrors.Add(Explain(path, d.Span.Start.Line + 1, d.Span.Start.Column + 1, d.Message));
+        document.SyntaxErrors.AddRange(ParserErrors(syntax, path, text));
         AddEntries(root, syntax.KeyValues, text);
         root.InsertOffset = EndOf(syntax.KeyValues, 0);
         foreach (var table in syntax.Tables)
@@ -33,11 +31,41 @@ public static class SourceReader
         return document;
     }
 
+    /// <summary>
+    /// The parser's errors in file order. A string whose closing quote is missing runs into the next lines and makes
+    /// the parser report dozens of errors there (one missing quote gave 87, the first two on the wrong line): then
+    /// only the open string is reported, at its own line, with how many follow-on errors were left out.
+    /// </summary>
+    private static IEnumerable<DeviceFileError> ParserErrors(DocumentSyntax syntax, string path, string text)
+    {
+        var errors = syntax.Diagnostics.Where(d => d.Kind == DiagnosticMessageKind.Error)
+            .Select(d => (Line: d.Span.Start.Line + 1, Column: d.Span.Start.Column + 1, d.Message))
+            .OrderBy(e => e.Line).ThenBy(e => e.Column).ToList();
+        int open = errors.FindIndex(e => e.Message.Contains("newline in a string", StringComparison.OrdinalIgnoreCase));
+        if (open >= 0)
+        {
+            var (line, column, _) = errors[open];
+            var before = errors.Take(open).Where(e => e.Line < line).ToList();   // unrelated errors above it stay
+            foreach (var e in before) yield return Explain(path, e.Line, e.Column, e.Message);
+            int left = errors.Count - before.Count - 1;
+            // point at the opening quote (the parser reports the line's end): the last quote before that end
+            string lineText = text.Split('\n').ElementAtOrDefault(line - 1) ?? "";
+            int quote = lineText[..Math.Min(lineText.Length, Math.Max(0, column - 1))].LastIndexOfAny(['"', '\'']);
+            if (quote >= 0) column = quote + 1;
+            yield return new DeviceFileError(path, line, column, "syntax",
+                "a string on this line is not closed: its closing quote (\") is missing" +
+                (left > 0 ? $" ({left} further syntax error{(left == 1 ? "" : "s")} after it follow from it and are not listed)" : ""));
+            yield break;
+        }
+        foreach (var e in errors) yield return Explain(path, e.Line, e.Column, e.Message);
+    }
+
     /// <summary>Rewords the parser's message for a repeated key or table as a duplicate, naming the first place.</summary>
     private static DeviceFileError Explain(string path, int line, int column, string message)
     {
         var m = System.Text.RegularExpressions.Regex.Match(message, @"The key `([^`]+)` is already defined at \((\d+),(\d+)\)");
-        if (!m.Success) return new DeviceFileError(path, line, column, "syntax", "not valid TOML: " + message);
+        // the parser may quote the rest of the file in its message: keep the reason, not pages of text
+        if (!m.Success) return new DeviceFileError(path, line, column, "syntax", "not valid TOML: " + TerminalTextCut(message));
         string key = m.Groups[1].Value, first = m.Groups[2].Value;
         var parts = key.Split('.');
         string text = parts.Length == 2 && parts[0] is "elements" or "couplers" or "biases" or "points" or "sweeps"
@@ -45,6 +73,8 @@ public static class SourceReader
             : $"key '{parts[^1]}' is given twice (first at line {first})";
         return new DeviceFileError(path, line, column, key, text);
     }
+
+    private static string TerminalTextCut(string message) => message.Length <= 160 ? message : message[..159] + "…";
 
     private static int EndOf(SyntaxList<KeyValueSyntax> items, int fallback)
     {
