@@ -17,10 +17,20 @@ public static class SweepFiles
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
+    /// <summary>How the sweep ended, for the header: completed, cancelled, or stopped at a failing point.</summary>
+    private static string Ending(DeviceDocument document, SweepResult sweep) =>
+        sweep.Completed ? "completed"
+        : sweep.Failure is { } failure ? $"stopped: the point at {FailedAt(document, sweep, failure)} failed ({TerminalText.Clean(failure.Error.Message).ReplaceLineEndings(" ")}); only the points computed before it"
+        : "cancelled: only the points computed";
+
+    /// <summary>The failing point's axis values in the file's units ("qc_flux = 0.75 mA").</summary>
+    public static string FailedAt(DeviceDocument document, SweepResult sweep, SweepFailure failure) =>
+        string.Join(", ", sweep.Plan.Axes.Select((a, i) => $"{a.Path} = {ShownUnit.Of(document, a.Path).Text(failure.AxisValues[i])}"));
+
     public static string Csv(DeviceDocument document, SweepResult sweep, SweepTable table)
     {
         var b = new StringBuilder();
-        b.AppendLine($"# LevelDesign sweep of device {document.Device.Name}; {(sweep.Completed ? "completed" : "cancelled: only the points computed")}; labels by {LabelMode(sweep)}");
+        b.AppendLine($"# LevelDesign sweep of device {document.Device.Name}; {Ending(document, sweep)}; labels by {LabelMode(sweep)}");
         foreach (var a in sweep.Plan.Axes)
         {
             var unit = ShownUnit.Of(document, a.Path);
@@ -95,6 +105,7 @@ public static class SweepFiles
         {
             ["device"] = document.Device.Name,
             ["completed"] = sweep.Completed,
+            ["failed_at"] = sweep.Failure is { } failure ? FailedAt(document, sweep, failure) : null,
             ["label_mode"] = LabelMode(sweep),
             ["axes"] = Strings(table.AxisPaths),
             ["axis_details"] = new JsonArray(sweep.Plan.Axes.Select(a => (JsonNode)Axis(document, a)).ToArray()),

@@ -15,6 +15,12 @@ public sealed record SweepOptions
     /// <summary>Points computed at once (workers walking contiguous stretches); default the cores computations may use (<see cref="Eigen.ComputeCores"/>).</summary>
     public int Parallelism { get; init; } = Eigen.ComputeCores.Limit;
 
+    /// <summary>
+    /// When a point fails, stop and return the points computed so far with <see cref="SweepResult.Failure"/> instead of
+    /// throwing (a long sweep that meets an invalid device at its end keeps its work).
+    /// </summary>
+    public bool KeepPointsOnFailure { get; init; }
+
     /// <summary>Use the warm-started iterative eigensolver on real matrices (dense fallback when it does not converge).</summary>
     public bool Iterative { get; init; } = true;
 

@@ -29,7 +29,7 @@ public static class SweepRunner
         bool keepVectors = Guard(resolve(axisValues[0]), plan, options, solver, total, workers);
         var labelling = new SweepLabelling(plan, options, axisValues, keepVectors);
         using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancellation);
-        int done = 0;
+        int done = 0, failedIndex = -1;
         int wanted = options.Blocks?.Sum(x => x.End - x.Start) ?? total;
 
         var tasks = new List<Task>();
@@ -49,7 +49,8 @@ public static class SweepRunner
                             var pointSolver = new PointSolver(solver, options);
                             for (int i = blocks[b].Start; i < blocks[b].End && !stop.IsCancellationRequested; i++)
                             {
-                                labelling.Add(i, pointSolver.Solve(resolve(axisValues[i]), plan.Levels));
+                                try { labelling.Add(i, pointSolver.Solve(resolve(axisValues[i]), plan.Levels)); }
+                                catch (Exception e) when (e is not OperationCanceledException) { Interlocked.CompareExchange(ref failedIndex, i, -1); throw; }
                                 progress?.Report(new SweepProgress(Interlocked.Increment(ref done), wanted));
                             }
                         }
@@ -104,7 +105,8 @@ public static class SweepRunner
             {
                 while (!stop.IsCancellationRequested && take(out int i) && !stop.IsCancellationRequested)
                 {
-                    labelling.Add(i, pointSolver.Solve(resolve(axisValues[i]), plan.Levels));
+                    try { labelling.Add(i, pointSolver.Solve(resolve(axisValues[i]), plan.Levels)); }
+                    catch (Exception e) when (e is not OperationCanceledException) { Interlocked.CompareExchange(ref failedIndex, i, -1); throw; }
                     progress?.Report(new SweepProgress(Interlocked.Increment(ref done), total));
                 }
             }
@@ -114,11 +116,19 @@ public static class SweepRunner
                 throw;
             }
         }
-        await Task.WhenAll(tasks).ConfigureAwait(false);
+        SweepFailure? failure = null;
+        try { await Task.WhenAll(tasks).ConfigureAwait(false); }
+        catch (Exception) when (options.KeepPointsOnFailure && failedIndex >= 0)
+        {
+            // the point's own error, not a worker's "stopped" that Task.WhenAll may put first
+            var error = tasks.Where(t => t.IsFaulted).SelectMany(t => t.Exception!.InnerExceptions)
+                .FirstOrDefault(e => e is not OperationCanceledException) ?? new InvalidOperationException("a sweep point failed");
+            failure = new SweepFailure(axisValues[failedIndex], error);
+        }
 
         var points = labelling.Finish();
-        bool completed = points.Count == wanted && !cancellation.IsCancellationRequested;
-        return new SweepResult(plan, points, completed);
+        bool completed = failure is null && points.Count == wanted && !cancellation.IsCancellationRequested;
+        return new SweepResult(plan, points, completed) { Failure = failure };
     }
 
     private delegate bool TakeNext(out int index);

@@ -87,15 +87,19 @@ public static class SweepCommand
         }
         // a 1-D sweep runs in fixed blocks, so its numbers do not depend on the cores or on a split into shards
         var blocks = setup.Axes.Count == 1 ? SweepBlocks.All(setup.Axes[0].Count) : null;
-        var result = SweepExecution.Run(setup, mode, planLevels, solver, blocks);
+        // a point that fails (e.g. a device invalid at the end of the range) stops the sweep; the points before it are written
+        var result = SweepExecution.Run(setup, mode, planLevels, solver, blocks, keepPointsOnFailure: true);
+        if (result.Failure is { } failure && result.Points.Count == 0) throw failure.Error;
         var table = SweepTable.From(result, shown, threshold);
         int total = SweepGrid.PointCount(result.Plan);
-        if (!result.Completed) Console.Error.WriteLine($"cancelled: keeping the {result.Points.Count} of {total} points computed");
+        if (result.Failure is { } failed)
+            Console.Error.WriteLine($"error: the point at {SweepFiles.FailedAt(document, result, failed)} failed: {TerminalText.Clean(failed.Error.Message)}; keeping the {result.Points.Count} of {total} points computed before the sweep stopped");
+        else if (!result.Completed) Console.Error.WriteLine($"cancelled: keeping the {result.Points.Count} of {total} points computed");
         Write(json ? SweepFiles.Json(document, result, table) : SweepFiles.Csv(document, result, table), output, result.Points.Count);
         int flagged = table.Rows.Count(r => r.LowPurity), ambiguous = table.Rows.Count(r => r.Ambiguous);
         if (flagged > 0 || ambiguous > 0)
             Console.Error.WriteLine($"{flagged} point(s) with a tracked state below purity {table.PurityThreshold}, {ambiguous} with an ambiguous label (columns low_purity, ambiguous)");
-        return result.Completed ? ExitCodes.Ok : ExitCodes.Cancelled;
+        return result.Completed ? ExitCodes.Ok : result.Failure is not null ? ExitCodes.ComputationFailed : ExitCodes.Cancelled;
     });
 
     /// <summary>Writes to stdout, or to a file by <see cref="OutputFile"/> (a previous regular file kept as .bak).</summary>

@@ -14,12 +14,12 @@ public static class SweepExecution
     /// <param name="blocks">Fixed stretches to compute (see <see cref="SweepOptions.Blocks"/>); null: every point, shared out as workers go.</param>
     /// <param name="keepVectors">Keep every point's eigenvectors (for matrix elements afterwards); by default a large sweep keeps only energies, labels and quantities.</param>
     public static SweepResult Run(SweepSetup setup, LabelMode labels, int? levels, DeviceSolver? solver = null,
-        IReadOnlyList<(int Start, int End)>? blocks = null, bool? keepVectors = null)
+        IReadOnlyList<(int Start, int End)>? blocks = null, bool? keepVectors = null, bool keepPointsOnFailure = false)
     {
         var plan = new SweepPlan(setup.Axes, labels, levels);
         var problems = SweepGrid.Validate(plan);
         if (problems.Count > 0) throw new UsageException(string.Join("; ", problems));
-        var options = new SweepOptions { Solver = solver ?? new DeviceSolver(), Blocks = blocks, KeepVectors = keepVectors };
+        var options = new SweepOptions { Solver = solver ?? new DeviceSolver(), Blocks = blocks, KeepVectors = keepVectors, KeepPointsOnFailure = keepPointsOnFailure };
         var progress = new ProgressBar(blocks?.Sum(b => b.End - b.Start) ?? SweepGrid.PointCount(plan));
         return WithCancel(token => SweepRunner.RunAsync(setup.Resolve, plan, options, progress, token), progress.Finish);
     }

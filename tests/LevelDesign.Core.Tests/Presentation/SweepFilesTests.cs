@@ -40,6 +40,23 @@ public class SweepFilesTests
     }
 
     [Fact]
+    public async Task A_sweep_stopped_by_a_failing_point_says_where_and_why_in_both_files()
+    {
+        var document = DeviceDocument.Demo();
+        var axis = new SweepAxis("qc_flux", 0.15e-3, 1.05e-3, 5, []);
+        var sweep = await SweepRunner.RunAsync(
+            values => values[0] > 0.8e-3 ? throw new InvalidOperationException("no device here") : document.Resolve([axis], values),
+            new SweepPlan([axis]), new SweepOptions { Parallelism = 1, KeepPointsOnFailure = true });
+        var table = SweepTable.From(sweep, SweepTable.ReportedCount(sweep), document.PurityThreshold);
+        string csv = SweepFiles.Csv(document, sweep, table);
+        Assert.Contains("stopped: the point at qc_flux = 0.825 mA failed (no device here); only the points computed before it", csv.Split('\n')[0]);
+        var json = JsonDocument.Parse(SweepFiles.Json(document, sweep, table)).RootElement;
+        Assert.False(json.GetProperty("completed").GetBoolean());
+        Assert.Equal("qc_flux = 0.825 mA", json.GetProperty("failed_at").GetString());
+        Assert.Equal(3, json.GetProperty("points").GetArrayLength());
+    }
+
+    [Fact]
     public async Task Json_names_states_both_ways_and_gives_axis_values_in_the_unit_it_states()
     {
         var (document, sweep, table) = await CoilSweep();

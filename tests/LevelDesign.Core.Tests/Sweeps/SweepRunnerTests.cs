@@ -37,6 +37,38 @@ public class SweepRunnerTests
         }
     }
 
+    [Theory]
+    [InlineData(1, false)]
+    [InlineData(2, false)]
+    [InlineData(2, true)]
+    public async Task A_failing_point_stops_the_sweep_and_keeps_the_points_computed_when_asked(int workers, bool blocks)
+    {
+        var paths = ParameterResolver.ForPaths(SweepDevices.FiveElements(), [CouplerFlux]);
+        double bad = SweepGrid.Points(new SweepPlan([CouplerFlux]))[17][0];
+        Model.Device Resolve(IReadOnlyList<double> v) => v[0] == bad ? throw new InvalidOperationException("no device here") : paths(v);
+        var options = new SweepOptions { Parallelism = workers, Blocks = blocks ? SweepBlocks.All(CouplerFlux.Count) : null };
+
+        // by default the error goes to the caller
+        await Assert.ThrowsAsync<InvalidOperationException>(() => SweepRunner.RunAsync(Resolve, new SweepPlan([CouplerFlux]), options));
+
+        var kept = await SweepRunner.RunAsync(Resolve, new SweepPlan([CouplerFlux]), options with { KeepPointsOnFailure = true });
+        Assert.False(kept.Completed);
+        var failure = Assert.IsType<SweepFailure>(kept.Failure);
+        Assert.Equal(bad, failure.AxisValues[0]);
+        Assert.Equal("no device here", failure.Error.Message);
+        // every point before the failing one in its walk is kept (one worker walking forward: all 17 before it)
+        Assert.DoesNotContain(kept.Points, p => p.AxisValues[0] == bad);
+        if (workers == 1 && !blocks) Assert.Equal(17, kept.Points.Count);
+        else Assert.NotEmpty(kept.Points);
+        // and they equal the same points of a sweep that did not fail
+        var whole = await Run(new SweepOptions { Parallelism = 1 });
+        foreach (var p in kept.Points)
+        {
+            var same = whole.Points.Single(w => w.AxisValues[0] == p.AxisValues[0]);
+            Assert.Equal(same.Spectrum.Energies[1], p.Spectrum.Energies[1], 9);
+        }
+    }
+
     /// <summary>
     /// Regression: near 0.42 Φ0 a coupler state falls through a dense band of three-excitation states faster than
     /// the guard vectors follow, and warm starts taken only from the neighbouring point missed it (a level 0.06–0.2

@@ -115,7 +115,8 @@ public sealed partial class MainWindow
             UpdateStatus();
         });
         var clock = Stopwatch.StartNew();
-        var options = new SweepOptions { Solver = new DeviceSolver() };
+        // a point that fails stops the sweep; the points before it stay on screen, with the reason in the status line
+        var options = new SweepOptions { Solver = new DeviceSolver(), KeepPointsOnFailure = true };
         Task.Run(async () =>
         {
             try
@@ -178,11 +179,13 @@ public sealed partial class MainWindow
         _crossingsPending = result.Completed && result.Plan.Axes.Count == 1;
         RebuildSeries();
         int total = result.Plan.Axes.Aggregate(1, (n, a) => n * Math.Max(1, a.Count));
-        _spectrum.Status = result.Completed ? "" : $"cancelled: {result.Points.Count}/{total} points";
+        _spectrum.Status = result.Completed ? "" : result.Failure is null ? $"cancelled: {result.Points.Count}/{total} points" : $"stopped: {result.Points.Count}/{total} points";
         _sweepSummary = result.Completed
             ? $"sweep done: {result.Points.Count} points in {elapsed.TotalSeconds:0.0} s"
-            : $"sweep cancelled: {result.Points.Count} of {total} points kept";
-        Say(_sweepSummary);
+            : result.Failure is { } failure
+                ? $"✗ sweep stopped: the point at {SweepFiles.FailedAt(_session.Document!, result, failure)} failed ({DescribeProblem(failure.Error)}); {result.Points.Count} of {total} points kept"
+                : $"sweep cancelled: {result.Points.Count} of {total} points kept";
+        Say(_sweepSummary, warning: result.Failure is not null);
         OnCursorMoved(_spectrum.CursorIndex);
     }
 
