@@ -93,6 +93,9 @@ public sealed class BoundedInputTests : IDisposable
         random.NextBytes(bytes);
         // printable noise with newlines gives the reader many lines to complain about
         for (int i = 0; i < bytes.Length; i++) bytes[i] = bytes[i] % 37 == 0 ? (byte)'\n' : (byte)(32 + bytes[i] % 95);
+        // without quotes: an unclosed string is reported once with a count of what follows it (tested apart), and
+        // this test is about the cap on a long list of independent problems
+        for (int i = 0; i < bytes.Length; i++) if (bytes[i] is (byte)'"' or (byte)'\'') bytes[i] = (byte)'x';
         string file = _dir.File("noise.toml");
         File.WriteAllBytes(file, bytes);
         var run = Executable.Run(["check", file]);

@@ -82,12 +82,12 @@ public class NarrowScreenTests
             narrow.WaitIdle();
             string screen = narrow.Screen;
             Assert.Contains("Parameters: qa", screen);
-            Assert.Contains("flux        0 Φ0 ← qa_flux", screen);
+            Assert.Matches(@"flux +0 Φ0 ← qa_flux", screen);
             Assert.DoesNotContain("← bias qa_", screen);
         }
         using var wide = new UiHarness(100, 30, device: "pair.toml");
         wide.WaitIdle();
-        Assert.Contains("flux        0 Φ0 ← bias qa_flux", wide.Screen);
+        Assert.Matches(@"flux +0 Φ0 ← bias qa_flux", wide.Screen);
     }
 
     [Fact]
