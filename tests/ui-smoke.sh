@@ -28,6 +28,14 @@ wait_for() { # text, seconds
   done
   echo "FAIL: '$1' did not appear; screen was:"; capture; fail=1; return 1
 }
+wait_for_re() { # Perl regex, seconds (for rows whose column widths follow the longest name)
+  local i
+  for ((i = 0; i < ${2:-20} * 5; i++)); do
+    if capture | grep -qP -- "$1"; then return 0; fi
+    sleep 0.2
+  done
+  echo "FAIL: /$1/ did not appear; screen was:"; capture; fail=1; return 1
+}
 has_braille() { capture | grep -qP '[\x{2801}-\x{28FF}]' || { echo "FAIL: no braille dots drawn"; capture; fail=1; }; }
 start() { # width height
   tmux kill-session -t "$SESSION" 2>/dev/null || true
@@ -43,7 +51,7 @@ start 80 24
 wait_for "States at cursor" 40
 wait_for "trunc" 20
 key_bar_ends_with "F1 all keys"
-wait_for "flux        0 Φ0 ← qa_flux" 5
+wait_for_re "flux +0 Φ0 ← qa_flux" 5
 keys F9
 wait_for "» target: QUANTITY = VALUE by BIAS LOW to HIGH" 5
 wait_for "  or  fit PATH [LOW..HIGH] [PATH ...] to QUANTITY = VALUE [at POINT][, ...]" 5
@@ -98,7 +106,7 @@ cp devices/pair.toml "$WORK/pair.toml"; rm -f "$WORK/pair.toml.autosave"
 start 100 30
 wait_for "States at cursor" 40
 wait_for "trunc" 20
-wait_for "flux        0 Φ0 ← bias qa_flux" 5
+wait_for_re "flux +0 Φ0 ← bias qa_flux" 5
 key_bar_ends_with "F1 all keys"
 keys F9; clear_field 60
 # six parameters, six targets at three settings: tens of seconds if not cancelled

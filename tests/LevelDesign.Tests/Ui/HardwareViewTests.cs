@@ -105,6 +105,31 @@ public class HardwareViewTests
     }
 
     [Fact]
+    public void The_focused_panel_has_a_double_line_that_moves_with_tab()
+    {
+        using var ui = new UiHarness(80, 24);
+        ui.WaitIdle();
+        var rows = ui.Screen.Split('\n');
+        Assert.Contains(rows, r => r.Contains("╔╡Board╞"));          // the board has the focus at start
+        Assert.Contains(rows, r => r.Contains("╭┤Parameters"));
+        ui.Press(Key.Tab);
+        rows = ui.Screen.Split('\n');
+        Assert.Contains(rows, r => r.Contains("╭┤Board├"));
+        Assert.Contains(rows, r => r.Contains("╔╡Parameters"));
+    }
+
+    [Fact]
+    public void No_color_leaves_the_terminals_colours_and_marks_focus_by_reverse_video()
+    {
+        var scheme = LevelDesign.Ui.Views.Palette.MonochromeScheme();
+        Assert.Equal(Terminal.Gui.Drawing.Color.None, scheme.Normal.Foreground);
+        Assert.Equal(Terminal.Gui.Drawing.Color.None, scheme.Normal.Background);
+        Assert.Equal(Terminal.Gui.Drawing.Color.None, scheme.Focus.Background);
+        Assert.True(scheme.Focus.Style.HasFlag(Terminal.Gui.Drawing.TextStyle.Reverse));
+        Assert.True(scheme.HotNormal.Style.HasFlag(Terminal.Gui.Drawing.TextStyle.Bold));
+    }
+
+    [Fact]
     public void Capital_L_shows_the_limits_as_the_help_says()
     {
         using var ui = new UiHarness(120, 40);

@@ -112,7 +112,7 @@ public class NarrowScreenTests
         ui.Window.Prompt.Choose($"fit (3 steps): {values}.\na applies · Esc leave", new Dictionary<char, Action> { ['a'] = () => { } });
         var rows = Rows(ui);
         Assert.Contains(rows, r => r.Contains("» fit (3 steps): q1.ec = 201 MHz", StringComparison.Ordinal));
-        Assert.Contains(rows, r => r.TrimEnd().TrimEnd('│').TrimEnd().EndsWith('…'));
+        Assert.Contains(rows, r => r.TrimEnd().TrimEnd('│', '║').TrimEnd().EndsWith('…'));
         Assert.Contains(rows, r => r.Contains("  a applies · Esc leave", StringComparison.Ordinal));
         ui.Press(Key.Esc);
     }
@@ -167,7 +167,7 @@ public class NarrowScreenTests
         {
             foreach (var row in PageRows(ui, fullWidth))
             {
-                string text = row.TrimEnd().TrimEnd('│').TrimEnd();
+                string text = row.TrimEnd().TrimEnd('│', '║').TrimEnd();
                 if (page == "states" && text.EndsWith("  …", StringComparison.Ordinal)) text = text[..^1];
                 text = text.Replace("… text cut to fit", "");   // the help's legend of the mark
                 Assert.False(text.Contains('…'), $"{page}: a cut line at 80×24:\n{ui.Screen}");

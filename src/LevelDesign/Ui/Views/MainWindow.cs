@@ -9,6 +9,7 @@ using LevelDesign.Ui.Compute;
 using LevelDesign.Ui.Export;
 using LevelDesign.Ui.Session;
 using LevelDesign.Ui.Text;
+using Terminal.Gui.Drawing;
 using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
 using Terminal.Gui.Views;
@@ -104,6 +105,12 @@ public sealed partial class MainWindow : Window
         BindBoardKeys();
         BindWindowKeys();
 
+        // the panel holding the focus is drawn with a double line: visible without colour (NO_COLOR) and in any scheme
+        foreach (var frame in new[] { _boardFrame, _formFrame, _pageFrame, _plotFrame })
+        {
+            frame.BorderStyle = LineStyle.Rounded;
+            frame.HasFocusChanged += (_, _) => frame.BorderStyle = frame.HasFocus ? LineStyle.Double : LineStyle.Rounded;
+        }
         _board.SelectionChanged += _ => ShowFields();
         _board.RowActivated += _ => _form.SetFocus();
         _form.RowActivated += _ => EditField();

@@ -4,8 +4,8 @@ using Terminal.Gui.ViewBase;
 namespace LevelDesign.Ui.Views;
 
 /// <summary>
-/// Colours used on top of the scheme. With NO_COLOR set every colour collapses to the normal attribute;
-/// meaning is always also carried by a symbol or text.
+/// Colours used on top of the scheme. With NO_COLOR set no colour is sent at all: the terminal's own foreground and
+/// background stay, and emphasis is carried by text attributes (bold, reverse) and by symbols and text.
 /// </summary>
 public static class Palette
 {
@@ -14,20 +14,25 @@ public static class Palette
     public static Terminal.Gui.Drawing.Attribute Warning(View view)
     {
         var normal = view.GetAttributeForRole(VisualRole.Normal);
-        return Monochrome ? normal : new Terminal.Gui.Drawing.Attribute(new Color(ColorName16.BrightYellow), normal.Background);
+        return Monochrome ? normal with { Style = TextStyle.Bold } : new Terminal.Gui.Drawing.Attribute(new Color(ColorName16.BrightYellow), normal.Background);
     }
 
     public static Terminal.Gui.Drawing.Attribute Cursor(View view)
     {
         var normal = view.GetAttributeForRole(VisualRole.Normal);
-        return Monochrome ? normal : new Terminal.Gui.Drawing.Attribute(new Color(ColorName16.BrightCyan), normal.Background);
+        return Monochrome ? normal with { Style = TextStyle.Bold } : new Terminal.Gui.Drawing.Attribute(new Color(ColorName16.BrightCyan), normal.Background);
     }
 
-    /// <summary>A two-tone scheme for NO_COLOR: normal text, and reverse video for focus.</summary>
+    /// <summary>The NO_COLOR scheme: the terminal's default colours (Color.None), bold headings, reverse video for focus.</summary>
     public static Scheme MonochromeScheme()
     {
-        var normal = new Terminal.Gui.Drawing.Attribute(new Color(ColorName16.White), new Color(ColorName16.Black));
-        var reverse = new Terminal.Gui.Drawing.Attribute(new Color(ColorName16.Black), new Color(ColorName16.White));
-        return new Scheme(normal) { Focus = reverse, HotFocus = reverse, Active = reverse, HotActive = reverse, HotNormal = normal, Highlight = reverse };
+        Terminal.Gui.Drawing.Attribute Plain(TextStyle style) => new(Color.None, Color.None, style);
+        var normal = Plain(TextStyle.None);
+        var reverse = Plain(TextStyle.Reverse);
+        return new Scheme(normal)
+        {
+            Focus = reverse, HotFocus = Plain(TextStyle.Reverse | TextStyle.Bold), Active = reverse, HotActive = reverse,
+            HotNormal = Plain(TextStyle.Bold), Highlight = reverse, Editable = normal, ReadOnly = normal, Disabled = Plain(TextStyle.Faint),
+        };
     }
 }
