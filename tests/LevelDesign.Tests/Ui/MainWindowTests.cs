@@ -392,6 +392,28 @@ public class MainWindowTests
     }
 
     [Fact]
+    public void At_120_columns_the_crossings_page_shows_purity_and_the_nearest_named_point_and_at_80_leaves_them_out()
+    {
+        using var ui = new UiHarness(120, 40);
+        ui.WaitIdle();
+        ui.Press(Key.F5, Key.Enter);
+        ui.WaitFor(() => ui.Window.LastSweep is { Completed: true }, "the sweep");
+        while (ui.Window.CurrentPage != Page.Crossings) ui.Press(Key.F3);
+        ui.WaitForScreen("↔", 120000);
+        var header = ui.Screen.Split('\n').Single(r => r.Contains("crossing ", StringComparison.Ordinal) && r.Contains("gap MHz", StringComparison.Ordinal));
+        Assert.Contains("purity", header);
+        Assert.Contains("nearest point", header);
+        var first = ui.Screen.Split('\n').First(r => r.Contains(" 1 ", StringComparison.Ordinal) && r.Contains('↔'));
+        // single.toml names one point, sweet_spot (q_flux = 0); the row gives the lower purity with three decimals
+        Assert.Matches(@"\b[01]\.\d{3}\s+sweet_spot .+ away", first);
+        ui.App.Driver!.SetScreenSize(80, 24);
+        ui.Draw();
+        string narrow = ui.Screen;
+        Assert.Contains("↔", narrow);
+        Assert.DoesNotContain("nearest point", narrow);
+    }
+
+    [Fact]
     public void A_target_lists_its_roots_and_a_digit_applies_one_as_an_undoable_bias_edit()
     {
         using var ui = new UiHarness();

@@ -134,6 +134,44 @@ public class NarrowScreenTests
     }
 
     [Fact]
+    public void Below_80x24_the_screen_says_it_is_too_small_and_the_key_bar_keeps_quit_while_work_runs()
+    {
+        using var ui = new UiHarness(60, 20, device: "pair.toml");
+        ui.WaitIdle();
+        string screen = ui.Screen;
+        Assert.Contains("smaller than 80×24", screen);
+        Assert.Contains("^Q Quit", KeyBar(ui));
+        ui.Press(Key.F9);
+        ui.Replace(CancelWorkTests.LongFit);
+        ui.Press(Key.Enter);
+        Assert.True(ui.Window.IsFitting);
+        var entries = KeyBar(ui);
+        AllWhole(entries);
+        Assert.Equal("Esc Stop", entries[0]);
+        Assert.Contains("^Q Quit", entries);
+        Assert.Contains("^S Save", entries);
+        ui.Press(Key.Esc);
+        Assert.False(ui.Window.IsFitting);
+    }
+
+    [Fact]
+    public void At_80_columns_an_unsaved_file_keeps_the_eigensolver_in_the_status_line()
+    {
+        using var ui = new UiHarness(80, 24, device: "pair.toml");
+        ui.WaitIdle();
+        ui.Press(Key.Enter);   // board → form, on qa's ec
+        ui.Press(Key.Enter);
+        Assert.True(ui.Window.Prompt.IsOpen, ui.Screen);
+        ui.Replace("220 MHz");
+        ui.Press(Key.Enter);
+        ui.WaitIdle();
+        string screen = ui.Screen;
+        Assert.Contains("● unsaved", screen);
+        Assert.Contains("eigen ", screen);
+        Assert.DoesNotContain("smaller than", screen);
+    }
+
+    [Fact]
     public void The_status_line_keeps_the_file_and_the_running_sweep_at_80_columns()
     {
         using var ui = new UiHarness(80, 24);

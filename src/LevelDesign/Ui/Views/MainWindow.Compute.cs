@@ -152,6 +152,14 @@ public sealed partial class MainWindow
         return CrossingSearch.Options(sweep, points.Select(p => p.Value).ToArray());
     }
 
+    /// <summary>The file's operating points on the swept axis, for the crossings page's nearest-point column.</summary>
+    private IReadOnlyList<(string Name, double Value)> CrossingPoints()
+    {
+        if (_session.Document is not { } document || _sweep is not { Plan.Axes.Count: 1 } sweep) return [];
+        string axis = sweep.Plan.Axes[0].Path;
+        return CrossingSearch.OperatingPoints(document, axis, CrossingSearch.FileValue(document, axis));
+    }
+
     private void ApplyCrossings(int generation, SweepResult sweep, IReadOnlyList<Crossing> crossings)
     {
         if (!_sweepJobs.IsCurrent(generation) || !ReferenceEquals(sweep, _sweep)) return;
@@ -271,7 +279,7 @@ public sealed partial class MainWindow
                 break;
             case Page.Crossings:
                 _crossingList.SetLines(CrossingsText.Build(_crossings, _sweep, _series?.AxisName, _crossingsPending,
-                    v => ShownUnit.Of(_session.Document, _series?.AxisName ?? "").Text(v, 4), width - 1));
+                    v => ShownUnit.Of(_session.Document, _series?.AxisName ?? "").Text(v, 4), width - 1, CrossingPoints()));
                 break;
         }
         SetNeedsDraw();

@@ -118,7 +118,7 @@ public sealed partial class MainWindow : Window
         _spectrum.CursorMoved += OnCursorMoved;
         _crossingList.RowActivated += JumpToCrossing;
         _crossingList.Bind(Key.Esc, Command.Cancel, () => { ShowPage(Page.Spectrum); return true; });
-        FrameChanged += (_, _) => ApplyLayout();
+        FrameChanged += (_, _) => { ApplyLayout(); SayIfTooSmall(); };
 
         _session.Changed += OnDocumentChanged;
         Title = "LevelDesign";
@@ -153,12 +153,12 @@ public sealed partial class MainWindow : Window
         // Esc and the Ctrl keys are window commands (bound in BindWindowKeys); the function keys run their action.
         (new KeyHint("Esc", "Esc", "Stop", 1), Key.Esc, null),
         (new KeyHint("F2", "F2", "Edit", 2), Key.F2, EditField),
-        (new KeyHint("F3", "F3", "Page", 4), Key.F3, NextPage),
-        (new KeyHint("F5", "F5", "Sweep", 3), Key.F5, AskSweep),
+        (new KeyHint("F3", "F3", "Page", 3), Key.F3, NextPage),
+        (new KeyHint("F5", "F5", "Sweep", 6), Key.F5, AskSweep),
         (new KeyHint("F9", "F9", "Target", 8), Key.F9, AskTarget),
         (new KeyHint("Ctrl+S", "^S", "Save", 5), Key.S.WithCtrl, null),
         (new KeyHint("Ctrl+Z", "^Z", "Undo", 7), Key.Z.WithCtrl, null),
-        (new KeyHint("Ctrl+Q", "^Q", "Quit", 6), Key.Q.WithCtrl, null),
+        (new KeyHint("Ctrl+Q", "^Q", "Quit", 4), Key.Q.WithCtrl, null),
         (new KeyHint("F4", "F4", "Wide", 10), Key.F4, ToggleWide),
         (new KeyHint("F7", "F7", "Manifold", 11), Key.F7, NextManifold),
         (new KeyHint("F8", "F8", "Export", 9), Key.F8, AskExport),
@@ -275,6 +275,21 @@ public sealed partial class MainWindow : Window
         ShowFields();
         UpdateStatus();
         RefreshPage();
+    }
+
+    /// <summary>The smallest terminal the layout is made for (a common SSH default).</summary>
+    public const int MinimumWidth = 80, MinimumHeight = 24;
+
+    private (int Width, int Height) _sizeWarned;
+
+    /// <summary>Says once per size when the terminal is smaller than the layout is made for (text is then cut).</summary>
+    private void SayIfTooSmall()
+    {
+        var size = (Frame.Width, Frame.Height);
+        if (size.Width <= 0 || size.Height <= 0 || size == _sizeWarned) return;
+        if (size.Width >= MinimumWidth && size.Height >= MinimumHeight) { _sizeWarned = default; return; }
+        _sizeWarned = size;
+        Say($"⚠ the terminal is {size.Width}×{size.Height}; the screen is laid out for {MinimumWidth}×{MinimumHeight} or more, so some text is cut", warning: true);
     }
 
     private void ToggleWide()
@@ -547,14 +562,15 @@ public sealed partial class MainWindow : Window
         string computed = _computing ? (_pointProgressText.Length > 0 ? "⟳ computing, " + _pointProgressText : "⟳ computing") : _snapshot is null ? "not computed" : $"at {_snapshot.ComputedAt:HH:mm:ss} ({_snapshot.Elapsed.TotalSeconds:0.00} s)";
         string trunc = _snapshot?.ConvergenceText ?? "…";
         string work = string.Join(" · ", new[] { _sweeping ? _progressText : "", _fitting ? "⟳ fitting" : "", _solving ? "⟳ solving" : "" }.Where(w => w.Length > 0));
-        // Ranks: what is left out first on a narrow screen is the largest (eigensolver, then the time of the last result).
+        // Ranks: what is left out first on a narrow screen is the largest (the time of the last result, then the eigensolver).
         _status.SetFacts(
         [
             ($"{file}{dirty}{disk}", 0),
-            ($"eigen {_eigenPath}", 4),
+            ($"eigen {_eigenPath}", 3),
             ($"trunc {trunc}", 2),
-            (computed, 3),
+            (computed, 4),
             (work.Length > 0 ? work + " (Esc cancels)" : "", 1),
+            (Frame.Width is > 0 and < MinimumWidth || Frame.Height is > 0 and < MinimumHeight ? $"⚠ smaller than {MinimumWidth}×{MinimumHeight}" : "", 1),
         ]);
         UpdateKeyBar();
     }
