@@ -43,9 +43,12 @@ public static class MatrixElementReport
     }
 
     /// <summary>Rounding noise of the eigenvectors, relative to the largest element: shown as 0.</summary>
-    private const double Negligible = 1e-10;
+    /// <summary>Magnitudes at or below this fraction of the largest in the table are rounding noise, shown as zero.</summary>
+    public const double Negligible = 1e-10;
 
-    private static string Cell(double magnitude, double scale) => magnitude <= Negligible * scale ? "0" : magnitude.ToString("G5", Inv);
+    private static string Cell(double magnitude, double scale) => IsNegligible(magnitude, scale) ? "0" : magnitude.ToString("G5", Inv);
+
+    public static bool IsNegligible(double magnitude, double scale) => magnitude <= Negligible * scale;
 
     public static JsonObject Json(DressedSpectrum s, string element, string op, IReadOnlyList<int> states, Complex[,] m)
     {

@@ -250,7 +250,8 @@ public sealed partial class MainWindow
             Page.States => "States at cursor",
             Page.Shifts => "Shifts at cursor",
             Page.Crossings => "Crossings (Enter: go to)",
-            Page.Quantities => "Quantities along the sweep (Enter: choose, ←/→ cursor)",
+            Page.Quantities => "Quantities along the sweep (Enter: choose)",
+            Page.Matrix => "Matrix elements (Enter: operator)",
             Page.Help => _showLimits ? "Help: limits of the model" : "Help: keys",
             Page.Errors => "Errors in the device file",
             _ => "",
@@ -276,6 +277,9 @@ public sealed partial class MainWindow
                 break;
             case Page.Quantities:
                 _page.SetLines(QuantityPage(width));
+                break;
+            case Page.Matrix:
+                _page.SetLines(MatrixPage(width));
                 break;
             case Page.Crossings:
                 _crossingList.SetLines(CrossingsText.Build(_crossings, _sweep, _series?.AxisName, _crossingsPending,

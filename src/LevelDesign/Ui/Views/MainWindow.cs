@@ -139,6 +139,8 @@ public sealed partial class MainWindow : Window
     public Page CurrentPage => _pageShown;
     public SpectrumView Spectrum => _spectrum;
     public SweepResult? LastSweep => _sweep;
+    /// <summary>The latest computation at the file's biases (null before the first).</summary>
+    public PointSnapshot? LastSnapshot => _snapshot;
     public bool IsComputing => _computing || _sweeping;
     public bool IsFitting => _fitting;
     public bool IsSolving => _solving;
@@ -209,12 +211,22 @@ public sealed partial class MainWindow : Window
         KeyBindings.ReplaceCommands(Key.Tab, Command.NextTabStop);
         KeyBindings.ReplaceCommands(Key.Tab.WithShift, Command.PreviousTabStop);
         // the quantities page: Enter chooses what is plotted, ←/→ move the cursor it shares with the spectrum
-        _page.Bind(Key.Enter, Command.Accept, () => { if (_pageShown != Page.Quantities) return false; AskQuantities(); return true; });
-        _page.Bind(Key.CursorLeft, Command.Left, () => { if (_pageShown != Page.Quantities) return false; _spectrum.SetCursor(_spectrum.CursorIndex - 1); return true; });
-        _page.Bind(Key.CursorRight, Command.Right, () => { if (_pageShown != Page.Quantities) return false; _spectrum.SetCursor(_spectrum.CursorIndex + 1); return true; });
+        // the matrix-elements page: Enter chooses the operator, ←/→ move the same cursor
+        _page.Bind(Key.Enter, Command.Accept, () =>
+        {
+            if (_pageShown == Page.Quantities) AskQuantities();
+            else if (_pageShown == Page.Matrix) AskMatrixOperator();
+            else return false;
+            return true;
+        });
+        _page.Bind(Key.CursorLeft, Command.Left, () => { if (!CursorPage) return false; _spectrum.SetCursor(_spectrum.CursorIndex - 1); return true; });
+        _page.Bind(Key.CursorRight, Command.Right, () => { if (!CursorPage) return false; _spectrum.SetCursor(_spectrum.CursorIndex + 1); return true; });
         _page.Bind(Key.L, Command.Context, () => { ToggleLimits(); return true; });
         _page.Bind(Key.L.WithShift, Command.Context, () => { ToggleLimits(); return true; });   // the help writes "L"
     }
+
+    /// <summary>Text pages on which ← → move the sweep cursor shared with the spectrum.</summary>
+    private bool CursorPage => _pageShown is Page.Quantities or Page.Matrix;
 
     private void BindBoardKeys()
     {
@@ -332,6 +344,7 @@ public sealed partial class MainWindow : Window
             Page.Shifts => Page.Spectrum,
             Page.Spectrum => Page.Crossings,
             Page.Crossings => Page.Quantities,
+            Page.Quantities => Page.Matrix,
             _ => Page.States,
         };
         ShowPage(next);

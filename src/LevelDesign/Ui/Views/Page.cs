@@ -1,6 +1,6 @@
 namespace LevelDesign.Ui.Views;
 
-/// <summary>The pages of the right-hand side; F3 cycles the first four.</summary>
+/// <summary>The pages of the right-hand side; F3 cycles the first six.</summary>
 public enum Page
 {
     States,
@@ -8,6 +8,7 @@ public enum Page
     Spectrum,
     Crossings,
     Quantities,
+    Matrix,
     Help,
     Errors,
 }
