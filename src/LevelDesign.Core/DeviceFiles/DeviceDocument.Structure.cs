@@ -53,6 +53,26 @@ public sealed partial class DeviceDocument
     }
 
     /// <summary>
+    /// Appends [points.NAME] setting each given bias to its control value (text such as "0.7 mA", written as typed),
+    /// after the last point table (or the last bias table). The bias names must exist; the values are read back as
+    /// loading does, so a value outside the bias's unit is refused with the field named.
+    /// </summary>
+    public DeviceDocument WithPoint(string name, IReadOnlyList<(string Bias, string Value)> values, out DeviceFileError? error)
+    {
+        string field = "points." + name;
+        if (NewIdProblem(name, "points") is string problem) { error = Error(field, problem); return this; }
+        if (values.Count == 0) { error = Error(field, "an operating point sets at least one bias"); return this; }
+        if (values.FirstOrDefault(v => Bias(v.Bias) is null) is { Bias: not null } unknown)
+        {
+            error = Error(field, $"no bias '{unknown.Bias}'{EditDistance.Suggestion(unknown.Bias, Biases.Select(b => b.Name))}");
+            return this;
+        }
+        string block = $"[points.{name}]\n" + string.Concat(values.Select(v => $"{QuoteKeyIfNeeded(v.Bias)} = {Literal(v.Value, false)}\n"));
+        int at = HasTables("points") ? AfterLastTable("points") : HasTables("biases") ? AfterLastTable("biases") : Text.Length;
+        return Inserted(block, at, field, out error);
+    }
+
+    /// <summary>
     /// An id for a new coupler: "A_B" for the first two elements not yet coupled to each other (or the first two), with
     /// a number added while it is taken.
     /// </summary>

@@ -292,4 +292,34 @@ public sealed class StructuralEditTests : IDisposable
         document.Renamed("qz", "qy", out error);
         Assert.Contains("'qz'", error!.Message);
     }
+
+    [Fact]
+    public void A_new_operating_point_goes_after_the_last_point_keeps_every_other_line_and_reads_back()
+    {
+        var document = Load("pair.toml");
+        var added = document.WithPoint("gate", [("qc_flux", "0.7 mA"), ("qa_flux", "0.1")], out var error);
+        Assert.Null(error);
+        AssertKeptInOrder(document.Text, added.Text);
+        var point = Assert.Single(added.Points, p => p.Name == "gate");
+        Assert.Equal(0.7e-3, point.BiasValues["qc_flux"], 15);
+        Assert.Equal(0.1, point.BiasValues["qa_flux"], 15);
+        // after [points.coupler_low], before the sweeps
+        Assert.True(added.Text.IndexOf("[points.gate]", StringComparison.Ordinal) > added.Text.IndexOf("[points.coupler_low]", StringComparison.Ordinal));
+        Assert.True(added.Text.IndexOf("[points.gate]", StringComparison.Ordinal) < added.Text.IndexOf("[sweeps.", StringComparison.Ordinal));
+        Assert.Equal(0.7e-3, SaveAndReload(added).Points.Single(p => p.Name == "gate").BiasValues["qc_flux"], 15);
+    }
+
+    [Theory]
+    [InlineData("idle", "qc_flux", "0.7 mA", "already used")]
+    [InlineData("2bad", "qc_flux", "0.7 mA", "not a valid id")]
+    [InlineData("gate", "qz_flux", "0.7 mA", "no bias 'qz_flux'")]
+    [InlineData("gate", "qc_flux", "5 GHz", "points.gate.qc_flux")]
+    public void A_bad_operating_point_is_refused_with_the_field_named_and_the_document_unchanged(string name, string bias, string value, string expected)
+    {
+        var document = Load("pair.toml");
+        var result = document.WithPoint(name, [(bias, value)], out var error);
+        Assert.NotNull(error);
+        Assert.Contains(expected, error!.Field + " " + error.Message);
+        Assert.Same(document, result);
+    }
 }

@@ -7,4 +7,5 @@ public enum BoardNodeKind
     Element,
     Coupler,
     Bias,
+    Point,
 }

@@ -23,8 +23,18 @@ public static class BoardOutline
         nodes.Add(new BoardNode(BoardNodeKind.Group, "biases", 1, $"biases ({document.Biases.Count})"));
         foreach (var b in document.Biases)
             nodes.Add(new BoardNode(BoardNodeKind.Bias, b.Name, 2, $"{b.Name} → {b.Target}"));
+        if (document.Points.Count > 0)
+        {
+            nodes.Add(new BoardNode(BoardNodeKind.Group, "points", 1, $"points ({document.Points.Count})"));
+            foreach (var p in document.Points)
+                nodes.Add(new BoardNode(BoardNodeKind.Point, p.Name, 2, $"{p.Name}  {PointText(document, p)}"));
+        }
         return nodes;
     }
+
+    /// <summary>An operating point's bias values in their control units ("qc_flux 0.15 mA, qa_flux 0").</summary>
+    public static string PointText(DeviceDocument document, OperatingPoint point) =>
+        string.Join(", ", point.BiasValues.Select(v => $"{v.Key} {ShownUnit.Of(document, v.Key).Text(v.Value)}"));
 
     /// <summary>The circuit-form key in the file from which a model parameter is computed, e.g. ec from capacitance.</summary>
     private static string? DerivedFrom(DeviceDocument document, Element element, string name)
@@ -129,6 +139,18 @@ public static class BoardOutline
                     new("offset", QuantityFormatter.Format(b.Offset, b.ControlKind), $"biases.{b.Name}.offset", "control value at target zero"),
                     new("sets", $"{b.Target} = {ParameterText.Format(b.ToParameter(b.Value), ParameterKinds.Of(b.Target[(b.Target.LastIndexOf('.') + 1)..]))}", null, ""),
                 ];
+            }
+            case BoardNodeKind.Point:
+            {
+                var point = document.Points.First(x => x.Name == node.Id);
+                var rows = new List<FieldRow>();
+                foreach (var (name, value) in point.BiasValues)
+                {
+                    var bias = document.Bias(name)!;
+                    rows.Add(new FieldRow(name, ShownUnit.Of(document, name).Text(value), $"points.{point.Name}.{name}",
+                        "control value" + ControlUnitHint(bias), Note: $"→ {bias.Target}", ShortNote: ""));
+                }
+                return rows;
             }
             case BoardNodeKind.Device:
             {

@@ -167,6 +167,10 @@ public sealed class EditSession
     public EditOutcome AddCoupler(CouplerKindInfo kind, string id, string a, string b, string? strength, (string A, string B)? operators = null) =>
         Apply(d => (d.WithCoupler(id, kind, a, b, out var e, strength, operators), e), $"added {kind.Name} coupler '{id}'");
 
+    public EditOutcome AddPoint(string name, IReadOnlyList<(string Bias, string Value)> values) =>
+        Apply(d => (d.WithPoint(name, values, out var e), e),
+            $"added operating point '{name}' ({string.Join(", ", values.Select(v => $"{v.Bias} = {v.Value}"))})");
+
     /// <summary>Removes by id with what depends on it (see DeviceDocument.Without); the message lists what went.</summary>
     public EditOutcome Remove(string id)
     {

@@ -15,6 +15,8 @@ public sealed partial class MainWindow
     private void StartPointCompute(Device device)
     {
         var (generation, token) = _pointJobs.Begin();
+        _pointView = null;   // a named point's states were for the device before this change
+        _namedPointJobs.Cancel();
         var coherenceInputs = _session.Document?.Coherence;
         _computing = true;
         _pointProgressText = "";
@@ -220,6 +222,7 @@ public sealed partial class MainWindow
     {
         if (_sweep is null || index >= _sweep.Points.Count) { _cursorSnapshot = null; RefreshPage(); return; }
         _cursorSnapshot = PointComputer.FromSweepPoint(_sweep.Points[index], DateTime.Now);
+        _pointView = null;
         RefreshPage();
     }
 
@@ -231,6 +234,7 @@ public sealed partial class MainWindow
             string axes = string.Join(", ", _sweep.Plan.Axes.Select((a, i) => $"{a.Path} = {AxisText(a.Path, p.AxisValues[i])}"));
             return $"{axes} (point {p.Index + 1}/{_sweep.Points.Count}{(_sweepStale ? ", stale" : "")})";
         }
+        if (_pointView is var (name, _)) return PointWhere(name);
         return "the biases in the file";
     }
 
@@ -238,7 +242,7 @@ public sealed partial class MainWindow
     private string AxisText(string path, double value) =>
         ShownUnit.Of(_session.Document, path).Text(value);
 
-    private PointSnapshot? Shown => _cursorSnapshot ?? _snapshot;
+    private PointSnapshot? Shown => _cursorSnapshot ?? _pointView?.Snapshot ?? _snapshot;
 
     private void RefreshPage()
     {
@@ -252,6 +256,7 @@ public sealed partial class MainWindow
             Page.Crossings => "Crossings (Enter: go to)",
             Page.Quantities => "Quantities along the sweep (Enter: choose)",
             Page.Matrix => "Matrix elements (Enter: operator)",
+            Page.Compare => "Compare A and B (a, b mark)",
             Page.Help => _showLimits ? "Help: limits of the model" : "Help: keys",
             Page.Errors => "Errors in the device file",
             _ => "",
@@ -280,6 +285,9 @@ public sealed partial class MainWindow
                 break;
             case Page.Matrix:
                 _page.SetLines(MatrixPage(width));
+                break;
+            case Page.Compare:
+                _page.SetLines(ComparePage(width));
                 break;
             case Page.Crossings:
                 _crossingList.SetLines(CrossingsText.Build(_crossings, _sweep, _series?.AxisName, _crossingsPending,

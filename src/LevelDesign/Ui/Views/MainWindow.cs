@@ -112,7 +112,12 @@ public sealed partial class MainWindow : Window
             frame.HasFocusChanged += (_, _) => frame.BorderStyle = frame.HasFocus ? LineStyle.Double : LineStyle.Rounded;
         }
         _board.SelectionChanged += _ => ShowFields();
-        _board.RowActivated += _ => _form.SetFocus();
+        // Enter on an operating point shows its states; on anything else it goes to the form
+        _board.RowActivated += i =>
+        {
+            if (i < _nodes.Count && _nodes[i].Kind == BoardNodeKind.Point) ShowNamedPoint(_nodes[i].Id);
+            else _form.SetFocus();
+        };
         _form.RowActivated += _ => EditField();
         _form.Bind(Key.F2, Command.Edit, () => { EditField(); return true; });
         _spectrum.CursorMoved += OnCursorMoved;
@@ -183,6 +188,10 @@ public sealed partial class MainWindow : Window
     {
         // The function keys go through one command that looks up the pressed key (the key bar only displays them).
         var actions = _windowKeys.Where(k => k.Action is not null).ToDictionary(k => k.Key, k => k.Action!);
+        // letters no panel uses reach the window: a and b mark the comparison's points, p saves the cursor as a point
+        actions[new Key('a')] = () => Mark('a');
+        actions[new Key('b')] = () => Mark('b');
+        actions[new Key('p')] = AskSaveCursorAsPoint;
         AddCommand(Command.Toggle, context =>
         {
             if (context?.Binding is not KeyBinding { Key: { } key } || !actions.TryGetValue(key, out var action)) return false;
@@ -226,7 +235,7 @@ public sealed partial class MainWindow : Window
     }
 
     /// <summary>Text pages on which ← → move the sweep cursor shared with the spectrum.</summary>
-    private bool CursorPage => _pageShown is Page.Quantities or Page.Matrix;
+    private bool CursorPage => _pageShown is Page.Quantities or Page.Matrix or Page.Compare;
 
     private void BindBoardKeys()
     {
@@ -345,6 +354,7 @@ public sealed partial class MainWindow : Window
             Page.Spectrum => Page.Crossings,
             Page.Crossings => Page.Quantities,
             Page.Quantities => Page.Matrix,
+            Page.Matrix => Page.Compare,
             _ => Page.States,
         };
         ShowPage(next);
@@ -396,6 +406,7 @@ public sealed partial class MainWindow : Window
             return true;
         }
         if (_pageShown == Page.Help) { ShowPage(_pageBeforeHelp); return true; }
+        if (LeavePointView()) return true;
         return true;   // Esc never quits (the framework's default quit key is Esc); Ctrl+Q does, through the guard
     }
 
@@ -446,6 +457,7 @@ public sealed partial class MainWindow : Window
             BoardNodeKind.Element => $"Parameters: {node.Id}",
             BoardNodeKind.Coupler => $"Coupler: {node.Id}",
             BoardNodeKind.Bias => $"Bias: {node.Id}",
+            BoardNodeKind.Point => $"Point: {node.Id}",
             _ => "Device",
         };
         // Another item starts at its first editable row; the same item (after an edit) keeps the row.

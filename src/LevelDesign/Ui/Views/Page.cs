@@ -1,6 +1,6 @@
 namespace LevelDesign.Ui.Views;
 
-/// <summary>The pages of the right-hand side; F3 cycles the first six.</summary>
+/// <summary>The pages of the right-hand side; F3 cycles the first seven.</summary>
 public enum Page
 {
     States,
@@ -9,6 +9,7 @@ public enum Page
     Crossings,
     Quantities,
     Matrix,
+    Compare,
     Help,
     Errors,
 }
