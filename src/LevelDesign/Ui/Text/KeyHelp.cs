@@ -22,7 +22,7 @@ public static class KeyHelp
         ("Esc (while working)", "stop the running sweep (keeping its points), fit or target search (device unchanged)"),
         ("F7", "spectrum manifold: single excitations → up to two → all kept"),
         ("← → (spectrum)", "move the bias cursor; Shift+← → jump 10 points"),
-        ("+ / − (spectrum)", "zoom the frequency axis in / out"),
+        ("+ − > < (spectrum)", "zoom the frequency axis (+ −) about the cursor's level, the bias axis (> <) about the cursor"),
         ("PgUp / PgDn, ↑ ↓ (spectrum)", "pan the frequency axis; Home fits it again"),
         ("Enter (crossings)", "cursor to the crossing's nearest sweep point (listed nearest the operating points)"),
         ("Enter (quantities, matrix)", "choose what is plotted (zz:qa:qb, purity:qa1) or the operator (qa.n, ra.a); ← → cursor"),

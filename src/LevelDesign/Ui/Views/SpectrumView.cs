@@ -10,7 +10,8 @@ namespace LevelDesign.Ui.Views;
 /// <summary>
 /// Dressed transition frequencies against the swept bias, drawn with braille dots. Each branch is named at
 /// its right end; crossings are marked "×"; the bias cursor is a dotted column with its value in the header.
-/// ←/→ move the cursor, +/− zoom and PgUp/PgDn pan the frequency axis, Home fits it again.
+/// ←/→ move the cursor; +/− zoom the frequency axis about the level at the cursor nearest the middle, PgUp/PgDn pan
+/// it; &gt;/&lt; zoom the bias axis about the cursor (the window follows the cursor); Home fits both again.
 /// </summary>
 public sealed class SpectrumView : View
 {
@@ -20,6 +21,8 @@ public sealed class SpectrumView : View
     private SpectrumSeries? _series;
     private IReadOnlyList<CrossingMark> _crossings = [];
     private double? _low, _high;
+    /// <summary>The bias window when the bias axis is zoomed (null: the whole sweep).</summary>
+    private double? _xLow, _xHigh;
 
     public SpectrumView()
     {
@@ -34,7 +37,9 @@ public sealed class SpectrumView : View
         AddCommand(Command.PageDown, () => Pan(-0.5));
         AddCommand(Command.Up, () => Pan(0.1));
         AddCommand(Command.Down, () => Pan(-0.1));
-        AddCommand(Command.Start, () => { _low = _high = null; SetNeedsDraw(); return true; });
+        AddCommand(Command.Expand, () => ZoomBias(0.5));
+        AddCommand(Command.Collapse, () => ZoomBias(2));
+        AddCommand(Command.Start, () => { _low = _high = _xLow = _xHigh = null; SetNeedsDraw(); return true; });
         KeyBindings.Add(Key.CursorLeft, Command.Left);
         KeyBindings.Add(Key.CursorRight, Command.Right);
         KeyBindings.Add(Key.CursorLeft.WithShift, Command.LeftStart);
@@ -47,6 +52,10 @@ public sealed class SpectrumView : View
         KeyBindings.Add(Key.CursorUp, Command.Up);
         KeyBindings.Add(Key.CursorDown, Command.Down);
         KeyBindings.Add(Key.Home, Command.Start);
+        KeyBindings.Add(new Key('>'), Command.Expand);
+        KeyBindings.Add(new Key('.'), Command.Expand);
+        KeyBindings.Add(new Key('<'), Command.Collapse);
+        KeyBindings.Add(new Key(','), Command.Collapse);
     }
 
     public int CursorIndex { get; private set; }
@@ -61,6 +70,10 @@ public sealed class SpectrumView : View
 
     public void Show(SpectrumSeries? series, IReadOnlyList<CrossingMark> crossings)
     {
+        // a sweep over another range starts with the whole bias axis
+        if (series is null || _series is null || series.Axis.Length == 0 || _series.Axis.Length == 0
+            || series.Axis[0] != _series.Axis[0] || series.Axis[^1] != _series.Axis[^1])
+            _xLow = _xHigh = null;
         _series = series;
         _crossings = crossings;
         if (series is not null) CursorIndex = Math.Clamp(CursorIndex, 0, Math.Max(0, series.Axis.Length - 1));
@@ -71,6 +84,7 @@ public sealed class SpectrumView : View
     {
         if (_series is null || _series.Axis.Length == 0) return;
         CursorIndex = Math.Clamp(index, 0, _series.Axis.Length - 1);
+        FollowCursor();
         SetNeedsDraw();
         CursorMoved?.Invoke(CursorIndex);
     }
@@ -81,13 +95,51 @@ public sealed class SpectrumView : View
         return true;
     }
 
+    /// <summary>Zooms the frequency axis about the level at the cursor nearest the window's middle (the middle without a sweep).</summary>
     private bool? Zoom(double factor)
     {
         var (low, high) = Range();
         double middle = (low + high) / 2, half = (high - low) / 2 * factor;
-        (_low, _high) = (middle - half, middle + half);
+        double centre = _series is { Axis.Length: > 0 } series
+            ? series.Branches.Select(b => b.Frequencies[CursorIndex]).Where(f => double.IsFinite(f) && f >= low && f <= high)
+                .DefaultIfEmpty(middle).MinBy(f => Math.Abs(f - middle))
+            : middle;
+        (_low, _high) = (centre - half, centre + half);
         SetNeedsDraw();
         return true;
+    }
+
+    /// <summary>The bias window shown: the zoomed one, or the whole sweep.</summary>
+    public (double Low, double High) BiasRange()
+    {
+        if (_xLow is double l && _xHigh is double h) return (l, h);
+        if (_series is not { Axis.Length: > 0 } series) return (0, 1);
+        return (series.Axis[0], series.Axis[^1]);
+    }
+
+    /// <summary>Zooms the bias axis about the cursor, inside the sweep's range; zooming out to the whole sweep ends it.</summary>
+    private bool? ZoomBias(double factor)
+    {
+        if (_series is not { Axis.Length: > 1 } series) return true;
+        double first = Math.Min(series.Axis[0], series.Axis[^1]), last = Math.Max(series.Axis[0], series.Axis[^1]);
+        var (low, high) = BiasRange();
+        double half = Math.Abs(high - low) / 2 * factor;
+        // no narrower than four sweep steps, so a zoomed window still shows lines
+        half = Math.Max(half, 2 * (last - first) / (series.Axis.Length - 1));
+        if (2 * half >= last - first) { _xLow = _xHigh = null; SetNeedsDraw(); return true; }
+        double centre = Math.Clamp(series.Axis[CursorIndex], first + half, last - half);
+        (_xLow, _xHigh) = (centre - half, centre + half);
+        SetNeedsDraw();
+        return true;
+    }
+
+    /// <summary>Shifts a zoomed bias window so the cursor stays inside it.</summary>
+    private void FollowCursor()
+    {
+        if (_xLow is not double low || _xHigh is not double high || _series is null) return;
+        double x = _series.Axis[CursorIndex], width = high - low;
+        if (x < low) (_xLow, _xHigh) = (x, x + width);
+        else if (x > high) (_xLow, _xHigh) = (x - width, x);
     }
 
     private bool? Pan(double fraction)
@@ -128,13 +180,13 @@ public sealed class SpectrumView : View
         int plotColumns = width - AxisWidth - labelWidth, plotRows = height - 3;
         if (series is null || series.Axis.Length == 0 || plotColumns < 4 || plotRows < 2)
         {
-            var keys = TextFit.WrapLines("←/→ cursor · +/− zoom · PgUp/PgDn pan · Home fit · F7 manifold", width, Math.Max(1, height - 2));
+            var keys = TextFit.WrapLines("←/→ cursor · +/− zoom f · >/< zoom bias · PgUp/PgDn pan · Home fit · F7 manifold", width, Math.Max(1, height - 2));
             for (int i = 0; i < keys.Count; i++) { Move(0, 2 + i); AddStr(RowList.Pad(keys[i], width)); }
             return true;
         }
 
         var (low, high) = Range();
-        double xMin = series.Axis[0], xMax = series.Axis[^1];
+        var (xMin, xMax) = BiasRange();
         if (xMax == xMin) xMax = xMin + 1;
         var canvas = new BrailleCanvas(plotColumns, plotRows);
         int DotX(double x) => (int)Math.Round((x - xMin) / (xMax - xMin) * (canvas.DotWidth - 1));
@@ -142,7 +194,7 @@ public sealed class SpectrumView : View
         var ends = new List<(int Row, string Label)>();
         foreach (var branch in series.Branches)
         {
-            int? lastX = null, lastY = null;
+            int? lastX = null, lastY = null, endY = null;
             for (int i = 0; i < series.Axis.Length; i++)
             {
                 double f = branch.Frequencies[i];
@@ -150,8 +202,9 @@ public sealed class SpectrumView : View
                 int x = DotX(series.Axis[i]), y = DotY(f);
                 if (lastX is int px && lastY is int py) canvas.Line(px, py, x, y); else canvas.Set(x, y);
                 (lastX, lastY) = (x, y);
+                if (x >= 0 && x < canvas.DotWidth) endY = y;   // the name goes where the branch leaves a zoomed window
             }
-            if (lastY is int endY && endY >= 0 && endY < canvas.DotHeight) ends.Add((endY / 4, branch.Label));
+            if (endY is int end && end >= 0 && end < canvas.DotHeight) ends.Add((end / 4, branch.Label));
         }
 
         int cursorColumn = Math.Clamp(DotX(series.Axis[CursorIndex]) / 2, 0, plotColumns - 1);
