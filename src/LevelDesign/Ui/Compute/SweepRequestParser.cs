@@ -12,7 +12,7 @@ namespace LevelDesign.Ui.Compute;
 /// </summary>
 public static class SweepRequestParser
 {
-    public const string Syntax = "BIAS START STOP POINTS (e.g. qc_flux 0.3 mA 0.6 mA 41) [link PATH SCALE SHIFT]...  or a sweep name from the file";
+    public const string Syntax = "BIAS START STOP POINTS (e.g. qc_flux 0.3 mA 0.6 mA 41) [link PATH SCALE SHIFT]... [; a second axis for a map]  or a sweep name from the file";
 
     public static SweepRequest? Parse(string text, DeviceDocument document, out string? error)
     {
@@ -25,6 +25,28 @@ public static class SweepRequestParser
             if (named is null) { error = $"no sweep named '{words[0]}' in the file; type {Syntax}"; return null; }
             return new SweepRequest(text.Trim(), named.Axes);
         }
+        // two axes separated by ";" make a grid (the first across, the second up on the map page)
+        var parts = text.Split(';', StringSplitOptions.TrimEntries);
+        if (parts.Length > 2) { error = "at most two axes, separated by ';'"; return null; }
+        var axes = new List<SweepAxis>();
+        foreach (var part in parts)
+        {
+            var axis = ParseAxis(part.Split(' ', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries), document, out error);
+            if (axis is null) { if (parts.Length > 1) error = $"axis {axes.Count + 1}: {error}"; return null; }
+            axes.Add(axis);
+        }
+        if (axes.Count == 2 && axes[0].Path == axes[1].Path) { error = $"both axes sweep {axes[0].Path}"; return null; }
+        if (Core.Sweeps.SweepGrid.AxisProblems(axes) is { Count: > 0 } problems) { error = string.Join("; ", problems); return null; }
+        if (axes.Count == 2 && axes[0].Count * axes[1].Count > MaxGridPoints)
+        { error = $"a grid of {axes[0].Count}×{axes[1].Count} points is more than the screen's {MaxGridPoints}; use the sweep command for larger grids"; return null; }
+        return new SweepRequest(text.Trim(), axes);
+    }
+
+    /// <summary>Most points of a two-axis sweep started from the screen (a map of about 60×40 cells).</summary>
+    public const int MaxGridPoints = 2601;
+
+    private static SweepAxis? ParseAxis(string[] words, DeviceDocument document, out string? error)
+    {
         if (words.Length < 4) { error = "type " + Syntax; return null; }
         // START and STOP may carry units as the file writes them ("0.3 mA" or "0.3mA"); a plain number is in SI base units
         string path = words[0];
@@ -43,9 +65,7 @@ public static class SweepRequestParser
             { error = "a linked path is written: link PATH SCALE SHIFT"; return null; }
             links.Add(new LinkedPath(words[i + 1], scale, shift));
         }
-        var axis = new SweepAxis(path, start, stop, count, links);
-        if (Core.Sweeps.SweepGrid.AxisProblems([axis]) is { Count: > 0 } problems) { error = string.Join("; ", problems); return null; }
-        return new SweepRequest(text.Trim(), [axis]);
+        return new SweepAxis(path, start, stop, count, links);
     }
 
     /// <summary>A sensible first sweep: the first bias (or the first flux) over one period in 61 points.</summary>

@@ -89,12 +89,12 @@ public sealed partial class MainWindow
     private void AskSaveCursorAsPoint()
     {
         var document = _session.Document;
-        if (document is null || _sweep is null || _cursorSnapshot is null || _spectrum.CursorIndex >= _sweep.Points.Count)
+        if (document is null || _sweep is null || _cursorSnapshot is null || CursorPointIndex < 0 || CursorPointIndex >= _sweep.Points.Count)
         {
             Say("p saves the sweep cursor as an operating point: run a sweep (F5) and move the cursor (← →) first");
             return;
         }
-        var point = _sweep.Points[_spectrum.CursorIndex];
+        var point = _sweep.Points[CursorPointIndex];
         var values = new List<(string Bias, string Value)>();
         for (int i = 0; i < _sweep.Plan.Axes.Count; i++)
         {

@@ -77,7 +77,7 @@ public sealed partial class MainWindow
             if (request is null) return error;
             _lastSweep = request;
             StartSweep(request);
-            ShowPage(Page.Spectrum);
+            ShowPage(request.Axes.Count == 2 ? Page.Map : Page.Spectrum);
             return null;
         });
     }
@@ -196,12 +196,20 @@ public sealed partial class MainWindow
                 ? $"✗ sweep stopped: the point at {SweepFiles.FailedAt(_session.Document!, result, failure)} failed ({DescribeProblem(failure.Error)}); {result.Points.Count} of {total} points kept"
                 : $"sweep cancelled: {result.Points.Count} of {total} points kept";
         Say(_sweepSummary, warning: result.Failure is not null);
-        OnCursorMoved(_spectrum.CursorIndex);
+        if (IsMapSweep) MoveMapCursor(0, 0); else OnCursorMoved(_spectrum.CursorIndex);
     }
 
     private void RebuildSeries()
     {
         if (_sweep is null || _sweep.Points.Count == 0) { _series = null; _crossings = []; _spectrum.Show(null, []); return; }
+        if (_sweep.Plan.Axes.Count != 1)
+        {
+            _series = null;
+            _spectrum.Show(null, []);
+            _spectrum.Status = "a two-axis sweep: F3 to its map";
+            RefreshPage();
+            return;
+        }
         _series = SpectrumSeries.From(_sweep, _manifold);
         string axisPath = _series.AxisName;
         _spectrum.FormatBias = v => AxisText(axisPath, v);
@@ -228,9 +236,9 @@ public sealed partial class MainWindow
 
     private string Where()
     {
-        if (_cursorSnapshot is not null && _sweep is not null && _spectrum.CursorIndex < _sweep.Points.Count)
+        if (_cursorSnapshot is not null && _sweep is not null && CursorPointIndex is int index and >= 0 && index < _sweep.Points.Count)
         {
-            var p = _sweep.Points[_spectrum.CursorIndex];
+            var p = _sweep.Points[index];
             string axes = string.Join(", ", _sweep.Plan.Axes.Select((a, i) => $"{a.Path} = {AxisText(a.Path, p.AxisValues[i])}"));
             return $"{axes} (point {p.Index + 1}/{_sweep.Points.Count}{(_sweepStale ? ", stale" : "")})";
         }
@@ -241,6 +249,9 @@ public sealed partial class MainWindow
     /// <summary>A bias in its control unit; plain axes as before (4 decimals), so "0.1000" reads as a flux.</summary>
     private string AxisText(string path, double value) =>
         ShownUnit.Of(_session.Document, path).Text(value);
+
+    /// <summary>The sweep point under the cursor: the map's on a two-axis sweep, the spectrum's otherwise.</summary>
+    private int CursorPointIndex => IsMapSweep ? _mapPoint : _spectrum.CursorIndex;
 
     private PointSnapshot? Shown => _cursorSnapshot ?? _pointView?.Snapshot ?? _snapshot;
 
@@ -257,6 +268,7 @@ public sealed partial class MainWindow
             Page.Quantities => "Quantities along the sweep (Enter: choose)",
             Page.Matrix => "Matrix elements (Enter: operator)",
             Page.Compare => "Compare A and B (a, b mark)",
+            Page.Map => "Map of a two-axis sweep (Enter: quantity)",
             Page.Help => _showLimits ? "Help: limits of the model" : "Help: keys",
             Page.Errors => "Errors in the device file",
             _ => "",
@@ -288,6 +300,9 @@ public sealed partial class MainWindow
                 break;
             case Page.Compare:
                 _page.SetLines(ComparePage(width));
+                break;
+            case Page.Map:
+                _page.SetLines(MapPage(width));
                 break;
             case Page.Crossings:
                 _crossingList.SetLines(CrossingsText.Build(_crossings, _sweep, _series?.AxisName, _crossingsPending,

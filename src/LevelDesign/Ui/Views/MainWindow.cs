@@ -225,13 +225,25 @@ public sealed partial class MainWindow : Window
         {
             if (_pageShown == Page.Quantities) AskQuantities();
             else if (_pageShown == Page.Matrix) AskMatrixOperator();
+            else if (_pageShown == Page.Map) AskMapQuantity();
             else return false;
             return true;
         });
-        _page.Bind(Key.CursorLeft, Command.Left, () => { if (!CursorPage) return false; _spectrum.SetCursor(_spectrum.CursorIndex - 1); return true; });
-        _page.Bind(Key.CursorRight, Command.Right, () => { if (!CursorPage) return false; _spectrum.SetCursor(_spectrum.CursorIndex + 1); return true; });
+        _page.Bind(Key.CursorLeft, Command.Left, () => MoveCursorOnPage(-1));
+        _page.Bind(Key.CursorRight, Command.Right, () => MoveCursorOnPage(1));
+        // on the map, ↑ and ↓ move the cursor along the second axis instead of scrolling
+        _page.ArrowOverride = step => _pageShown == Page.Map && MoveMapCursor(0, -step);
         _page.Bind(Key.L, Command.Context, () => { ToggleLimits(); return true; });
         _page.Bind(Key.L.WithShift, Command.Context, () => { ToggleLimits(); return true; });   // the help writes "L"
+    }
+
+    /// <summary>← → on a text page: the map's cursor on the map page, the spectrum's cursor on the pages that share it.</summary>
+    private bool MoveCursorOnPage(int step)
+    {
+        if (_pageShown == Page.Map) return MoveMapCursor(step, 0);
+        if (!CursorPage) return false;
+        _spectrum.SetCursor(_spectrum.CursorIndex + step);
+        return true;
     }
 
     /// <summary>Text pages on which ← → move the sweep cursor shared with the spectrum.</summary>
@@ -355,6 +367,7 @@ public sealed partial class MainWindow : Window
             Page.Crossings => Page.Quantities,
             Page.Quantities => Page.Matrix,
             Page.Matrix => Page.Compare,
+            Page.Compare => Page.Map,
             _ => Page.States,
         };
         ShowPage(next);

@@ -1,6 +1,6 @@
 namespace LevelDesign.Ui.Views;
 
-/// <summary>The pages of the right-hand side; F3 cycles the first seven.</summary>
+/// <summary>The pages of the right-hand side; F3 cycles the first eight.</summary>
 public enum Page
 {
     States,
@@ -10,6 +10,7 @@ public enum Page
     Quantities,
     Matrix,
     Compare,
+    Map,
     Help,
     Errors,
 }

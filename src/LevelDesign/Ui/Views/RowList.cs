@@ -19,8 +19,8 @@ public class RowList : View
     public RowList()
     {
         CanFocus = true;
-        AddCommand(Command.Up, () => Step(-1));
-        AddCommand(Command.Down, () => Step(1));
+        AddCommand(Command.Up, () => ArrowOverride?.Invoke(-1) == true ? true : Step(-1));
+        AddCommand(Command.Down, () => ArrowOverride?.Invoke(1) == true ? true : Step(1));
         AddCommand(Command.PageUp, () => Step(-Math.Max(1, Viewport.Height - 1)));
         AddCommand(Command.PageDown, () => Step(Math.Max(1, Viewport.Height - 1)));
         AddCommand(Command.Start, () => Step(-_lines.Count));
@@ -41,6 +41,9 @@ public class RowList : View
     }
 
     public bool Selectable { get; init; } = true;
+
+    /// <summary>Takes ↑ (−1) and ↓ (+1) before they scroll when it returns true (a page that moves its own cursor).</summary>
+    public Func<int, bool>? ArrowOverride { get; set; }
 
     /// <summary>Adds a command of this list and binds a key to it (used for context keys such as Insert on the board).</summary>
     public void Bind(Key key, Command command, Func<bool?> action)

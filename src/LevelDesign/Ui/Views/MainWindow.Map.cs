@@ -1,0 +1,97 @@
+using LevelDesign.Core.DeviceFiles;
+using LevelDesign.Core.Presentation;
+using LevelDesign.Core.Sweeps;
+using LevelDesign.Ui.Compute;
+using LevelDesign.Ui.Text;
+
+namespace LevelDesign.Ui.Views;
+
+/// <summary>
+/// The map page of a two-axis sweep: one chosen quantity shaded over the grid, a cursor moved with the arrows whose
+/// point the state pages show, Enter to choose the quantity.
+/// </summary>
+public sealed partial class MainWindow
+{
+    /// <summary>The quantity shaded on the map; null: the first ZZ, or the first qubit's f01.</summary>
+    private string? _mapQuantity;
+
+    /// <summary>The map cursor: indices along the first and second axis.</summary>
+    private (int I, int J) _mapCursor;
+
+    /// <summary>The sweep point under the map cursor, or −1 (no two-axis sweep).</summary>
+    private int _mapPoint = -1;
+
+    private bool IsMapSweep => _sweep is { Plan.Axes.Count: 2, Points.Count: > 0 };
+
+    /// <summary>The index of an axis value on its grid (values are start + k·step, so rounding recovers k).</summary>
+    private static int GridIndex(SweepAxis axis, double value) =>
+        axis.Count <= 1 || axis.Stop == axis.Start ? 0
+            : Math.Clamp((int)Math.Round((value - axis.Start) / (axis.Stop - axis.Start) * (axis.Count - 1)), 0, axis.Count - 1);
+
+    public string MapQuantity(SweepResult sweep)
+    {
+        var available = QuantitySeries.Available(sweep);
+        if (_mapQuantity is string chosen && available.Contains(chosen)) return chosen;
+        return available.FirstOrDefault(n => n.StartsWith("zz:", StringComparison.Ordinal))
+               ?? available.FirstOrDefault(n => n.EndsWith(".f01", StringComparison.Ordinal)) ?? available.FirstOrDefault() ?? "";
+    }
+
+    private IReadOnlyList<TextLine> MapPage(int width)
+    {
+        if (!IsMapSweep || _sweep is not { } sweep)
+            return TextFit.Wrap("the map shows a two-axis sweep: F5 with two axes separated by ';', e.g. " +
+                                "qa_flux 0 0.5 31; qc_flux 0.15 mA 1 mA 31 (or a sweep of the file with a second axis)", width)
+                .Select(l => new TextLine(l)).ToList();
+        var (x, y) = (sweep.Plan.Axes[0], sweep.Plan.Axes[1]);
+        string name = MapQuantity(sweep);
+        var series = QuantitySeries.From(sweep, name);
+        double threshold = _session.Document?.PurityThreshold ?? Core.Analysis.Conventions.DefaultPurityThreshold;
+        var values = new double[x.Count, y.Count];
+        var hybridized = new bool[x.Count, y.Count];
+        for (int i = 0; i < x.Count; i++)
+            for (int j = 0; j < y.Count; j++) values[i, j] = double.NaN;
+        for (int k = 0; k < sweep.Points.Count; k++)
+        {
+            var p = sweep.Points[k];
+            int i = GridIndex(x, p.AxisValues[0]), j = GridIndex(y, p.AxisValues[1]);
+            values[i, j] = series.Values[k];
+            hybridized[i, j] = !series.IsPurity && series.Purities[k] < threshold;
+        }
+        var unitX = ShownUnit.Of(_session.Document, x.Path);
+        var unitY = ShownUnit.Of(_session.Document, y.Path);
+        var cursor = (Math.Clamp(_mapCursor.I, 0, x.Count - 1), Math.Clamp(_mapCursor.J, 0, y.Count - 1));
+        string where = $"{x.Path} = {unitX.Text(x.Start + (x.Stop - x.Start) * cursor.Item1 / Math.Max(1, x.Count - 1))}, " +
+                       $"{y.Path} = {unitY.Text(y.Start + (y.Stop - y.Start) * cursor.Item2 / Math.Max(1, y.Count - 1))}";
+        return MapText.Build(series, values, hybridized, (x.Path, unitX.Text(x.Start), unitX.Text(x.Stop)),
+            (y.Path, unitY.Text(y.Start), unitY.Text(y.Stop)), cursor, where, width, Math.Max(10, _page.Viewport.Height));
+    }
+
+    /// <summary>Moves the map cursor by (di, dj) grid steps; the state pages then show that point.</summary>
+    private bool MoveMapCursor(int di, int dj)
+    {
+        if (!IsMapSweep || _sweep is not { } sweep) return false;
+        var (x, y) = (sweep.Plan.Axes[0], sweep.Plan.Axes[1]);
+        _mapCursor = (Math.Clamp(_mapCursor.I + di, 0, x.Count - 1), Math.Clamp(_mapCursor.J + dj, 0, y.Count - 1));
+        _mapPoint = -1;
+        for (int k = 0; k < sweep.Points.Count; k++)
+            if (GridIndex(x, sweep.Points[k].AxisValues[0]) == _mapCursor.I && GridIndex(y, sweep.Points[k].AxisValues[1]) == _mapCursor.J) { _mapPoint = k; break; }
+        _cursorSnapshot = _mapPoint >= 0 ? PointComputer.FromSweepPoint(sweep.Points[_mapPoint], DateTime.Now) : null;
+        _pointView = null;
+        RefreshPage();
+        return true;
+    }
+
+    private void AskMapQuantity()
+    {
+        if (!IsMapSweep || _sweep is not { } sweep) { Say("run a two-axis sweep first: F5, two axes separated by ';'"); return; }
+        var available = QuantitySeries.Available(sweep);
+        _prompt.Ask($"shade on the map: {string.Join(", ", available.Take(12))}{(available.Count > 12 ? ", …" : "")}", MapQuantity(sweep), text =>
+        {
+            string chosen = text.Trim();
+            if (!available.Contains(chosen)) return $"'{chosen}' is not computed along this sweep{Core.DeviceFiles.EditDistance.Suggestion(chosen, available)}";
+            _mapQuantity = chosen;
+            RefreshPage();
+            return null;
+        });
+    }
+}
