@@ -2,7 +2,7 @@
 # A real Slurm run of a spread study: starts a one-node cluster from Debian's packages (munge, slurmctld, slurmd;
 # needs root and apt-get), writes the job scripts with `leveldesign spread --slurm 4`, submits the 4-task array and
 # the dependent merge, waits, and compares the merged study with an unsharded run of the same study (byte for byte
-# apart from the timing fields). Stops the daemons it started by their PIDs. Exit 0 passed, 1 failed; prints
+# apart from the timing fields); then the same for a 61-point sweep and a 5×9 grid sweep (byte for byte). Stops the daemons it started by their PIDs. Exit 0 passed, 1 failed; prints
 # "skipped: REASON" and exits 0 only when Slurm cannot be started here.
 set -uo pipefail
 cd "$(dirname "$0")/.."
@@ -111,5 +111,18 @@ if cmp -s "$work/sweep/sweep.json" "$work/sweep-single.json"; then
   echo "slurm: 4-task sweep array + dependent merge equals the unsharded sweep byte for byte"
 else
   echo "FAILED: the merged sweep differs from the unsharded one"; cat "$work/sweep/logs/"*.err >&2 2>/dev/null; status=1
+fi
+
+# a grid: 5 coupler-current rows × 9 qubit-flux points in 4 tasks (split by rows), merged, against one unsharded run
+grid_start=$SECONDS
+grid=(--vary "qc_flux=0.15mA:1.05mA:5" --vary "qa_flux=0:0.3:9" --csv)
+"$exe" sweep "$root/devices/pair.toml" "${grid[@]}" --slurm 4 --out "$work/grid" </dev/null 2>/dev/null || { echo "FAILED: writing the grid's job scripts"; exit 1; }
+bash "$work/grid/submit.sh" || { echo "FAILED: submitting the grid"; exit 1; }
+for _ in $(seq 1 600); do squeue -h 2>/dev/null | grep -q . || break; sleep 1; done
+"$exe" sweep "$root/devices/pair.toml" "${grid[@]}" --out "$work/grid-single.csv" </dev/null 2>/dev/null || { echo "FAILED: unsharded grid"; exit 1; }
+if [ -s "$work/grid/sweep.csv" ] && cmp -s "$work/grid/sweep.csv" "$work/grid-single.csv"; then
+  echo "slurm: 4-task 5×9 grid array + dependent merge equals the unsharded grid byte for byte ($((SECONDS - grid_start)) s)"
+else
+  echo "FAILED: the merged grid differs from the unsharded one (or was not written)"; cat "$work/grid/logs/"*.err >&2 2>/dev/null; status=1
 fi
 exit "$status"

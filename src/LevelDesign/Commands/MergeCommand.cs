@@ -9,7 +9,8 @@ namespace LevelDesign.Commands;
 
 /// <summary>
 /// leveldesign merge SHARD... --out DIR [--device FILE] [--json]: combines the shard files of a spread study
-/// (`spread --shard I/N`) into the files one unsharded run writes. Refused, with the reason, when the shards come
+/// (`spread --shard I/N`) into the files one unsharded run writes, or those of a sweep or grid (`sweep --shard I/N`,
+/// see <see cref="SweepShards.Merge"/>) into its output file. Refused, with the reason, when the shards come
 /// from different devices, seeds, rules, eigensolvers or program versions, when one is missing, repeated or was
 /// cancelled, or when the device file changed since.
 /// </summary>

@@ -92,22 +92,33 @@ public static class SlurmJobScripts
     }
 
     /// <summary>
-    /// The scripts of a 1-D sweep: each task a run of blocks; the merge writes sweep.json (or sweep.csv) into the folder.
-    /// Memory: runtime plus one eigen solve and the kept states of the task's points (dimension × ~50 levels × 24 bytes
-    /// each), with 50 % margin.
+    /// The scripts of a sweep: each task a run of blocks (1-D) or of rows (grid); the merge writes sweep.json (or
+    /// sweep.csv) into the folder. Memory: see <see cref="SweepMemoryMegabytes"/>.
     /// </summary>
-    public static void ForSweep(DeviceDocument document, string folder, int tasks, int cpus, int points, IReadOnlyList<string> arguments, bool csv)
+    public static void ForSweep(DeviceDocument document, string folder, int tasks, int cpus, IReadOnlyList<int> counts, IReadOnlyList<string> arguments, bool csv)
+    {
+        long points = counts.Aggregate(1L, (n, c) => n * c);
+        long merge = 300 + (long)(points * document.CompositeDimension / 20_000);
+        string output = Path.Combine(Path.GetFullPath(folder), csv ? "sweep.csv" : "sweep.json");
+        Write(document, folder, "sweep", string.Concat(arguments.Select(a => " " + Quote(a))), tasks, cpus, SweepMemoryMegabytes(document, counts, tasks, cpus), merge,
+            i => $"sweep-shard-{i}-of-{tasks}.json", output, $"Sweep of {document.Device.Name}: {points} points in {Core.Sweeps.SweepBlocks.Describe(counts)}");
+    }
+
+    /// <summary>
+    /// Memory of one sweep task: the runtime (~300 MB), one eigen solve per thread and the kept states of the task's
+    /// points (dimension × ~50 levels × 24 bytes each; a task's points are its blocks or rows and what it computes
+    /// besides: the lead-in block and point 0, or a grid's first point of each earlier row), with 50 % margin; at least 1 GB.
+    /// </summary>
+    public static long SweepMemoryMegabytes(DeviceDocument document, IReadOnlyList<int> counts, int tasks, int cpus)
     {
         double dimension = document.CompositeDimension;
         double solve = CompositeSizeEstimate.PathBytes(dimension, document.Device.Couplers.Count, DeviceSolver.DefaultIterativeMinimumDimension);
-        int blocks = Core.Sweeps.SweepBlocks.Count(points), size = Core.Sweeps.SweepBlocks.Size(points);
-        long taskPoints = ((blocks + tasks - 1) / tasks + 1) * (long)size + 1;
+        int units = Core.Sweeps.SweepBlocks.ShardUnits(counts), perTask = (units + tasks - 1) / tasks;
+        long taskPoints = counts.Count == 1
+            ? (perTask + 1) * (long)Core.Sweeps.SweepBlocks.Size(counts[0]) + 1
+            : perTask * (long)counts[1] + counts[0];
         double bytes = 300e6 + cpus * solve + taskPoints * dimension * 50 * 24;
-        long memory = Math.Max(1024, (long)Math.Ceiling(1.5 * bytes / (1 << 20) / 100) * 100);
-        long merge = 300 + (long)(points * dimension / 20_000);
-        string output = Path.Combine(Path.GetFullPath(folder), csv ? "sweep.csv" : "sweep.json");
-        Write(document, folder, "sweep", string.Concat(arguments.Select(a => " " + Quote(a))), tasks, cpus, memory, merge,
-            i => $"sweep-shard-{i}-of-{tasks}.json", output, $"Sweep of {document.Device.Name}: {points} points in {blocks} blocks of {size}");
+        return Math.Max(1024, (long)Math.Ceiling(1.5 * bytes / (1 << 20) / 100) * 100);
     }
 
     /// <summary>

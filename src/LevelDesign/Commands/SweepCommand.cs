@@ -43,8 +43,8 @@ public static class SweepCommand
         var output = new Option<string?>("--out") { Description = "write the result to this file instead of stdout" };
         var allowLarge = CommonOptions.AllowLarge();
         var states = CommonOptions.States();
-        var shard = new Option<string?>("--shard") { Description = "I/N: compute only the I-th of N runs of points of a 1-D sweep and write DIR/sweep-shard-I-of-N.json (--out names the folder); 'leveldesign merge' joins them into exactly the unsharded output" };
-        var slurm = new Option<int?>("--slurm") { Description = "TASKS: write a Slurm job array for this 1-D sweep in --out DIR (TASKS shards of 2 CPUs and a dependent merge into DIR/sweep.json or .csv) instead of computing" };
+        var shard = new Option<string?>("--shard") { Description = "I/N: compute only the I-th of N runs of points (blocks of a 1-D sweep, rows of the first axis of a grid) and write DIR/sweep-shard-I-of-N.json (--out names the folder); 'leveldesign merge' joins them into exactly the unsharded output" };
+        var slurm = new Option<int?>("--slurm") { Description = "TASKS: write a Slurm job array for this sweep or grid in --out DIR (TASKS shards of 2 CPUs and a dependent merge into DIR/sweep.json or .csv) instead of computing" };
         var command = new Command("sweep", "the labelled spectrum at every point of a bias sweep (parallel); progress on stderr, Ctrl-C keeps finished points")
             { file, vary, link, sweep, at, point, levels, states, labels, purity, json, csv, output, allowLarge, shard, slurm };
         command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(vary), parse.GetValue(link), parse.GetValue(sweep), parse.GetValue(at),
@@ -70,11 +70,11 @@ public static class SweepCommand
         var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 2);
         if (slurm is int tasks)
         {
-            if (setup.Axes.Count != 1) throw new UsageException("--slurm splits a 1-D sweep; a grid (two --vary) is not sharded");
-            int blockCount = SweepBlocks.Count(setup.Axes[0].Count);
-            if (tasks < 1 || tasks > blockCount) throw new UsageException($"--slurm {tasks}: give 1 to {blockCount} tasks (this sweep runs in {blockCount} blocks of {SweepBlocks.Size(setup.Axes[0].Count)} points)");
+            var counts = SweepShards.Counts(setup);
+            int units = SweepBlocks.ShardUnits(counts);
+            if (tasks < 1 || tasks > units) throw new UsageException($"--slurm {tasks}: give 1 to {units} tasks (this sweep runs in {SweepBlocks.Describe(counts)})");
             SpreadStudyFiles.Prepare(output!);
-            SlurmJobScripts.ForSweep(document, output!, tasks, 2, setup.Axes[0].Count,
+            SlurmJobScripts.ForSweep(document, output!, tasks, 2, counts,
                 SweepShards.CommandLine(vary, links, sweepName, at, point, levels, labels, purity, states, allowLarge, csv), csv);
             return ExitCodes.Ok;
         }
@@ -85,8 +85,9 @@ public static class SweepCommand
             var arguments = SweepShards.Arguments(vary, links, sweepName, at, point, levels, labels, purity, states, allowLarge, csv);
             return SweepShards.RunShard(document, setup, mode, planLevels, shown, threshold, solver, shard, arguments, output!);
         }
-        // a 1-D sweep runs in fixed blocks, so its numbers do not depend on the cores or on a split into shards
-        var blocks = setup.Axes.Count == 1 ? SweepBlocks.All(setup.Axes[0].Count) : null;
+        // a sweep runs in fixed blocks (a grid: each row as a 1-D sweep), so its numbers do not depend on the cores or
+        // on a split into shards
+        var blocks = SweepBlocks.All(SweepShards.Counts(setup));
         // a point that fails (e.g. a device invalid at the end of the range) stops the sweep; the points before it are written
         var result = SweepExecution.Run(setup, mode, planLevels, solver, blocks, keepPointsOnFailure: true);
         if (result.Failure is { } failure && result.Points.Count == 0) throw failure.Error;

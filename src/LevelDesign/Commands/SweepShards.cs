@@ -11,10 +11,11 @@ using LevelDesign.Core.Sweeps.Export;
 namespace LevelDesign.Commands;
 
 /// <summary>
-/// `sweep --shard I/N` and the merge of its shard files. A 1-D sweep runs in fixed blocks (<see cref="SweepBlocks"/>),
-/// so a shard computes its points exactly as the single run does; labels are carried into a shard from its lead-in
-/// point, labelled afresh there, and the merge checks that those labels are the ones the previous shard carried to
-/// the same point (otherwise the split fell inside a crossing and is refused). The merged output is the unsharded
+/// `sweep --shard I/N` and the merge of its shard files. A sweep runs in fixed blocks (<see cref="SweepBlocks"/>),
+/// so a shard computes its points exactly as the single run does. In a 1-D sweep labels are carried into a shard from
+/// its lead-in point, labelled afresh there, and the merge checks that those labels are the ones the previous shard
+/// carried to the same point (otherwise the split fell inside a crossing and is refused). A grid is split by rows of
+/// its outer axis; a shard also computes the first point of every earlier row, which is where its labels come from. The merged output is the unsharded
 /// `sweep` output (JSON or CSV, as the shards were asked for), byte for byte.
 /// </summary>
 public static class SweepShards
@@ -52,18 +53,17 @@ public static class SweepShards
     public static int RunShard(DeviceDocument document, SweepSetup setup, LabelMode mode, int? planLevels, int shown, double threshold,
         DeviceSolver solver, string shardText, JsonObject arguments, string folder)
     {
-        if (setup.Axes.Count != 1) throw new UsageException("--shard splits a 1-D sweep; a grid (two --vary) is not sharded");
-        int points = setup.Axes[0].Count, blocks = SweepBlocks.Count(points);
-        var shard = ShardRange.Parse(shardText, blocks, out string? error)
-            ?? throw new UsageException($"--shard {error} (this sweep of {points} points runs in {blocks} blocks of {SweepBlocks.Size(points)})");
+        var counts = Counts(setup);
+        var shard = ShardRange.Parse(shardText, SweepBlocks.ShardUnits(counts), out string? error)
+            ?? throw new UsageException($"--shard {error} (this sweep of {SweepBlocks.All(counts)[^1].End} points runs in {SweepBlocks.Describe(counts)})");
         SpreadStudyFiles.Prepare(folder);
-        var (compute, first, end, leadIn) = SweepBlocks.ForShard(points, shard);
+        var (compute, first, end, leadIn) = SweepBlocks.ForShard(counts, shard);
         var result = SweepExecution.Run(setup, mode, planLevels, solver, compute);
         var table = SweepTable.From(result, shown, threshold);
         var own = table with { Rows = table.Rows.Where(r => r.Index >= first && r.Index < end).ToArray() };
         string[]? Labels(int index) => result.Points.FirstOrDefault(p => p.Index == index) is { } p ? LabelList(p) : null;
         var id = new SweepShardFile.Identity(SpreadStudyFiles.Version(), document.Path, SpreadStudyFiles.Sha256(document.Text), EigenSolvers.Describe(),
-            arguments, points, SweepBlocks.Size(points));
+            arguments, counts);
         var contents = new SweepShardFile.Contents(id, shard, first, end, result.Completed, leadIn >= 0 ? Labels(leadIn) : null, Labels(end - 1), own);
         string path = Path.Combine(folder, FileName(shard));
         OutputFile.Write(path, () => AtomicFile.Write(path, SweepShardFile.Write(contents)));
@@ -71,6 +71,9 @@ public static class SweepShards
         Console.Error.WriteLine($"wrote points {first}–{end - 1} (shard {shard}) to {path}");
         return result.Completed ? ExitCodes.Ok : ExitCodes.Cancelled;
     }
+
+    /// <summary>The sweep's axis counts, outer first (what fixes its blocks and how it is split).</summary>
+    public static int[] Counts(SweepSetup setup) => setup.Axes.Select(a => a.Count).ToArray();
 
     /// <summary>The label of every dressed state of a point, in state order: equal lists mean labels carried on from it agree.</summary>
     private static string[] LabelList(SweepPoint point) =>
@@ -97,7 +100,8 @@ public static class SweepShards
         var missing = Enumerable.Range(1, count).Where(i => shards.All(s => s.Contents.Shard.Shard != i)).ToList();
         if (missing.Count > 0) throw new UsageException($"shard(s) {string.Join(", ", missing.Select(i => $"{i}/{count}"))} missing: give all {count} shard files");
         var ordered = shards.OrderBy(s => s.Contents.Shard.Shard).Select(s => s.Contents).ToList();
-        for (int k = 1; k < ordered.Count; k++)
+        // a 1-D shard labels its lead-in point afresh; a grid shard's labels are exact (no hand-over to check)
+        for (int k = 1; k < ordered.Count && !first.Id.IsGrid; k++)
             if (!(ordered[k].LeadInLabels ?? []).SequenceEqual(ordered[k - 1].LastLabels ?? []))
                 throw new UsageException($"the labels at point {ordered[k].First - 1}, where shard {ordered[k].Shard} takes over from shard {ordered[k - 1].Shard}, " +
                                          "differ between the two (the split falls where labels are being handed over at a crossing); use another number of shards");

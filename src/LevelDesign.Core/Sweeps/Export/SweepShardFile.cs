@@ -8,23 +8,28 @@ namespace LevelDesign.Core.Sweeps.Export;
 /// One shard of a sweep (`sweep --shard I/N`): what identifies the sweep (program version, device text hash,
 /// eigensolver, the arguments that shape it, output format), the shard, the table's columns (named from point 0),
 /// the rows of the points it owns (one a line), and the labels at its two edges — of its lead-in point (labelled
-/// afresh here) and of its last point (carried) — which the merge compares between neighbouring shards: equal edge
-/// labels mean every label carried into the next shard is the one a single run would carry.
+/// afresh here) and of its last point (carried) — which the merge compares between neighbouring shards of a 1-D
+/// sweep: equal edge labels mean every label carried into the next shard is the one a single run would carry. A grid
+/// shard computes the labels of its rows exactly (<see cref="SweepBlocks.ForShard(IReadOnlyList{int}, ShardRange)"/>)
+/// and has no lead-in.
 /// </summary>
 public static class SweepShardFile
 {
     public const string Kind = "leveldesign sweep shard";
 
-    public sealed record Identity(string Version, string DevicePath, string DeviceSha256, string Eigensolver, JsonObject Arguments, int Points, int BlockSize)
+    public sealed record Identity(string Version, string DevicePath, string DeviceSha256, string Eigensolver, JsonObject Arguments, IReadOnlyList<int> AxisCounts)
     {
+        public int Points => AxisCounts.Aggregate(1, (n, c) => n * c);
+
+        public bool IsGrid => AxisCounts.Count == 2;
+
         public IEnumerable<(string Field, string Value)> Fields()
         {
             yield return ("version", Version);
             yield return ("device_sha256", DeviceSha256);
             yield return ("eigensolver", Eigensolver);
             yield return ("arguments", Arguments.ToJsonString());
-            yield return ("points", Points.ToString(System.Globalization.CultureInfo.InvariantCulture));
-            yield return ("block_size", BlockSize.ToString(System.Globalization.CultureInfo.InvariantCulture));
+            yield return ("axis_counts", string.Join(" × ", AxisCounts.Select(c => c.ToString(System.Globalization.CultureInfo.InvariantCulture))));
         }
     }
 
@@ -42,7 +47,8 @@ public static class SweepShardFile
             ["eigensolver"] = c.Id.Eigensolver,
             ["arguments"] = c.Id.Arguments.DeepClone(),
             ["points"] = c.Id.Points,
-            ["block_size"] = c.Id.BlockSize,
+            ["axis_counts"] = new JsonArray(c.Id.AxisCounts.Select(n => (JsonNode)n).ToArray()),
+            ["split"] = SweepBlocks.Describe(c.Id.AxisCounts),
             ["shard"] = c.Shard.ToString(),
             ["first_point"] = c.First,
             ["end_point"] = c.End,
@@ -75,10 +81,12 @@ public static class SweepShardFile
     {
         try
         {
-            int points = (int)o["points"]!;
+            var counts = o["axis_counts"]!.AsArray().Select(n => (int)n!).ToArray();
+            if (counts.Length is < 1 or > 2 || counts.Any(n => n < 1) || counts.Aggregate(1L, (n, c) => n * c) > SweepGrid.MaxPoints)
+                throw new FormatException("axis_counts: one or two counts of at least 1 expected");
             var id = new Identity((string)o["version"]!, (string)o["device_file"]!, (string)o["device_sha256"]!, (string)o["eigensolver"]!,
-                o["arguments"]!.AsObject().DeepClone().AsObject(), points, (int)o["block_size"]!);
-            var shard = ShardRange.Parse((string)o["shard"]!, SweepBlocks.Count(points), out string? error) ?? throw new FormatException("shard: " + error);
+                o["arguments"]!.AsObject().DeepClone().AsObject(), counts);
+            var shard = ShardRange.Parse((string)o["shard"]!, SweepBlocks.ShardUnits(counts), out string? error) ?? throw new FormatException("shard: " + error);
             var rows = o["rows"]!.AsArray().Select(r => new SweepTableRow((int)r!["point"]!, JsonRows.Doubles(r["axis_values"]!), JsonRows.Doubles(r["energies"]!),
                 JsonRows.Doubles(r["purities"]!), JsonRows.Doubles(r["quantities"]!), (bool)r["ambiguous"]!, (bool)r["low_purity"]!)
                 { QuantityPurities = JsonRows.Doubles(r["quantity_purities"]!) }).ToArray();
