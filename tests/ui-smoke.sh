@@ -101,6 +101,66 @@ keys Escape
 keys C-q; keys d
 wait_for "UI-EXITED" 10
 
+# The designer's task at 80x24 and 120x40: Tab focus, a relative target applied, the quantities page along a coupler
+# sweep, a two-level defect added with Insert, undo, and idle against coupler_low on the compare page.
+# F3 until the page with this title shows (each press waits for the screen to follow).
+page_to() {
+  local i j
+  for ((i = 0; i < 10; i++)); do
+    for ((j = 0; j < 5; j++)); do capture | grep -qF -- "$1" && return 0; sleep 0.2; done
+    keys F3
+  done
+  echo "FAIL: no page '$1' after ten F3"; capture; fail=1; return 1
+}
+designer_task() { # width height
+  cp devices/pair.toml "$WORK/pair.toml"; rm -f "$WORK/pair.toml.autosave" "$WORK/pair.toml.bak"
+  start "$1" "$2"
+  wait_for "States at cursor" 40
+  wait_for "trunc" 20
+  wait_for "╔╡Board╞" 5                      # the focused panel has a double border
+  keys Tab; wait_for "╔╡Parameters: qa╞" 5
+  keys BTab; wait_for "╔╡Board╞" 5
+  keys F9; clear_field 80
+  keys "qa.f01 - qb.f01 = 700 MHz by qb_flux 0 to 0.3" Enter
+  wait_for "digit applies" 60
+  keys 1
+  wait_for "biases.qb_flux.value =" 10
+  wait_for "● unsaved" 5
+  keys F5; wait_for "» sweep:" 5; keys Enter
+  wait_for "sweep done" 90
+  page_to "Quantities along the sweep"
+  wait_for "zz:qa:qb:" 10
+  for _ in 1 2 3; do capture | grep -qF "╔╡Quantities" && break; keys Tab; done
+  keys Enter; wait_for "» plot along the sweep" 5
+  clear_field 250; keys "purity:qa1, zz:qa:qb" Enter
+  wait_for "purity:qa1:" 10
+  keys Tab; keys BTab; keys BTab                # back to the board, wherever focus was
+  for _ in 1 2 3; do capture | grep -qF "╔╡Board╞" && break; keys Tab; done
+  keys IC; wait_for "d two-level defect" 5
+  keys d; wait_for "id of the new two-level defect" 5
+  keys Enter
+  wait_for "added two-level defect" 10
+  grep -q '^\[elements.d1\]' "$WORK/pair.toml.autosave" || { echo "FAIL: the autosave lacks the new defect"; fail=1; }
+  keys C-z
+  wait_for "undo" 10
+  sleep 0.5
+  grep -q '^\[elements.d1\]' "$WORK/pair.toml.autosave" && { echo "FAIL: undo left the defect in the autosave"; fail=1; }
+  keys End; wait_for "coupler_low" 5
+  keys Enter; wait_for "At point coupler_low" 30
+  keys b
+  page_to "Compare A and B"
+  wait_for "B: point coupler_low" 5
+  wait_for "qa.f01" 5
+  capture > "$WORK/designer-$1x$2.txt"
+  keys C-q; wait_for "unsaved changes" 5; keys d
+  wait_for "UI-EXITED" 10
+}
+
+echo "== 80x24: the designer's task (focus, relative target, quantities, Insert a defect, undo, compare)"
+designer_task 80 24
+echo "== 120x40: the designer's task"
+designer_task 120 40
+
 echo "== 100x30: the whole bias marker; a fit cancelled with Esc leaves the file as it was"
 cp devices/pair.toml "$WORK/pair.toml"; rm -f "$WORK/pair.toml.autosave"
 start 100 30

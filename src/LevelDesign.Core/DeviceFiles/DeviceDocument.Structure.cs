@@ -72,6 +72,14 @@ public sealed partial class DeviceDocument
         return Inserted(block, at, field, out error);
     }
 
+    /// <summary>An unused id for a new element: the stem with the first free number ("d1", "d2", …).</summary>
+    public string NewElementId(string stem)
+    {
+        for (int n = 1; n < 1000; n++)
+            if (NewIdProblem($"{stem}{n}", "elements") is null) return $"{stem}{n}";
+        return stem + "_new";
+    }
+
     /// <summary>
     /// An id for a new coupler: "A_B" for the first two elements not yet coupled to each other (or the first two), with
     /// a number added while it is taken.

@@ -459,7 +459,8 @@ public class MainWindowTests
         ui.Press(Key.InsertChar);
         Shows(ui.Screen, "add: t transmon");
         ui.Press(new Key('t'));
-        ui.Type("q2");
+        Assert.Equal("t1", ui.Window.Prompt.Text);   // an unused id is offered
+        ui.Replace("q2");
         ui.Press(Key.Enter);
         ui.WaitForScreen("q2  transmon");
         Assert.Equal(3, ui.Session.Document!.Device.Elements.Count);
@@ -494,7 +495,8 @@ public class MainWindowTests
             ui.Press(Key.InsertChar);
             Shows(ui.Screen, $"{kind.InsertLetter} {kind.InsertName}");
             ui.Press(new Key(kind.InsertLetter));
-            ui.Type($"e{kind.InsertLetter}");
+            Assert.Equal(ui.Session.Document!.NewElementId(kind.InsertLetter.ToString()), ui.Window.Prompt.Text);
+            ui.Replace($"e{kind.InsertLetter}");
             ui.Press(Key.Enter);
             ui.WaitForScreen($"e{kind.InsertLetter}  {kind.Name}");
             Shows(ui.Screen, $"Parameters: e{kind.InsertLetter}");   // the new element is the one selected

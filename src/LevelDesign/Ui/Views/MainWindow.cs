@@ -188,10 +188,6 @@ public sealed partial class MainWindow : Window
     {
         // The function keys go through one command that looks up the pressed key (the key bar only displays them).
         var actions = _windowKeys.Where(k => k.Action is not null).ToDictionary(k => k.Key, k => k.Action!);
-        // letters no panel uses reach the window: a and b mark the comparison's points, p saves the cursor as a point
-        actions[new Key('a')] = () => Mark('a');
-        actions[new Key('b')] = () => Mark('b');
-        actions[new Key('p')] = AskSaveCursorAsPoint;
         AddCommand(Command.Toggle, context =>
         {
             if (context?.Binding is not KeyBinding { Key: { } key } || !actions.TryGetValue(key, out var action)) return false;
@@ -248,6 +244,22 @@ public sealed partial class MainWindow : Window
 
     /// <summary>Text pages on which ← → move the sweep cursor shared with the spectrum.</summary>
     private bool CursorPage => _pageShown is Page.Quantities or Page.Matrix or Page.Compare;
+
+    /// <summary>
+    /// Letters no panel uses reach the window here (after the focused view had its turn, so typing in a prompt never
+    /// triggers them): a and b mark the comparison's points, p saves the sweep cursor as an operating point.
+    /// </summary>
+    protected override bool OnKeyDown(Key key)
+    {
+        if (_prompt.IsOpen || key.IsCtrl || key.IsAlt) return base.OnKeyDown(key);
+        switch (key.KeyCode)
+        {
+            case Terminal.Gui.Drivers.KeyCode.A: Mark('a'); return true;
+            case Terminal.Gui.Drivers.KeyCode.B: Mark('b'); return true;
+            case Terminal.Gui.Drivers.KeyCode.P: AskSaveCursorAsPoint(); return true;
+            default: return base.OnKeyDown(key);
+        }
+    }
 
     private void BindBoardKeys()
     {
@@ -524,7 +536,8 @@ public sealed partial class MainWindow : Window
     }
 
     private void AskNewElement(ElementKindInfo kind) =>
-        _prompt.Ask($"id of the new {kind.InsertName} (default values, marked in the file)", "", id =>
+        _prompt.Ask($"id of the new {kind.InsertName} (default values, marked in the file)",
+            _session.Document?.NewElementId(kind.InsertLetter.ToString()) ?? "", id =>
         {
             _selectAfterEdit = id.Trim();
             var outcome = _session.AddElement(kind, id.Trim());
