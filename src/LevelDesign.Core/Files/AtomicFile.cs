@@ -137,7 +137,7 @@ public static class AtomicFile
             File.Move(temporary, target, overwrite: true);
             PosixFile.SyncDirectory(directory);
         }
-        catch (Exception e) when (e is (IOException or UnauthorizedAccessException) and not FileWriteException)
+        catch (Exception e) when (WriteFailed(e) && e is not FileWriteException)
         {
             throw Reworded(e, path, temporary);
         }
@@ -166,7 +166,7 @@ public static class AtomicFile
             stream.SetLength(bytes.Length);   // after the write: a shorter text drops the old tail only once it is in place
             stream.Flush(flushToDisk: true);
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (Exception e) when (WriteFailed(e))
         {
             throw Reworded(e, path, target);
         }
@@ -185,7 +185,7 @@ public static class AtomicFile
                 WriteTemporary(temporary, facts, stream => source.CopyTo(stream));
             File.Move(temporary, backup, overwrite: true);
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (Exception e) when (WriteFailed(e))
         {
             throw new FileWriteException($"{path}: not saved, because the previous version could not be kept as {path}.bak: {Reworded(e, path + ".bak", temporary).Message}", e);
         }
@@ -220,7 +220,7 @@ public static class AtomicFile
             using var stream = new FileStream(target, FileMode.Open, FileAccess.Write, FileShare.ReadWrite, bufferSize: 0);
             stream.Write(bytes);
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (Exception e) when (WriteFailed(e))
         {
             throw Reworded(e, path, target);
         }
@@ -255,6 +255,12 @@ public static class AtomicFile
         }
     }
 
+    /// <summary>
+    /// A failed write: an I/O error (ENOSPC included), a permission, or EFBIG (past the file system's or the process's
+    /// file-size limit, ulimit -f), which .NET reports as an ArgumentOutOfRangeException.
+    /// </summary>
+    private static bool WriteFailed(Exception e) => e is IOException or UnauthorizedAccessException or ArgumentOutOfRangeException;
+
     /// <summary>The failure said in terms of the user's path; the temporary's name never reaches the message.</summary>
     private static FileWriteException Reworded(Exception e, string path, string temporary)
     {
@@ -264,6 +270,7 @@ public static class AtomicFile
         {
             UnauthorizedAccessException => $"permission denied (cannot create or replace a file in {shown})",
             DirectoryNotFoundException => $"no such directory {shown}",
+            ArgumentOutOfRangeException => "the file would be larger than the file system or this process's file-size limit (ulimit -f) allows",
             _ => e.Message.Replace(temporary, path),
         };
         return new FileWriteException($"cannot write {path}: {why}", e);

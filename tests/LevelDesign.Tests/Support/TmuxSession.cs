@@ -17,10 +17,13 @@ public sealed class TmuxSession : IDisposable
     /// <summary>Process id of the UI itself (the pane execs it).</summary>
     public int ProcessId { get; }
 
-    /// <summary>Starts the UI on <paramref name="file"/> in <paramref name="directory"/>, WIDTH×HEIGHT, without colours.</summary>
-    public TmuxSession(string directory, string file, int width = 100, int height = 30)
+    /// <summary>
+    /// Starts the UI on <paramref name="file"/> in <paramref name="directory"/>, WIDTH×HEIGHT, without colours;
+    /// <paramref name="limits"/> (shell words ending in an exec, e.g. <see cref="FileSizeLimit.ShellPrefix"/>) go first.
+    /// </summary>
+    public TmuxSession(string directory, string file, int width = 100, int height = 30, string limits = "exec")
     {
-        string command = $"cd '{directory}' && exec env NO_COLOR=1 TERM=xterm-256color dotnet '{Executable.DllPath}' '{file}'";
+        string command = $"cd '{directory}' && {limits} env NO_COLOR=1 TERM=xterm-256color dotnet '{Executable.DllPath}' '{file}'";
         Tmux("new-session", "-d", "-s", Name, "-x", width.ToString(), "-y", height.ToString(), command);
         ProcessId = int.Parse(Tmux("list-panes", "-t", Name, "-F", "#{pane_pid}").Trim());
     }
