@@ -1,5 +1,6 @@
 using LevelDesign.Core.DeviceFiles.Source;
 using LevelDesign.Core.Elements;
+using LevelDesign.Core.Kinds;
 using LevelDesign.Core.Model;
 
 namespace LevelDesign.Core.DeviceFiles;
@@ -25,7 +26,8 @@ internal static class BareSpectrumCheck
             catch (Exception e) when (e is not OutOfMemoryException)   // any failure of a bare solve is a located input error, never a crash
             {
                 if (!tables.TryGetValue(element.Id, out var table)) continue;
-                var at = table.Find("levels") ?? table.Find("basis_size");
+                var at = (e is ElementLimitException limit ? KeyGiving(element, limit.Parameter, table) : null)
+                         ?? table.Find("levels") ?? table.Find("basis_size");
                 string field = $"elements.{element.Id}" + (at is null ? "" : "." + at.Key);
                 string message = e.Message.StartsWith("element '") ? e.Message : $"element '{element.Id}': {e.Message}";
                 if (at is not null) errors.At(at, field, message);
@@ -34,4 +36,9 @@ internal static class BareSpectrumCheck
         }
         return solved;
     }
+
+    /// <summary>The key in the element's table that gives a model parameter: itself, or a circuit form (ic, rn, ej1 …).</summary>
+    private static SourceEntry? KeyGiving(Element element, string parameter, SourceTable table) =>
+        table.Find(parameter) ?? ElementKindCatalog.Of(element).Keys.Where(k => k.Gives.Contains(parameter))
+            .Select(k => table.Find(k.Name)).FirstOrDefault(e => e is not null);
 }

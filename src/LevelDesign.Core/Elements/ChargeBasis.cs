@@ -42,12 +42,15 @@ internal static class ChargeBasis
         return new Dictionary<string, OperatorMatrix> { ["n"] = n, ["cos_phi"] = cos, ["sin_phi"] = sin };
     }
 
-    /// <summary>Solves with |n| ≤ N grown from a safe start until the kept levels converge.</summary>
-    public static BareSpectrum Solve(string id, double ec, double ej, double ng, int levels, int? basisSize)
+    /// <summary>
+    /// Solves with |n| ≤ N grown from a safe start until the kept levels converge; refuses at once (naming
+    /// <paramref name="ejName"/> or levels) what the grown basis cannot converge (<see cref="ChargeBasisLimit"/>).
+    /// </summary>
+    public static BareSpectrum Solve(string id, double ec, double ej, double ng, int levels, int? basisSize, string ejName)
     {
         int? nMax = basisSize is int s ? (s - 1) / 2 : null;
-        int start = Math.Max(10, levels + 6);
-        var spectrum = BasisConvergence.Solve(id, levels, nMax, start, 4, 400, m => Build(ec, ej, ng, m));
-        return spectrum;
+        if (nMax is null && ChargeBasisLimit.Problem(ec, ej, levels, ejName) is var (parameter, message))
+            throw new ElementLimitException(parameter, $"element '{id}': {message}");
+        return BasisConvergence.Solve(id, levels, nMax, ChargeBasisLimit.StartCharge(levels), 4, ChargeBasisLimit.MaxCharge, m => Build(ec, ej, ng, m));
     }
 }

@@ -20,7 +20,7 @@ public sealed record Transmon(string Id, double Ec, double Ej, double Ng = 0) : 
     };
 
     public override BareSpectrum Diagonalise(int levels, int? basisSize = null) =>
-        LadderOperators.Add(ChargeBasis.Solve(Id, Ec, Ej, Ng, levels, basisSize));
+        LadderOperators.Add(ChargeBasis.Solve(Id, Ec, Ej, Ng, levels, basisSize, "ej"));
 
     public override IReadOnlyList<string> Validate()
     {

@@ -24,7 +24,7 @@ public sealed record TunableTransmon(string Id, double Ec, double EjSum, double 
     };
 
     public override BareSpectrum Diagonalise(int levels, int? basisSize = null) =>
-        LadderOperators.Add(ChargeBasis.Solve(Id, Ec, EffectiveEj, Ng, levels, basisSize));
+        LadderOperators.Add(ChargeBasis.Solve(Id, Ec, EffectiveEj, Ng, levels, basisSize, "ej_sum"));
 
     public override IReadOnlyList<string> Validate()
     {

@@ -8,17 +8,18 @@ namespace LevelDesign.Core.Files;
 /// replaced so that at every instant the directory holds a complete file and a complete backup: the new text goes
 /// to a temporary created exclusively (O_CREAT|O_EXCL: never through a planted link) in the same directory,
 /// flushed, given the old file's mode and owner, and renamed over the file; the previous version is copied the same
-/// way (temporary, flush, rename) to PATH.bak first. A character device or FIFO the user names is written into,
-/// like stdout, and never replaced or backed up. Temporaries left by a killed run of this tool are removed on the
-/// next write beside them.
+/// way (temporary, flush, rename) to PATH.bak first. A file with other hard links is written in place instead (a
+/// rename would detach it from them), once its complete backup is on disk. A character device or FIFO the user
+/// names is written into, like stdout, and never replaced or backed up. Temporaries left by a killed run of this
+/// tool are removed on the next write beside them.
 /// </summary>
 public static class AtomicFile
 {
     /// <summary>Ending of this tool's temporaries: .NAME.PID.RANDOM.ldtmp (the process id tells a stale one).</summary>
     public const string TemporarySuffix = ".ldtmp";
 
-    /// <summary>Write bits for owner, group and others (octal 0222).</summary>
-    private const int AnyWrite = 0x92;
+    /// <summary>Age after which a temporary of an earlier version (no process id in its name) is taken as left by a killed save.</summary>
+    public static readonly TimeSpan OldTemporaryAge = TimeSpan.FromMinutes(1);
 
     public static void Write(string path, string text, AtomicWrite? how = null) => Write(path, new UTF8Encoding(false).GetBytes(text), how);
 
@@ -58,12 +59,8 @@ public static class AtomicFile
         return string.Equals(System.IO.Path.GetFullPath(a), System.IO.Path.GetFullPath(b), StringComparison.Ordinal);
     }
 
-    /// <summary>Whether the file exists and has no write permission (or this process may not write it).</summary>
-    public static bool IsReadOnly(string path)
-    {
-        var facts = PosixFile.Stat(path);
-        return facts.Kind == FileKind.Regular && ((facts.Mode & AnyWrite) == 0 || !PosixFile.CanWrite(path));
-    }
+    /// <summary>Whether the file exists and this process may not write it (judged by the kernel: root may write a 0444 file).</summary>
+    public static bool IsReadOnly(string path) => PosixFile.Stat(path).Kind == FileKind.Regular && !PosixFile.CanWrite(path);
 
     /// <summary>The file finally written (links followed when allowed) and its status; refuses what must not be written.</summary>
     private static (string Target, FileFacts Facts) Destination(string path, AtomicWrite how)
@@ -89,7 +86,7 @@ public static class AtomicFile
                 throw new FileWriteException($"{path} is a directory; give a file name");
             case FileKind.BlockDevice or FileKind.Socket when how.FollowLinks:
                 throw new FileWriteException($"{path} is {facts.KindText}; refusing to write to it");
-            case FileKind.Regular when how.FollowLinks && ((facts.Mode & AnyWrite) == 0 || !PosixFile.CanWrite(full)):
+            case FileKind.Regular when how.FollowLinks && !PosixFile.CanWrite(full):
                 throw new FileWriteException($"{path} is read-only (mode {Convert.ToString(facts.Mode, 8)}); save under another name or change its permissions");
         }
         string directory = Directory(full);
@@ -124,6 +121,11 @@ public static class AtomicFile
     {
         string directory = Directory(target), name = System.IO.Path.GetFileName(target);
         RemoveStaleTemporaries(directory, name);
+        if (facts.Kind == FileKind.Regular && facts.Links > 1 && how.FollowLinks)
+        {
+            WriteInPlace(path, target, facts, bytes, how);
+            return;
+        }
         // the mode and owner to keep: those of the file it stands beside (autosave), else of the file it replaces
         FileFacts? keep = how.ModeFrom is string from && PosixFile.Stat(from) is { Kind: FileKind.Regular } source ? source
             : facts.Kind == FileKind.Regular ? facts : null;
@@ -135,13 +137,38 @@ public static class AtomicFile
             File.Move(temporary, target, overwrite: true);
             PosixFile.SyncDirectory(directory);
         }
-        catch (Exception e) when (e is (IOException or UnauthorizedAccessException) and not FileWriteException)
+        catch (Exception e) when (WriteFailed(e) && e is not FileWriteException)
         {
             throw Reworded(e, path, temporary);
         }
         finally
         {
             TryDelete(temporary);
+        }
+    }
+
+    /// <summary>
+    /// Writes a file that has other hard links into its own inode, so every name keeps seeing it (a rename would leave
+    /// the other names on the old text). Not atomic: the backup is made first, crash-safe and flushed with its folder,
+    /// so a kill mid-write leaves a complete PATH.bak to recover from. Mode and owner are untouched.
+    /// </summary>
+    private static void WriteInPlace(string path, string target, FileFacts facts, byte[] bytes, AtomicWrite how)
+    {
+        if (how.Backup)
+        {
+            Backup(path, target, facts);
+            PosixFile.SyncDirectory(Directory(System.IO.Path.GetFullPath(path) + ".bak"));
+        }
+        try
+        {
+            using var stream = new FileStream(target, FileMode.Open, FileAccess.Write, FileShare.ReadWrite, bufferSize: 0);
+            stream.Write(bytes);
+            stream.SetLength(bytes.Length);   // after the write: a shorter text drops the old tail only once it is in place
+            stream.Flush(flushToDisk: true);
+        }
+        catch (Exception e) when (WriteFailed(e))
+        {
+            throw Reworded(e, path, target);
         }
     }
 
@@ -158,7 +185,7 @@ public static class AtomicFile
                 WriteTemporary(temporary, facts, stream => source.CopyTo(stream));
             File.Move(temporary, backup, overwrite: true);
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (Exception e) when (WriteFailed(e))
         {
             throw new FileWriteException($"{path}: not saved, because the previous version could not be kept as {path}.bak: {Reworded(e, path + ".bak", temporary).Message}", e);
         }
@@ -193,7 +220,7 @@ public static class AtomicFile
             using var stream = new FileStream(target, FileMode.Open, FileAccess.Write, FileShare.ReadWrite, bufferSize: 0);
             stream.Write(bytes);
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (Exception e) when (WriteFailed(e))
         {
             throw Reworded(e, path, target);
         }
@@ -204,7 +231,8 @@ public static class AtomicFile
 
     /// <summary>
     /// Removes this tool's temporaries for NAME whose process is gone (a killed save), and those of earlier versions
-    /// (.NAME.GUID.tmp, no process id) once they are an hour old. Anything else is left alone.
+    /// (.NAME.GUID.tmp, no process id) once they are <see cref="OldTemporaryAge"/> old: a save takes well under a
+    /// second, so a minute-old one belongs to no running save. Anything else is left alone.
     /// </summary>
     public static void RemoveStaleTemporaries(string directory, string name)
     {
@@ -217,7 +245,7 @@ public static class AtomicFile
                 string fileName = System.IO.Path.GetFileName(file);
                 bool stale = ours.Match(fileName) is { Success: true } m
                     ? !(int.TryParse(m.Groups[1].Value, out int pid) && PosixFile.ProcessAlive(pid))
-                    : older.IsMatch(fileName) && File.GetLastWriteTimeUtc(file) < DateTime.UtcNow.AddHours(-1);
+                    : older.IsMatch(fileName) && File.GetLastWriteTimeUtc(file) < DateTime.UtcNow - OldTemporaryAge;
                 if (stale && PosixFile.Lstat(file).Kind is FileKind.Regular or FileKind.SymbolicLink) TryDelete(file);
             }
         }
@@ -226,6 +254,12 @@ public static class AtomicFile
             // an unreadable directory: the write itself will say so
         }
     }
+
+    /// <summary>
+    /// A failed write: an I/O error (ENOSPC included), a permission, or EFBIG (past the file system's or the process's
+    /// file-size limit, ulimit -f), which .NET reports as an ArgumentOutOfRangeException.
+    /// </summary>
+    private static bool WriteFailed(Exception e) => e is IOException or UnauthorizedAccessException or ArgumentOutOfRangeException;
 
     /// <summary>The failure said in terms of the user's path; the temporary's name never reaches the message.</summary>
     private static FileWriteException Reworded(Exception e, string path, string temporary)
@@ -236,6 +270,7 @@ public static class AtomicFile
         {
             UnauthorizedAccessException => $"permission denied (cannot create or replace a file in {shown})",
             DirectoryNotFoundException => $"no such directory {shown}",
+            ArgumentOutOfRangeException => "the file would be larger than the file system or this process's file-size limit (ulimit -f) allows",
             _ => e.Message.Replace(temporary, path),
         };
         return new FileWriteException($"cannot write {path}: {why}", e);

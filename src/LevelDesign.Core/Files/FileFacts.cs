@@ -2,11 +2,11 @@ namespace LevelDesign.Core.Files;
 
 /// <summary>
 /// The status of one path: kind, permission bits (with setuid/setgid/sticky, without the type), owner, size, and
-/// the device and inode that identify the file whatever name it is reached by.
+/// the device and inode that identify the file whatever name it is reached by, and how many names (hard links) it has.
 /// </summary>
-public readonly record struct FileFacts(FileKind Kind, int Mode, uint Uid, uint Gid, long Size, ulong Device, ulong Inode)
+public readonly record struct FileFacts(FileKind Kind, int Mode, uint Uid, uint Gid, long Size, ulong Device, ulong Inode, long Links = 1)
 {
-    public static readonly FileFacts Missing = new(FileKind.Missing, 0, 0, 0, 0, 0, 0);
+    public static readonly FileFacts Missing = new(FileKind.Missing, 0, 0, 0, 0, 0, 0, 0);
 
     public bool Exists => Kind != FileKind.Missing;
 

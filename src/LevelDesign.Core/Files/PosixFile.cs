@@ -32,7 +32,7 @@ public static unsafe class PosixFile
             : type == (int)S_IFBLK ? FileKind.BlockDevice
             : type == (int)S_IFIFO ? FileKind.Fifo
             : FileKind.Socket;
-        return new FileFacts(kind, (int)st.st_mode & 0xFFF, st.st_uid, st.st_gid, st.st_size, st.st_dev, st.st_ino);
+        return new FileFacts(kind, (int)st.st_mode & 0xFFF, st.st_uid, st.st_gid, st.st_size, st.st_dev, st.st_ino, (long)(ulong)st.st_nlink);
     }
 
     private static FileFacts Portable(string path, bool follow)
@@ -64,10 +64,14 @@ public static unsafe class PosixFile
         close(fd);
     }
 
-    /// <summary>Whether this process may write the path (access W_OK: for root, true even for a mode without write bits).</summary>
+    /// <summary>
+    /// Whether this process may write the path, as the kernel judges it (access W_OK): the mode bits for a plain
+    /// user, but true for root even without write bits, and false on an immutable file or a read-only mount.
+    /// Elsewhere than Linux, the read-only attribute.
+    /// </summary>
     public static bool CanWrite(string path)
     {
-        if (!OperatingSystem.IsLinux()) return true;
+        if (!OperatingSystem.IsLinux()) return !File.GetAttributes(path).HasFlag(FileAttributes.ReadOnly);
         fixed (byte* p = Bytes(path)) return access(p, W_OK) == 0;
     }
 

@@ -58,5 +58,11 @@ public sealed record SweepOptions
     /// <summary>Refuse, before computing, a sweep estimated to need more than this (bytes); null: no limit.</summary>
     public long? MemoryLimitBytes { get; init; } = DeviceFiles.CompositeSizeEstimate.DefaultLimitBytes;
 
+    /// <summary>
+    /// Refuse, before computing, a sweep estimated (from its first point's solve time) to run longer than this; null:
+    /// no limit and no timing solve.
+    /// </summary>
+    public TimeSpan? TimeLimit { get; init; } = SweepTimeEstimate.DefaultLimit;
+
     public DeviceSolver CreateSolver() => Solver ?? new DeviceSolver();
 }

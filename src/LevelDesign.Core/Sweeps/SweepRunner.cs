@@ -26,11 +26,11 @@ public static class SweepRunner
         int total = axisValues.Length;
         var solver = options.CreateSolver();
         int workers = Math.Clamp(options.Parallelism, 1, total);
-        bool keepVectors = Guard(resolve(axisValues[0]), plan, options, solver, total, workers);
+        int wanted = options.Blocks?.Sum(x => x.End - x.Start) ?? total;
+        bool keepVectors = Guard(resolve(axisValues[0]), plan, options, solver, total, wanted, workers);
         var labelling = new SweepLabelling(plan, options, axisValues, keepVectors);
         using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancellation);
         int done = 0, failedIndex = -1;
-        int wanted = options.Blocks?.Sum(x => x.End - x.Start) ?? total;
 
         var tasks = new List<Task>();
         if (options.Blocks is { } blocks)
@@ -134,20 +134,42 @@ public static class SweepRunner
     private delegate bool TakeNext(out int index);
 
     /// <summary>
-    /// Sizes the sweep from its first point (prepared only, not solved) and refuses it before any solve when it would
-    /// not fit; returns whether every point keeps its vectors.
+    /// Sizes the sweep from its first point and refuses it before the sweep starts when it would not fit in memory
+    /// or would run longer than <see cref="SweepOptions.TimeLimit"/> (timed by solving the first point once, when a
+    /// single point fits); returns whether every point keeps its vectors. Both refusals give both estimates.
     /// </summary>
-    private static bool Guard(Device first, SweepPlan plan, SweepOptions options, DeviceSolver solver, int total, int workers)
+    private static bool Guard(Device first, SweepPlan plan, SweepOptions options, DeviceSolver solver, int total, int wanted, int workers)
     {
         var problem = solver.Prepare(first);
         int dimension = problem.Basis.Dimension;
         int count = plan.Levels is int k ? Math.Min(k, dimension) : solver.Select(problem).Count;
         bool complex = !problem.Hamiltonian.IsReal;
         int iterativeFrom = options.Iterative ? options.IterativeMinimumDimension : int.MaxValue;
+        long entries = problem.Hamiltonian.StoredEntries;
         bool keep = SweepMemoryEstimate.KeepsVectors(options.KeepVectors, total, dimension, count, complex);
-        if (options.MemoryLimitBytes is long limit && SweepMemoryEstimate.Refusal(dimension, problem.Hamiltonian.StoredEntries,
-                count, total, workers, keep, complex, iterativeFrom, limit) is string refusal)
-            throw new SweepTooLargeException(refusal);
+        string? memory = options.MemoryLimitBytes is long limit
+            ? SweepMemoryEstimate.Refusal(dimension, entries, count, total, workers, keep, complex, iterativeFrom, limit)
+            : null;
+        bool timed = memory is not null || (options.TimeLimit is not null && wanted >= SweepTimeEstimate.MinimumTimedPoints);
+        double onePoint = SweepMemoryEstimate.Bytes(dimension, entries, count, 1, 1, false, complex, iterativeFrom);
+        TimeSpan? perPoint = timed && onePoint <= (options.MemoryLimitBytes ?? long.MaxValue) ? FirstPointTime(first, plan, options, solver) : null;
+        if (memory is not null)
+            throw new SweepTooLargeException(memory + (perPoint is TimeSpan t ? $"; it would also take {SweepTimeEstimate.Describe(t, wanted, workers)}" : ""));
+        if (perPoint is TimeSpan p && options.TimeLimit is TimeSpan most && SweepTimeEstimate.Refusal(p, wanted, workers, most) is not null)
+        {
+            // the first solve in a process also compiles the code: time it once more before refusing
+            var again = FirstPointTime(first, plan, options, solver) ?? p;
+            if (SweepTimeEstimate.Refusal(again < p ? again : p, wanted, workers, most) is string slow) throw new SweepTooLargeException(slow);
+        }
         return keep;
+    }
+
+    /// <summary>Time of one cold solve of the first point; null when it fails (the sweep itself then reports the failure at that point).</summary>
+    private static TimeSpan? FirstPointTime(Device first, SweepPlan plan, SweepOptions options, DeviceSolver solver)
+    {
+        var clock = System.Diagnostics.Stopwatch.StartNew();
+        try { new PointSolver(solver, options).Solve(first, plan.Levels); }
+        catch (Exception e) when (e is not OutOfMemoryException) { return null; }
+        return clock.Elapsed;
     }
 }

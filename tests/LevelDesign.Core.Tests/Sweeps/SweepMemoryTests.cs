@@ -64,6 +64,7 @@ public class SweepMemoryTests
         Assert.Contains("200 points", e.Message);
         Assert.Contains("use at most", e.Message);
         Assert.Contains("limit 300 MiB", e.Message);
+        Assert.Contains("it would also take about", e.Message);   // one point fits, so it was timed
         Assert.Equal(0, reported);
 
         // without kept vectors the points are not what fills memory: fewer states or a smaller truncation is

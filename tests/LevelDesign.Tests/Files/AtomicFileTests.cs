@@ -123,16 +123,94 @@ public sealed class AtomicFileTests : IDisposable
     }
 
     [Fact]
-    public void A_read_only_file_is_refused_and_left_as_it_was()
+    public void A_file_this_process_may_not_write_is_refused_and_left_as_it_was()
     {
         string file = _dir.File("device.toml");
         File.WriteAllText(file, "old");
-        File.SetUnixFileMode(file, UnixFileMode.UserRead | UnixFileMode.GroupRead);
+        if (!_dir.MakeUnwritable(file)) return;   // root without chattr: no file it may not write
         var e = Assert.Throws<FileWriteException>(() => AtomicFile.Write(file, "new"));
         Assert.Contains("read-only", e.Message);
         Assert.Equal("old", File.ReadAllText(file));
         Assert.True(AtomicFile.IsReadOnly(file));
         Assert.Empty(_dir.Temporaries());
+    }
+
+    [Fact]
+    public void A_0444_file_is_judged_by_the_kernel_read_only_for_a_user_writable_for_root()
+    {
+        const UnixFileMode readOnly = UnixFileMode.UserRead | UnixFileMode.GroupRead | UnixFileMode.OtherRead;
+        string file = _dir.File("device.toml");
+        File.WriteAllText(file, "old");
+        File.SetUnixFileMode(file, readOnly);
+        if (TempFolder.IsRoot)
+        {
+            // root may write any mode (access W_OK says so); the save goes through and keeps the mode
+            Assert.False(AtomicFile.IsReadOnly(file));
+            Assert.Null(AtomicFile.Problem(file));
+            AtomicFile.Write(file, "new");
+            Assert.Equal("new", File.ReadAllText(file));
+            Assert.Equal("old", File.ReadAllText(file + ".bak"));
+            Assert.Equal(readOnly, File.GetUnixFileMode(file));
+        }
+        else
+        {
+            Assert.True(AtomicFile.IsReadOnly(file));
+            Assert.Contains("read-only", AtomicFile.Problem(file));
+            Assert.Throws<FileWriteException>(() => AtomicFile.Write(file, "new"));
+            Assert.Equal("old", File.ReadAllText(file));
+        }
+    }
+
+    [Fact]
+    public void A_hard_linked_file_is_written_in_place_after_a_complete_backup_so_its_other_names_see_the_new_text()
+    {
+        Directory.CreateDirectory(_dir.File("elsewhere"));
+        string file = _dir.File("device.toml"), other = _dir.File("elsewhere/shared.toml");
+        File.WriteAllText(file, "old text, longer than the new one");
+        File.SetUnixFileMode(file, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.GroupRead);
+        TempFolder.Run("ln", file, other);   // a second hard link, made with ln(1)
+        var before = PosixFile.Lstat(file);
+        Assert.Equal(2, before.Links);
+
+        AtomicFile.Write(file, "new");
+
+        Assert.Equal("new", File.ReadAllText(other));
+        Assert.Equal("new", File.ReadAllText(file));
+        var after = PosixFile.Lstat(file);
+        Assert.True(after.SameFileAs(PosixFile.Lstat(other)), "the save detached the file from its other link");
+        Assert.Equal((before.Inode, 2L), (after.Inode, after.Links));
+        Assert.Equal(UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.GroupRead, File.GetUnixFileMode(file));
+        // the backup is a separate, complete file (not a third name of the same inode)
+        Assert.Equal("old text, longer than the new one", File.ReadAllText(file + ".bak"));
+        Assert.Equal(1, PosixFile.Lstat(file + ".bak").Links);
+        Assert.Empty(_dir.Temporaries());
+    }
+
+    [Fact]
+    public void A_single_name_file_is_still_replaced_by_rename()
+    {
+        string file = _dir.File("device.toml");
+        File.WriteAllText(file, "old");
+        ulong inode = PosixFile.Lstat(file).Inode;
+        AtomicFile.Write(file, "new");
+        Assert.NotEqual(inode, PosixFile.Lstat(file).Inode);   // a new inode: the atomic path, not the in-place one
+    }
+
+    [Fact]
+    public void Old_format_temporaries_are_removed_once_a_minute_old_and_fresh_ones_kept()
+    {
+        string file = _dir.File("device.toml");
+        File.WriteAllText(file, "old");
+        string minuteOld = _dir.File($".device.toml.{Guid.NewGuid():N}.tmp");
+        string fresh = _dir.File($".device.toml.{Guid.NewGuid():N}.tmp");
+        File.WriteAllText(minuteOld, "x");
+        File.WriteAllText(fresh, "x");
+        File.SetLastWriteTimeUtc(minuteOld, DateTime.UtcNow - AtomicFile.OldTemporaryAge - TimeSpan.FromSeconds(5));
+        File.SetLastWriteTimeUtc(fresh, DateTime.UtcNow - TimeSpan.FromSeconds(20));   // may belong to a save still running
+        Assert.Equal(TimeSpan.FromMinutes(1), AtomicFile.OldTemporaryAge);
+        AtomicFile.Write(file, "new");
+        Assert.False(File.Exists(minuteOld));
+        Assert.True(File.Exists(fresh));
     }
 
     [Fact]

@@ -55,7 +55,9 @@ public sealed class BoundedInputTests : IDisposable
     public void A_grid_that_would_not_fit_in_memory_is_refused_with_the_estimate()
     {
         string device = Copy("pair.toml");
-        Refused(Executable.Run(["sweep", device, "--vary", "qa_flux=0:0.1:400", "--vary", "qb_flux=0:0.1:400"]), "this sweep would need about");
+        var run = Executable.Run(["sweep", device, "--vary", "qa_flux=0:0.1:400", "--vary", "qb_flux=0:0.1:400"]);
+        Refused(run, "this sweep would need about");
+        Assert.Matches(@"it would also take about [\d.]+ (s|min|h|days) \(160,000 points × ", run.Stderr);
     }
 
     [Fact]

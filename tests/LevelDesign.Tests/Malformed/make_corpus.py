@@ -70,6 +70,8 @@ CASES = {
     "inductance_wrong_unit": ("is a capacitance", BASE + '\n[elements.f]\nkind = "fluxonium"\nec = "1 GHz"\nej = "4 GHz"\ninductance = "160 fF" #!\n'),
     "coherence_bad_temperature": ("expected a temperature", BASE + '\n[coherence]\nq_cap = 2e6\nqubit_temperature = "warm" #!\n'),
     "coherence_unknown_key": ("unknown key 'q_cpa'", BASE + '\n[coherence]\nq_cpa = 2e6 #!\n'),
+    "transmon_ratio_beyond_basis": ("lower ej, raise E_C or keep fewer levels", sub('ec = "220 MHz"\nej = "15 GHz"', 'ec = "1 kHz"\nej = "1 THz" #!')),
+    "transmon_ej_beyond_precision": ("beyond what a 1 Hz convergence test resolves", sub('ej = "15 GHz"', 'ej = "1e6 GHz" #!')),
 }
 
 for name, (fragment, text) in CASES.items():

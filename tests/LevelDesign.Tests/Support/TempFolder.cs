@@ -19,6 +19,23 @@ public sealed class TempFolder : IDisposable
 
     public static bool IsRoot => Environment.UserName == "root";
 
+    private readonly List<string> _immutable = [];
+
+    /// <summary>
+    /// Makes a file this process may not write: mode 0444, and for root (whom the kernel lets write any mode) also the
+    /// immutable attribute (chattr +i, undone on dispose). False when that is not possible here (root without chattr
+    /// or on a file system without the attribute); the caller then skips what needs an unwritable file.
+    /// </summary>
+    public bool MakeUnwritable(string path)
+    {
+        System.IO.File.SetUnixFileMode(path, UnixFileMode.UserRead | UnixFileMode.GroupRead | UnixFileMode.OtherRead);
+        if (!IsRoot) return true;
+        try { Run("chattr", "+i", path); }
+        catch (Exception e) when (e is InvalidOperationException or System.ComponentModel.Win32Exception) { return false; }
+        _immutable.Add(path);
+        return true;
+    }
+
     public static void Run(string program, params string[] args)
     {
         var start = new ProcessStartInfo(program) { RedirectStandardError = true, UseShellExecute = false };
@@ -33,6 +50,7 @@ public sealed class TempFolder : IDisposable
 
     public void Dispose()
     {
+        foreach (string f in _immutable) Run("chattr", "-i", f);
         try { Directory.Delete(Path, recursive: true); }
         catch (IOException) { }
     }
