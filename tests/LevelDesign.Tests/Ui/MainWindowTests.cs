@@ -459,7 +459,7 @@ public class MainWindowTests
         ui.Press(Key.InsertChar);
         Shows(ui.Screen, "add: t transmon");
         ui.Press(new Key('t'));
-        Assert.Equal("t1", ui.Window.Prompt.Text);   // an unused id is offered
+        Assert.Equal("t1", ui.Window.Prompt.InputText);   // an unused id is offered
         ui.Replace("q2");
         ui.Press(Key.Enter);
         ui.WaitForScreen("q2  transmon");
@@ -495,7 +495,7 @@ public class MainWindowTests
             ui.Press(Key.InsertChar);
             Shows(ui.Screen, $"{kind.InsertLetter} {kind.InsertName}");
             ui.Press(new Key(kind.InsertLetter));
-            Assert.Equal(ui.Session.Document!.NewElementId(kind.InsertLetter.ToString()), ui.Window.Prompt.Text);
+            Assert.Equal(ui.Session.Document!.NewElementId(kind.InsertLetter.ToString()), ui.Window.Prompt.InputText);
             ui.Replace($"e{kind.InsertLetter}");
             ui.Press(Key.Enter);
             ui.WaitForScreen($"e{kind.InsertLetter}  {kind.Name}");

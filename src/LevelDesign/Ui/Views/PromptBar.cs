@@ -51,7 +51,7 @@ public sealed class PromptBar : WrappedHeightView
     public string Question => _question;
     public string Message => _message;
     /// <summary>The text in the input line (what Enter would answer).</summary>
-    public string Text => _input.Text;
+    public string InputText => _input.Text;
 
     /// <summary>Asks for text. <paramref name="onAnswer"/> returns null to close, or a reason to keep asking.</summary>
     public void Ask(string question, string initial, Func<string, string?> onAnswer, Action? onCancel = null)
