@@ -23,18 +23,10 @@ public sealed partial class MainWindow
 
     private bool IsMapSweep => _sweep is { Plan.Axes.Count: 2, Points.Count: > 0 };
 
-    /// <summary>The index of an axis value on its grid (values are start + k·step, so rounding recovers k).</summary>
-    private static int GridIndex(SweepAxis axis, double value) =>
-        axis.Count <= 1 || axis.Stop == axis.Start ? 0
-            : Math.Clamp((int)Math.Round((value - axis.Start) / (axis.Stop - axis.Start) * (axis.Count - 1)), 0, axis.Count - 1);
+    public string MapQuantity(SweepResult sweep) =>
+        _mapQuantity is string chosen && QuantitySeries.Available(sweep).Contains(chosen) ? chosen : MapGrid.DefaultQuantity(sweep);
 
-    public string MapQuantity(SweepResult sweep)
-    {
-        var available = QuantitySeries.Available(sweep);
-        if (_mapQuantity is string chosen && available.Contains(chosen)) return chosen;
-        return available.FirstOrDefault(n => n.StartsWith("zz:", StringComparison.Ordinal))
-               ?? available.FirstOrDefault(n => n.EndsWith(".f01", StringComparison.Ordinal)) ?? available.FirstOrDefault() ?? "";
-    }
+    private double Threshold => _session.Document?.PurityThreshold ?? Core.Analysis.Conventions.DefaultPurityThreshold;
 
     private IReadOnlyList<TextLine> MapPage(int width)
     {
@@ -42,27 +34,13 @@ public sealed partial class MainWindow
             return TextFit.Wrap("the map shows a two-axis sweep: F5 with two axes separated by ';', e.g. " +
                                 "qa_flux 0 0.5 31; qc_flux 0.15 mA 1 mA 31 (or a sweep of the file with a second axis)", width)
                 .Select(l => new TextLine(l)).ToList();
-        var (x, y) = (sweep.Plan.Axes[0], sweep.Plan.Axes[1]);
-        string name = MapQuantity(sweep);
-        var series = QuantitySeries.From(sweep, name);
-        double threshold = _session.Document?.PurityThreshold ?? Core.Analysis.Conventions.DefaultPurityThreshold;
-        var values = new double[x.Count, y.Count];
-        var hybridized = new bool[x.Count, y.Count];
-        for (int i = 0; i < x.Count; i++)
-            for (int j = 0; j < y.Count; j++) values[i, j] = double.NaN;
-        for (int k = 0; k < sweep.Points.Count; k++)
-        {
-            var p = sweep.Points[k];
-            int i = GridIndex(x, p.AxisValues[0]), j = GridIndex(y, p.AxisValues[1]);
-            values[i, j] = series.Values[k];
-            hybridized[i, j] = !series.IsPurity && series.Purities[k] < threshold;
-        }
+        var grid = MapGrid.From(sweep, MapQuantity(sweep), Threshold);
+        var (x, y) = (grid.X, grid.Y);
         var unitX = ShownUnit.Of(_session.Document, x.Path);
         var unitY = ShownUnit.Of(_session.Document, y.Path);
         var cursor = (Math.Clamp(_mapCursor.I, 0, x.Count - 1), Math.Clamp(_mapCursor.J, 0, y.Count - 1));
-        string where = $"{x.Path} = {unitX.Text(x.Start + (x.Stop - x.Start) * cursor.Item1 / Math.Max(1, x.Count - 1))}, " +
-                       $"{y.Path} = {unitY.Text(y.Start + (y.Stop - y.Start) * cursor.Item2 / Math.Max(1, y.Count - 1))}";
-        return MapText.Build(series, values, hybridized, (x.Path, unitX.Text(x.Start), unitX.Text(x.Stop)),
+        string where = $"{x.Path} = {unitX.Text(MapGrid.ValueAt(x, cursor.Item1))}, {y.Path} = {unitY.Text(MapGrid.ValueAt(y, cursor.Item2))}";
+        return MapText.Build(grid.Quantity, grid.Values, grid.Hybridized, (x.Path, unitX.Text(x.Start), unitX.Text(x.Stop)),
             (y.Path, unitY.Text(y.Start), unitY.Text(y.Stop)), cursor, where, width, Math.Max(10, _page.Viewport.Height));
     }
 
@@ -72,9 +50,7 @@ public sealed partial class MainWindow
         if (!IsMapSweep || _sweep is not { } sweep) return false;
         var (x, y) = (sweep.Plan.Axes[0], sweep.Plan.Axes[1]);
         _mapCursor = (Math.Clamp(_mapCursor.I + di, 0, x.Count - 1), Math.Clamp(_mapCursor.J + dj, 0, y.Count - 1));
-        _mapPoint = -1;
-        for (int k = 0; k < sweep.Points.Count; k++)
-            if (GridIndex(x, sweep.Points[k].AxisValues[0]) == _mapCursor.I && GridIndex(y, sweep.Points[k].AxisValues[1]) == _mapCursor.J) { _mapPoint = k; break; }
+        _mapPoint = MapGrid.From(sweep, MapQuantity(sweep), Threshold).PointAt(_mapCursor.I, _mapCursor.J);
         _cursorSnapshot = _mapPoint >= 0 ? PointComputer.FromSweepPoint(sweep.Points[_mapPoint], DateTime.Now) : null;
         _pointView = null;
         RefreshPage();
