@@ -228,6 +228,23 @@ public class NarrowScreenTests
     }
 
     [Fact]
+    public void The_compare_and_matrix_pages_have_no_cut_lines_at_80x24()
+    {
+        using var ui = new UiHarness(80, 24, device: "pair.toml");
+        ui.WaitIdle();
+        ui.Press(Key.End, Key.Enter);   // the last operating point on the board
+        ui.WaitForScreen("At point coupler_low");
+        ui.Press(new Key('b'));
+        ui.Press(Key.Tab);
+        while (ui.Window.FocusedPanel != "page") ui.Press(Key.Tab);
+        ui.Window.ShowPage(Page.Compare);
+        Assert.Contains("B: point coupler_low", ui.Screen);
+        NoCutLines(ui, "compare");
+        ui.Window.ShowPage(Page.Matrix);
+        NoCutLines(ui, "matrix elements");
+    }
+
+    [Fact]
     public void Spectrum_and_crossings_pages_have_no_cut_lines_at_80x24()
     {
         using var ui = new UiHarness(80, 24);

@@ -41,12 +41,16 @@ public static class CompareText
         var namedB = b.Quantities.Named();
         var purityA = a.Quantities.NamedPurities();
         var purityB = b.Quantities.NamedPurities();
-        var quantityRows = namedA.Keys.Where(namedB.ContainsKey).Select(name =>
+        // A and B to their full resolution when three columns fit, else to four digits (Δ keeps its full resolution)
+        List<string[]> QuantityRows(bool full) => namedA.Keys.Where(namedB.ContainsKey).Select(name =>
         {
             string Value(IReadOnlyDictionary<string, double> v, IReadOnlyDictionary<string, double> p) =>
-                FrequencyText.Of(name, v[name]) + (p.TryGetValue(name, out double purity) && purity < purityThreshold ? "!" : " ");
+                (full ? FrequencyText.Of(name, v[name]) : FrequencyText.Short(v[name]))
+                + (p.TryGetValue(name, out double purity) && purity < purityThreshold ? "!" : " ");
             return new[] { name, Value(namedA, purityA), Value(namedB, purityB), FrequencyText.Of(name, namedB[name] - namedA[name]) + " " };
         }).ToList();
+        var quantityRows = QuantityRows(full: true);
+        if (ValuesWidth(quantityRows) > width) quantityRows = QuantityRows(full: false);
         lines.AddRange(Table(["quantity", "A ", "B ", "Δ "], quantityRows, width));
 
         lines.Add(new TextLine(""));
@@ -65,6 +69,10 @@ public static class CompareText
         return lines;
     }
 
+    /// <summary>Columns the three value columns take (each as wide as the widest value, two spaces before each).</summary>
+    private static int ValuesWidth(IReadOnlyList<string[]> rows) =>
+        rows.Count == 0 ? 0 : Enumerable.Range(1, 3).Sum(c => rows.Max(r => r[c].Length) + 2);
+
     private static bool SameElements(DressedSpectrum a, DressedSpectrum b) =>
         a.Device.Elements.Select(e => e.Id).SequenceEqual(b.Device.Elements.Select(e => e.Id));
 
@@ -75,14 +83,17 @@ public static class CompareText
     private static IEnumerable<TextLine> Table(string[] header, IReadOnlyList<string[]> rows, int width)
     {
         var all = rows.Prepend(header).ToList();
-        int value = Enumerable.Range(1, header.Length - 1).Max(c => all.Max(r => r[c].Length));
-        int values = (header.Length - 1) * (value + 2);
-        int name = Math.Max(4, Math.Min(all.Max(r => r[0].Length), width - values));
-        string Values(string[] r) => string.Concat(Enumerable.Range(1, r.Length - 1).Select(c => "  " + r[c].PadLeft(value)));
+        var columns = Enumerable.Range(1, header.Length - 1).Select(c => all.Max(r => r[c].Length)).ToArray();
+        int values = columns.Sum(w => w + 2);
+        // too narrow for a name column of 8: every name on its own line, the values under it, closer together
+        bool stacked = width - values < 8;
+        string gap = stacked ? " " : "  ";
+        int name = stacked ? 1 : Math.Min(all.Max(r => r[0].Length), width - values);
+        string Values(string[] r) => string.Concat(Enumerable.Range(1, r.Length - 1).Select(c => gap + r[c].PadLeft(columns[c - 1])));
         IEnumerable<TextLine> Row(string[] r, bool heading)
         {
             bool warning = r.Any(c => c.TrimEnd().EndsWith('!'));
-            if (r[0].Length <= name) { yield return new TextLine(TextFit.Cut(r[0].PadRight(name) + Values(r), width), warning, heading); yield break; }
+            if (!stacked && r[0].Length <= name) { yield return new TextLine(TextFit.Cut(r[0].PadRight(name) + Values(r), width), warning, heading); yield break; }
             yield return new TextLine(TextFit.Cut(r[0], width), warning, heading);
             yield return new TextLine(TextFit.Cut(new string(' ', name) + Values(r), width), warning, heading);
         }
