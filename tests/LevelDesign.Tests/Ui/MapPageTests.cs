@@ -67,6 +67,23 @@ public class MapPageTests
     }
 
     [Fact]
+    public void A_grid_taller_than_the_page_is_sampled_so_the_legend_and_the_cursor_reading_stay_on_screen()
+    {
+        var values = new double[31, 40];
+        var hybridized = new bool[31, 40];
+        for (int i = 0; i < 31; i++)
+            for (int j = 0; j < 40; j++) values[i, j] = 1e-3 * (i - j);
+        var quantity = new QuantitySeries("zz:qa:qb", false, new double[1], new double[1]);
+        var lines = MapText.Build(quantity, values, hybridized, ("qa_flux", "0", "0.5"), ("qc_flux", "0.15 mA", "1 mA"),
+            (3, 7), "qa_flux = 0.05, qc_flux = 0.3 mA", width: 46, height: 20);
+        Assert.True(lines.Count <= 20, string.Join("\n", lines.Select(l => l.Text)));
+        string all = string.Join(" ", lines.Select(l => l.Text));
+        Assert.Contains($"zz:qa:qb = {FrequencyText.Of("zz:qa:qb", values[3, 7])}", all);
+        Assert.Contains(lines.TakeLast(5), l => l.Text.Contains('≥'));   // the legend just above the reading
+        Assert.All(lines, l => Assert.True(l.Text.Length <= 46, l.Text));
+    }
+
+    [Fact]
     public void The_prompt_refuses_a_third_axis_the_same_bias_twice_and_grids_larger_than_the_screen_takes()
     {
         using var ui = new UiHarness(100, 30);

@@ -40,7 +40,13 @@ public static class MapText
 
         // as many cells as fit: each grid point one character when it fits, else the nearest point per cell
         int columns = Math.Max(4, Math.Min(nx, width - TickWidth - 1));
-        int rows = Math.Max(3, Math.Min(ny, height - lines.Count - 5));
+        // the legend and the cursor's reading are laid out first, so the map takes only the rows left (the reading stays on screen)
+        var legend = TextFit.Wrap(Legend(quantity, low, high), width).Select(l => new TextLine(l)).ToList();
+        double at = values[cursor.I, cursor.J];
+        string reading = double.IsFinite(at) ? quantity.Text(at) + (hybridized[cursor.I, cursor.J] ? " ! hybridized" : "") : "not computed";
+        var readout = TextFit.Wrap($"{Cursor} {cursorWhere}: {quantity.Name} = {reading}", width)
+            .Select(l => new TextLine(l, Warning: hybridized[cursor.I, cursor.J])).ToList();
+        int rows = Math.Max(3, Math.Min(ny, height - lines.Count - 2 - legend.Count - readout.Count));
         int Sample(int cell, int cells, int points) => cells >= points ? cell : (int)Math.Round(cell * (points - 1.0) / Math.Max(1, cells - 1));
         int CellOf(int point, int cells, int points) => cells >= points ? point : (int)Math.Round(point * (cells - 1.0) / Math.Max(1, points - 1));
         int cursorColumn = CellOf(cursor.I, columns, nx), cursorRow = CellOf(cursor.J, rows, ny);
@@ -59,10 +65,8 @@ public static class MapText
         lines.Add(new TextLine(new string(' ', TickWidth - 1) + "└" + new string('─', columns)));
         string ends = axisX.First.PadRight(Math.Max(axisX.First.Length + 1, columns - axisX.Last.Length)) + axisX.Last;
         lines.Add(new TextLine(TextFit.Cut(new string(' ', TickWidth) + ends, width)));
-        lines.AddRange(TextFit.Wrap(Legend(quantity, low, high), width).Select(l => new TextLine(l)));
-        double at = values[cursor.I, cursor.J];
-        string reading = double.IsFinite(at) ? quantity.Text(at) + (hybridized[cursor.I, cursor.J] ? " ! hybridized" : "") : "not computed";
-        lines.AddRange(TextFit.Wrap($"{Cursor} {cursorWhere}: {quantity.Name} = {reading}", width).Select(l => new TextLine(l, Warning: hybridized[cursor.I, cursor.J])));
+        lines.AddRange(legend);
+        lines.AddRange(readout);
         return lines;
     }
 
