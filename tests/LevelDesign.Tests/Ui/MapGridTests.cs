@@ -1,7 +1,4 @@
-using LevelDesign.Core.Couplers;
 using LevelDesign.Core.DeviceFiles;
-using LevelDesign.Core.Elements;
-using LevelDesign.Core.Model;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Ui.Compute;
 
@@ -12,10 +9,7 @@ public class MapGridTests
 {
     private static async Task<SweepResult> FluxByResonator()
     {
-        var device = new Device("demo",
-            [new TunableTransmon("q", 0.2, 30, 0.35, 0), new Resonator("r", 5.6)],
-            [Coupler.Create("g", CouplerKind.Exchange, "q", "r", new CouplingStrength.Coefficient(0.05))],
-            new Truncation { DefaultLevels = 3 });
+        var device = Support.QubitAndResonator.Build();
         SweepAxis x = new("q.flux", 0, 0.5, 5, []), y = new("r.frequency", 5.0, 6.0, 3, []);
         return await SweepRunner.RunAsync(ParameterResolver.ForPaths(device, [x, y]), new SweepPlan([x, y], Levels: 6));
     }

@@ -1,7 +1,4 @@
-using LevelDesign.Core.Couplers;
 using LevelDesign.Core.DeviceFiles;
-using LevelDesign.Core.Elements;
-using LevelDesign.Core.Model;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Ui.Compute;
 
@@ -12,10 +9,7 @@ public class SpectrumSeriesTests
     /// <summary>A tunable qubit swept through a resonator (g = 50 MHz): one avoided crossing in the single manifold.</summary>
     private static async Task<SweepResult> QubitThroughResonator()
     {
-        var device = new Device("demo",
-            [new TunableTransmon("q", 0.2, 30, 0.35, 0), new Resonator("r", 5.6)],
-            [Coupler.Create("g", CouplerKind.Exchange, "q", "r", new CouplingStrength.Coefficient(0.05))],
-            new Truncation { DefaultLevels = 3 });
+        var device = Support.QubitAndResonator.Build();
         var axis = new SweepAxis("q.flux", 0, 0.5, 61, []);
         return await SweepRunner.RunAsync(ParameterResolver.ForPaths(device, [axis]), new SweepPlan([axis], Levels: 6));
     }
