@@ -72,6 +72,16 @@ public sealed partial class DeviceDocument
         return Inserted(block, at, field, out error);
     }
 
+    /// <summary>Sections that do not change the device at the file's biases: named points, sweeps and the spread study.</summary>
+    private static readonly string[] OutsideTheModel = ["points", "sweeps", "spread", "rules"];
+
+    /// <summary>
+    /// The text without its operating points, sweeps and spread study. Two documents with the same model text give the
+    /// same device and biases, so the screen need not compute again when only those tables changed (saving a point).
+    /// </summary>
+    public string ModelText() =>
+        TextEdit.Apply(Text, _source.Tables.Where(t => OutsideTheModel.Contains(t.Name.Split('.')[0])).Select(TableRemoval));
+
     /// <summary>An unused id for a new element: the stem with the first free number ("d1", "d2", …).</summary>
     public string NewElementId(string stem)
     {

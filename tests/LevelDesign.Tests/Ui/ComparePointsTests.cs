@@ -55,6 +55,26 @@ public class ComparePointsTests
     }
 
     [Fact]
+    public void Editing_the_shown_point_s_bias_value_computes_it_again_at_the_new_value()
+    {
+        using var ui = new UiHarness(100, 30, device: "pair.toml");
+        ui.WaitIdle();
+        SelectOnBoard(ui, "coupler_low");
+        ui.Press(Key.Enter);
+        ui.WaitForScreen("At point coupler_low (qc_flux 0.75 mA)");
+        ui.Press(Key.Tab);
+        Assert.Equal("form", ui.Window.FocusedPanel);
+        ui.Press(Key.Enter);
+        Assert.True(ui.Window.Prompt.IsOpen, ui.Screen);
+        ui.Replace("0.7 mA");
+        ui.Press(Key.Enter);
+        Assert.Equal(0.7e-3, ui.Session.Document!.Points.Single(p => p.Name == "coupler_low").BiasValues["qc_flux"], 15);
+        ui.WaitForScreen("At point coupler_low (qc_flux 0.7 mA)");
+        var atPoint = PointComputer.Compute(ui.Session.Document!.AtPoint("coupler_low"), checkConvergence: false, CancellationToken.None);
+        Assert.Contains(LevelDesign.Ui.Text.Numbers.GHz(atPoint.Spectrum.Energies[atPoint.Spectrum.DressedIndexOf([0, 0, 1, 0, 0])]), ui.Screen);
+    }
+
+    [Fact]
     public void P_saves_the_sweep_cursor_as_an_operating_point_in_the_file_s_unit_and_undo_removes_it()
     {
         using var ui = new UiHarness(100, 30, device: "pair.toml");
@@ -66,11 +86,18 @@ public class ComparePointsTests
         ui.Window.ShowPage(Page.Spectrum);
         ui.Window.Spectrum.SetCursor(10);
         double bias = ui.Window.LastSweep!.Points[10].AxisValues[0];
+        var (sweepBefore, snapshotBefore) = (ui.Window.LastSweep, ui.Window.LastSnapshot);
         ui.Press(new Key('p'));
         Assert.True(ui.Window.Prompt.IsOpen, ui.Screen);
         ui.Replace("gate");
         ui.Press(Key.Enter);
         Assert.False(ui.Window.Prompt.IsOpen, ui.Screen);
+        // a new point leaves the device as it was: neither the sweep nor the file's point is computed again
+        Thread.Sleep(1000);
+        _ = ui.Screen;
+        Assert.False(ui.Window.IsComputing);
+        Assert.Same(sweepBefore, ui.Window.LastSweep);
+        Assert.Same(snapshotBefore, ui.Window.LastSnapshot);
         var point = ui.Session.Document!.Points.Single(p => p.Name == "gate");
         Assert.Equal(bias, point.BiasValues["qc_flux"], 12);
         Assert.Contains("[points.gate]", ui.Session.Document!.Text);

@@ -322,4 +322,25 @@ public sealed class StructuralEditTests : IDisposable
         Assert.Contains(expected, error!.Field + " " + error.Message);
         Assert.Same(document, result);
     }
+
+    [Fact]
+    public void The_model_text_ignores_points_sweeps_and_the_spread_study_but_not_a_value_of_the_device()
+    {
+        var document = Load("pair.toml");
+        var withPoint = document.WithPoint("gate", [("qc_flux", "0.7 mA")], out var error);
+        Assert.Null(error);
+        Assert.Equal(document.ModelText(), withPoint.ModelText());
+        Assert.DoesNotContain("[points.", document.ModelText());
+        Assert.DoesNotContain("[sweeps.", document.ModelText());
+        Assert.Contains("[biases.qc_flux]", document.ModelText());
+        var moved = document.WithValue("points.idle.qc_flux", "0.2 mA", out error);
+        Assert.Null(error);
+        Assert.Equal(document.ModelText(), moved.ModelText());
+        var edited = document.WithValue("elements.qa.ec", "220 MHz", out error);
+        Assert.Null(error);
+        Assert.NotEqual(document.ModelText(), edited.ModelText());
+        var biased = document.WithValue("biases.qc_flux.value", "0.2 mA", out error);
+        Assert.Null(error);
+        Assert.NotEqual(document.ModelText(), biased.ModelText());
+    }
 }

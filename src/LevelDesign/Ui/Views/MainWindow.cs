@@ -461,15 +461,32 @@ public sealed partial class MainWindow : Window
             Heading: n.Kind is BoardNodeKind.Group or BoardNodeKind.Device)).ToList(), select);
         ShowFields();
         if (_pageShown == Page.Errors) ShowPage(Page.States);
-        // Saving changes only the unsaved mark: the same document needs no new computation.
-        if (!ReferenceEquals(document, _computedDocument))
+        // Saving changes only the unsaved mark, and an operating point, sweep or spread table leaves the device as it
+        // was: neither needs a new computation (a map's sweep can take tens of seconds).
+        if (!ReferenceEquals(document, _computedDocument)
+            && (_computedDocument is null || document.ModelText() != _computedDocument.ModelText()))
         {
             _computedDocument = document;
             StartPointCompute(document.Device);
             if (_lastSweep is not null) ScheduleResweep();
         }
+        else
+        {
+            var before = _computedDocument;
+            _computedDocument = document;
+            // a named point whose values were edited is computed again at its new values; a removed one is left
+            if (_pointView is var (name, _) && !SamePoint(before, document, name))
+            {
+                _pointView = null;
+                if (document.Points.Any(p => p.Name == name)) ShowNamedPoint(name); else RefreshPage();
+            }
+        }
         UpdateStatus();
     }
+
+    private static bool SamePoint(DeviceDocument? a, DeviceDocument b, string name) =>
+        a?.Points.FirstOrDefault(p => p.Name == name)?.BiasValues is { } x && b.Points.FirstOrDefault(p => p.Name == name)?.BiasValues is { } y
+        && x.Count == y.Count && x.All(v => y.TryGetValue(v.Key, out double w) && w == v.Value);
 
     private void ShowFields()
     {
