@@ -2,18 +2,9 @@ using LevelDesign.Core.Analysis;
 
 namespace LevelDesign.Commands;
 
-/// <summary>The options of <c>leveldesign coherence</c>, as typed.</summary>
-public sealed record CoherenceArguments : DeviceArguments
+/// <summary>The options of <c>leveldesign coherence</c>, as typed; with --vary or --sweep it tabulates along the sweep instead of one point.</summary>
+public sealed record CoherenceArguments : SweepAxesArguments
 {
-    /// <summary>--vary: axes to tabulate along instead of one point (two for a grid).</summary>
-    public string[]? Vary { get; init; }
-
-    /// <summary>--link: other biases or parameters moved with an axis.</summary>
-    public string[]? Links { get; init; }
-
-    /// <summary>--sweep: a sweep defined in the file to tabulate along.</summary>
-    public string? SweepName { get; init; }
-
     /// <summary>--json: the budget or the table as JSON.</summary>
     public bool Json { get; init; }
 

@@ -1,17 +1,8 @@
 namespace LevelDesign.Commands;
 
 /// <summary>The options of <c>leveldesign crossings</c>, as typed.</summary>
-public sealed record CrossingsArguments : DeviceArguments
+public sealed record CrossingsArguments : SweepAxesArguments
 {
-    /// <summary>--vary: the one axis BIAS=START:STOP:COUNT to search along.</summary>
-    public string[]? Vary { get; init; }
-
-    /// <summary>--link: other biases or parameters moved with the axis.</summary>
-    public string[]? Links { get; init; }
-
-    /// <summary>--sweep: a sweep defined in the file.</summary>
-    public string? SweepName { get; init; }
-
     /// <summary>--near: operating points (names or values of the swept bias) to rank by.</summary>
     public string[]? Near { get; init; }
 

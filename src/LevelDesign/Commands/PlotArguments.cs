@@ -1,17 +1,8 @@
 namespace LevelDesign.Commands;
 
 /// <summary>The options of <c>leveldesign plot</c>, as typed.</summary>
-public sealed record PlotArguments : DeviceArguments
+public sealed record PlotArguments : SweepAxesArguments
 {
-    /// <summary>--vary: the one axis BIAS=START:STOP:COUNT.</summary>
-    public string[]? Vary { get; init; }
-
-    /// <summary>--link: other biases or parameters moved with the axis.</summary>
-    public string[]? Links { get; init; }
-
-    /// <summary>--sweep: a sweep defined in the file.</summary>
-    public string? SweepName { get; init; }
-
     /// <summary>--out: the picture, PATH.svg or PATH.png.</summary>
     public string? Output { get; init; }
 

@@ -1,17 +1,8 @@
 namespace LevelDesign.Commands;
 
 /// <summary>The options of <c>leveldesign sweep</c>, as typed.</summary>
-public sealed record SweepArguments : DeviceArguments
+public sealed record SweepArguments : SweepAxesArguments
 {
-    /// <summary>--vary: the axes BIAS=START:STOP:COUNT (one, or two for a grid).</summary>
-    public string[]? Vary { get; init; }
-
-    /// <summary>--link: other biases or parameters moved with an axis.</summary>
-    public string[]? Links { get; init; }
-
-    /// <summary>--sweep: a sweep defined in the file.</summary>
-    public string? SweepName { get; init; }
-
     /// <summary>--levels: labelled dressed states reported at each point.</summary>
     public int? Levels { get; init; }
 
