@@ -30,32 +30,35 @@ public static class CoherenceCommand
         var command = new Command("coherence", "each qubit's coherence budget (Purcell, dielectric, inductive, flux and charge noise, thermal photons): T1, T_φ, T2 and what limits them, at a point or along a sweep")
             { file, at, point, vary, link, sweep, json, csv, output, allowLarge };
         foreach (var o in noise.All) command.Options.Add(o);
-        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(at), parse.GetValue(point), parse.GetValue(vary), parse.GetValue(link),
-            parse.GetValue(sweep), parse.GetValue(json), parse.GetValue(csv), parse.GetValue(output), parse.GetValue(allowLarge), file => noise.Read(parse, file)));
+        command.SetAction(parse => Run(new CoherenceArguments
+        {
+            Path = parse.GetValue(file)!, At = parse.GetValue(at), Point = parse.GetValue(point), Vary = parse.GetValue(vary),
+            Links = parse.GetValue(link), SweepName = parse.GetValue(sweep), Json = parse.GetValue(json), Csv = parse.GetValue(csv),
+            Output = parse.GetValue(output), AllowLarge = parse.GetValue(allowLarge), Inputs = fromFile => noise.Read(parse, fromFile),
+        }));
         return command;
     }
 
-    public static int Run(string path, string[]? at, string? point, string[]? vary, string[]? links, string? sweepName, bool json, bool csv,
-        string? output, bool allowLarge, Func<CoherenceInputs, CoherenceInputs> readInputs) => CommandGuard.Run(path, () =>
+    public static int Run(CoherenceArguments a) => CommandGuard.Run(a.Path, () =>
     {
-        CommandGuard.OneFormat(json, csv);
-        var document = CommandGuard.Load(path, allowLarge);
-        var inputs = readInputs(document.Coherence);
+        CommandGuard.OneFormat(a.Json, a.Csv);
+        var document = CommandGuard.Load(a.Path, a.AllowLarge);
+        var inputs = a.Inputs(document.Coherence);
         var solver = new DeviceSolver();
-        if (vary is not { Length: > 0 } && sweepName is null)
+        if (a.Vary is not { Length: > 0 } && a.SweepName is null)
         {
-            if (csv) throw new UsageException("--csv is for a sweep (give --vary or --sweep); one point prints a table or --json");
-            if (output is not null) throw new UsageException("--out is for a sweep (give --vary or --sweep)");
-            var device = DeviceInput.Resolve(document, point, at, out var applied);
+            if (a.Csv) throw new UsageException("--csv is for a sweep (give --vary or --sweep); one point prints a table or --json");
+            if (a.Output is not null) throw new UsageException("--out is for a sweep (give --vary or --sweep)");
+            var device = DeviceInput.Resolve(document, a.Point, a.At, out var applied);
             var spectrum = solver.Solve(device);
             var budgets = CoherenceEstimator.Estimate(solver, spectrum, inputs);
-            Console.Write(json
+            Console.Write(a.Json
                 ? JsonValues.Write(CoherenceReport.Json(device.Name, applied, budgets, inputs)) + Environment.NewLine
                 : CoherenceReport.Table(device.Name, budgets, inputs));
             return ExitCodes.Ok;
         }
 
-        var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 2);
+        var setup = SweepSetup.Create(document, a.Point, a.At, a.Vary, a.Links, a.SweepName, maxAxes: 2);
         // the budgets read matrix elements from every point's vectors
         var result = SweepExecution.Run(setup, LabelMode.ByCharacter, null, solver, keepVectors: true);
         // the budget needs extra solves per point (flux and charge derivatives); points are independent
@@ -80,10 +83,10 @@ public static class CoherenceCommand
         var kept = rows.Where(r => r.Item2 is not null).ToArray();
         if (!completed) Console.Error.WriteLine($"cancelled: keeping the {kept.Length} points whose budget was computed");
         var axes = setup.Axes.Select(a => a.Path).ToArray();
-        string text = json
+        string text = a.Json
             ? JsonValues.Write(CoherenceReport.SweepJson(document.Device.Name, axes, kept, inputs, completed)) + Environment.NewLine
             : CoherenceReport.Csv(axes, kept, inputs);
-        SweepCommand.Write(text, output, kept.Length);
+        SweepCommand.Write(text, a.Output, kept.Length);
         return completed ? ExitCodes.Ok : ExitCodes.Cancelled;
     });
 }

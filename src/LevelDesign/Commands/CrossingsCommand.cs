@@ -33,29 +33,32 @@ public static class CrossingsCommand
         var allowLarge = CommonOptions.AllowLarge();
         var command = new Command("crossings", "every avoided crossing along a 1-D sweep: labels, bias, gap (2g_eff), purity, distance to operating points")
             { file, vary, link, sweep, near, minGap, maxGap, at, point, levels, labels, json, csv, allowLarge };
-        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(vary), parse.GetValue(link), parse.GetValue(sweep), parse.GetValue(near),
-            parse.GetValue(minGap), parse.GetValue(maxGap), parse.GetValue(at), parse.GetValue(point), parse.GetValue(levels), parse.GetValue(labels),
-            parse.GetValue(json), parse.GetValue(csv), parse.GetValue(allowLarge)));
+        command.SetAction(parse => Run(new CrossingsArguments
+        {
+            Path = parse.GetValue(file)!, Vary = parse.GetValue(vary), Links = parse.GetValue(link), SweepName = parse.GetValue(sweep),
+            Near = parse.GetValue(near), MinGap = parse.GetValue(minGap), MaxGap = parse.GetValue(maxGap), At = parse.GetValue(at),
+            Point = parse.GetValue(point), Levels = parse.GetValue(levels), Labels = parse.GetValue(labels), Json = parse.GetValue(json),
+            Csv = parse.GetValue(csv), AllowLarge = parse.GetValue(allowLarge),
+        }));
         return command;
     }
 
-    public static int Run(string path, string[]? vary, string[]? links, string? sweepName, string[]? near, string? minGap, string? maxGap,
-        string[]? at, string? point, int? levels, string? labels, bool json, bool csv, bool allowLarge) => CommandGuard.Run(path, () =>
+    public static int Run(CrossingsArguments a) => CommandGuard.Run(a.Path, () =>
     {
-        CommandGuard.OneFormat(json, csv);
-        var mode = CommandGuard.LabelMode(labels);
-        double min = Gap("--min-gap", minGap, 0), max = Gap("--max-gap", maxGap, 0.5);
-        if (min > max) throw new UsageException($"--min-gap {minGap} is above --max-gap {maxGap ?? "500MHz"}");
-        var document = CommandGuard.Load(path, allowLarge);
-        var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 1);
+        CommandGuard.OneFormat(a.Json, a.Csv);
+        var mode = CommandGuard.LabelMode(a.Labels);
+        double min = Gap("--min-gap", a.MinGap, 0), max = Gap("--max-gap", a.MaxGap, 0.5);
+        if (min > max) throw new UsageException($"--min-gap {a.MinGap} is above --max-gap {a.MaxGap ?? "500MHz"}");
+        var document = CommandGuard.Load(a.Path, a.AllowLarge);
+        var setup = SweepSetup.Create(document, a.Point, a.At, a.Vary, a.Links, a.SweepName, maxAxes: 1);
         var axis = setup.Axes[0];
         if (axis.Count < 3) throw new UsageException($"--vary: a crossing search needs at least 3 points (got {axis.Count})");
-        var points = OperatingPoints(setup, near);
-        var (result, crossings, _) = Find(setup, mode, levels, min, max, points.Select(p => p.Value).ToArray());
+        var points = OperatingPoints(setup, a.Near);
+        var (result, crossings, _) = Find(setup, mode, a.Levels, min, max, points.Select(p => p.Value).ToArray());
         if (result is null) return ExitCodes.Cancelled;
         var rows = CrossingReport.Rows(crossings, points);
-        Console.Write(json ? CrossingReport.Json(document, axis, rows, result.Completed)
-            : csv ? CrossingReport.Csv(document, axis, rows)
+        Console.Write(a.Json ? CrossingReport.Json(document, axis, rows, result.Completed)
+            : a.Csv ? CrossingReport.Csv(document, axis, rows)
             : CrossingReport.Table(document, axis, rows));
         return ExitCodes.Ok;
     });

@@ -16,19 +16,23 @@ public static class DescribeCommand
         var allowLarge = CommonOptions.AllowLarge();
         var command = new Command("describe", "the fully resolved model (energies in GHz after every conversion), enough to rebuild the Hamiltonian")
             { file, at, point, json, allowLarge };
-        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(at), parse.GetValue(point), parse.GetValue(json), parse.GetValue(allowLarge)));
+        command.SetAction(parse => Run(new DescribeArguments
+        {
+            Path = parse.GetValue(file)!, At = parse.GetValue(at), Point = parse.GetValue(point), Json = parse.GetValue(json),
+            AllowLarge = parse.GetValue(allowLarge),
+        }));
         return command;
     }
 
-    public static int Run(string path, string[]? at, string? point, bool json, bool allowLarge) => CommandGuard.Run(path, () =>
+    public static int Run(DescribeArguments a) => CommandGuard.Run(a.Path, () =>
     {
-        var document = DeviceInput.Load(path, allowLarge);
-        var device = DeviceInput.Resolve(document, point, at, out var applied);
+        var document = DeviceInput.Load(a.Path, a.AllowLarge);
+        var device = DeviceInput.Resolve(document, a.Point, a.At, out var applied);
         var problem = new DeviceSolver().Prepare(device);
-        var warnings = DeviceWarnings.Print(path, device);
+        var warnings = DeviceWarnings.Print(a.Path, device);
         var model = DescribeFormatter.Describe(problem, applied);
         model["warnings"] = new System.Text.Json.Nodes.JsonArray(warnings.Select(w => (System.Text.Json.Nodes.JsonNode?)w).ToArray());
-        if (json) Console.WriteLine(JsonValues.Write(model));
+        if (a.Json) Console.WriteLine(JsonValues.Write(model));
         else Console.Write(DescribeTable.Format(model));
         return ExitCodes.Ok;
     });

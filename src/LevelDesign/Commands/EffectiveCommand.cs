@@ -22,22 +22,25 @@ public static class EffectiveCommand
         var allowLarge = CommonOptions.AllowLarge();
         var command = new Command("effective", "the effective two-qubit Hamiltonian (J_eff, ZZ, Z terms) of coupled qubit pairs at one bias point")
             { file, pair, purity, at, point, json, allowLarge };
-        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(pair), parse.GetValue(purity), parse.GetValue(at), parse.GetValue(point),
-            parse.GetValue(json), parse.GetValue(allowLarge)));
+        command.SetAction(parse => Run(new EffectiveArguments
+        {
+            Path = parse.GetValue(file)!, Pairs = parse.GetValue(pair), Purity = parse.GetValue(purity), At = parse.GetValue(at),
+            Point = parse.GetValue(point), Json = parse.GetValue(json), AllowLarge = parse.GetValue(allowLarge),
+        }));
         return command;
     }
 
-    public static int Run(string path, string[]? pairs, double? purity, string[]? at, string? point, bool json, bool allowLarge) => CommandGuard.Run(path, () =>
+    public static int Run(EffectiveArguments a) => CommandGuard.Run(a.Path, () =>
     {
-        double threshold = purity ?? BlockDiagonalisation.DefaultThreshold;
+        double threshold = a.Purity ?? BlockDiagonalisation.DefaultThreshold;
         if (!(threshold > 0 && threshold <= 1)) throw new UsageException($"--purity {threshold}: give a weight in (0, 1], e.g. 0.9");
-        var document = CommandGuard.Load(path, allowLarge);
-        var device = DeviceInput.Resolve(document, point, at, out var applied);
-        var chosen = pairs is { Length: > 0 } ? pairs.Select(p => Pair(device, p)).ToArray() : BlockDiagonalisation.CoupledPairs(device);
-        if (chosen.Count == 0) throw new UsageException($"{path}: no two qubit-like elements are coupled; name a pair with --pair QA:QB");
+        var document = CommandGuard.Load(a.Path, a.AllowLarge);
+        var device = DeviceInput.Resolve(document, a.Point, a.At, out var applied);
+        var chosen = a.Pairs is { Length: > 0 } pairs ? pairs.Select(p => Pair(device, p)).ToArray() : BlockDiagonalisation.CoupledPairs(device);
+        if (chosen.Count == 0) throw new UsageException($"{a.Path}: no two qubit-like elements are coupled; name a pair with --pair QA:QB");
         var spectrum = new DeviceSolver().Solve(device);
         var results = chosen.Select(p => BlockDiagonalisation.Of(spectrum, p.A, p.B, threshold)).ToArray();
-        Console.Write(json
+        Console.Write(a.Json
             ? JsonValues.Write(EffectiveHamiltonianReport.Json(device.Name, applied, results)) + Environment.NewLine
             : EffectiveHamiltonianReport.Table(device.Name, results));
         if (results.Any(r => r.IllConditioned))

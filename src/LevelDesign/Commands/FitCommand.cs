@@ -29,34 +29,37 @@ public static class FitCommand
         var allowLarge = CommonOptions.AllowLarge();
         var command = new Command("fit", "fit element or coupler parameters to target quantities; report fitted values in the file's units; --write saves them")
             { file, param, target, write, at, point, levels, json, allowLarge };
-        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(param), parse.GetValue(target), parse.GetValue(write), parse.GetValue(at),
-            parse.GetValue(point), parse.GetValue(levels), parse.GetValue(json), parse.GetValue(allowLarge)));
+        command.SetAction(parse => Run(new FitArguments
+        {
+            Path = parse.GetValue(file)!, Parameters = parse.GetValue(param), Targets = parse.GetValue(target), Write = parse.GetValue(write),
+            At = parse.GetValue(at), Point = parse.GetValue(point), Levels = parse.GetValue(levels), Json = parse.GetValue(json),
+            AllowLarge = parse.GetValue(allowLarge),
+        }));
         return command;
     }
 
-    public static int Run(string path, string[]? parameters, string[]? targets, bool write, string[]? at, string? point, int? levels, bool json,
-        bool allowLarge) => CommandGuard.Run(path, () =>
+    public static int Run(FitArguments a) => CommandGuard.Run(a.Path, () =>
     {
-        if (parameters is not { Length: > 0 }) throw new UsageException("give at least one --param PATH[=LOW:HIGH], e.g. --param qa.ej_sum");
-        if (targets is not { Length: > 0 }) throw new UsageException("give at least one --target QUANTITY=VALUE, e.g. --target qa.f01=5.25GHz");
-        if (levels is < 1) throw new UsageException("--levels must be at least 1");
-        var document = CommandGuard.Load(path, allowLarge);
-        var device = DeviceInput.Resolve(document, point, at, out _);
+        if (a.Parameters is not { Length: > 0 } parameters) throw new UsageException("give at least one --param PATH[=LOW:HIGH], e.g. --param qa.ej_sum");
+        if (a.Targets is not { Length: > 0 } targets) throw new UsageException("give at least one --target QUANTITY=VALUE, e.g. --target qa.f01=5.25GHz");
+        if (a.Levels is < 1) throw new UsageException("--levels must be at least 1");
+        var document = CommandGuard.Load(a.Path, a.AllowLarge);
+        var device = DeviceInput.Resolve(document, a.Point, a.At, out _);
         var fitParameters = parameters.Select(p => Term("--param", () => FitTerms.Parameter(device, p))).ToArray();
         if (fitParameters.Select(p => p.Path).Distinct().Count() != fitParameters.Length) throw new UsageException("a --param is given twice");
         var fields = fitParameters.Select(p => FitField.Of(document, p.Path)).ToArray();
-        if (write && fields.FirstOrDefault(f => f.Refusal is not null) is FitField refused)
+        if (a.Write && fields.FirstOrDefault(f => f.Refusal is not null) is FitField refused)
             throw new UsageException($"--write refused for {refused.DevicePath}: {refused.Refusal}");
         // a file that cannot be saved (read-only, unwritable folder) is said before the fit runs
-        if (write && AtomicFile.Problem(path) is string problem) throw new UsageException($"--write: {problem}");
+        if (a.Write && AtomicFile.Problem(a.Path) is string problem) throw new UsageException($"--write: {problem}");
 
         var solver = new DeviceSolver();
-        var available = DerivedQuantities.From(solver.Solve(device, levels)).Named().Keys.ToArray();
+        var available = DerivedQuantities.From(solver.Solve(device, a.Levels)).Named().Keys.ToArray();
         var fitTargets = targets.Select(t => Term("--target", () => FitTerms.Target(document, t, available))).ToArray();
-        var result = SweepExecution.WithCancel(token => Task.Run(() => ParameterFit.Fit(device, fitParameters, fitTargets, solver, levels, cancellation: token), token));
+        var result = SweepExecution.WithCancel(token => Task.Run(() => ParameterFit.Fit(device, fitParameters, fitTargets, solver, a.Levels, cancellation: token), token));
 
-        Console.Write(json ? FitReport.Json(document, fitParameters, fields, result) : FitReport.Table(document, fitParameters, fields, result));
-        if (write)
+        Console.Write(a.Json ? FitReport.Json(document, fitParameters, fields, result) : FitReport.Table(document, fitParameters, fields, result));
+        if (a.Write)
         {
             var edited = document;
             foreach (var f in fields)

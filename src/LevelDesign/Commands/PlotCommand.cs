@@ -33,38 +33,41 @@ public static class PlotCommand
         var allowLarge = CommonOptions.AllowLarge();
         var command = new Command("plot", "picture (SVG or PNG) of the labelled spectrum along a sweep, crossings marked with their gaps")
             { file, vary, link, sweep, output, manifold, width, height, at, point, levels, labels, quantity, allowLarge };
-        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(vary), parse.GetValue(link), parse.GetValue(sweep), parse.GetValue(output),
-            parse.GetValue(manifold), parse.GetValue(width), parse.GetValue(height), parse.GetValue(at), parse.GetValue(point), parse.GetValue(levels),
-            parse.GetValue(labels), parse.GetValue(allowLarge), parse.GetValue(quantity)));
+        command.SetAction(parse => Run(new PlotArguments
+        {
+            Path = parse.GetValue(file)!, Vary = parse.GetValue(vary), Links = parse.GetValue(link), SweepName = parse.GetValue(sweep),
+            Output = parse.GetValue(output), Manifold = parse.GetValue(manifold), Width = parse.GetValue(width), Height = parse.GetValue(height),
+            At = parse.GetValue(at), Point = parse.GetValue(point), Levels = parse.GetValue(levels), Labels = parse.GetValue(labels),
+            AllowLarge = parse.GetValue(allowLarge), Quantities = parse.GetValue(quantity),
+        }));
         return command;
     }
 
-    public static int Run(string path, string[]? vary, string[]? links, string? sweepName, string? output, string? manifoldText, int? width, int? height,
-        string[]? at, string? point, int? levels, string? labels, bool allowLarge, string[]? quantities = null) => CommandGuard.Run(path, () =>
+    public static int Run(PlotArguments a) => CommandGuard.Run(a.Path, () =>
     {
-        if (output is null) throw new UsageException("give --out PATH.svg or --out PATH.png");
+        string output = a.Output ?? throw new UsageException("give --out PATH.svg or --out PATH.png");
         string extension = Path.GetExtension(output).ToLowerInvariant();
         if (extension is not (".svg" or ".png")) throw new UsageException($"--out {output}: the name must end in .svg or .png");
-        int w = width ?? 1200, h = height ?? 800;
+        int w = a.Width ?? 1200, h = a.Height ?? 800;
         if (w is < 200 or > 10000 || h is < 150 or > 10000) throw new UsageException("--width must be 200–10000 and --height 150–10000 pixels");
-        int? manifold = manifoldText switch
+        int? manifold = a.Manifold switch
         {
             null or "all" => null,
             "1" => 1,
             "2" => 2,
-            _ => throw new UsageException($"--manifold {manifoldText}: choose 1, 2 or all"),
+            _ => throw new UsageException($"--manifold {a.Manifold}: choose 1, 2 or all"),
         };
-        var mode = CommandGuard.LabelMode(labels);
-        OutputFile.Check(output, path);
-        var document = CommandGuard.Load(path, allowLarge);
-        var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 1);
+        var mode = CommandGuard.LabelMode(a.Labels);
+        OutputFile.Check(output, a.Path);
+        var document = CommandGuard.Load(a.Path, a.AllowLarge);
+        var setup = SweepSetup.Create(document, a.Point, a.At, a.Vary, a.Links, a.SweepName, maxAxes: 1);
         if (setup.Axes[0].Count < 3) throw new UsageException($"--vary: a plot needs at least 3 points (got {setup.Axes[0].Count})");
-        if (quantities is { Length: > 0 })
-            return DrawQuantities(document, setup, mode, levels, quantities, output, extension, w, h);
-        var (result, crossings, judged) = CrossingsCommand.Find(setup, mode, levels, 0, 0.5, []);
+        if (a.Quantities is { Length: > 0 } quantities)
+            return DrawQuantities(document, setup, mode, a.Levels, quantities, output, extension, w, h);
+        var (result, crossings, judged) = CrossingsCommand.Find(setup, mode, a.Levels, 0, 0.5, []);
         if (result is null) return ExitCodes.Cancelled;
         // all judged labels when one manifold is picked (its branches may lie above the lowest 12), else the lowest 12
-        int shown = levels ?? (manifold is null ? Math.Min(judged, 12) : judged);
+        int shown = a.Levels ?? (manifold is null ? Math.Min(judged, 12) : judged);
         var plot = SpectrumPlot.Build(result, crossings, shown, document: document, manifold: manifold is int wanted ? e => e == wanted : null,
             title: $"{document.Device.Name}: spectrum along {setup.Axes[0].Path}, labels by {(mode == LabelMode.ByCharacter ? "character" : "order")}"
                    + (manifold is int m ? $", {m}-excitation manifold" : "") + "; lines coloured by character, blended where states mix");

@@ -77,14 +77,13 @@ public static class SlurmJobScripts
     }
 
     /// <summary>The scripts of a spread study: each task a block of samples; the merge writes the study's files into the folder.</summary>
-    public static void ForStudy(DeviceDocument document, SpreadDefinition definition, string folder, int tasks, int cpus,
-        int? samples, int? seed, string[]? rules, bool allowLarge)
+    public static void ForStudy(DeviceDocument document, SpreadDefinition definition, string folder, int tasks, int cpus, SpreadArguments options)
     {
         var extra = new StringBuilder();
-        if (samples is int n) extra.Append(CultureInfo.InvariantCulture, $" --samples {n}");
-        if (seed is int s) extra.Append(CultureInfo.InvariantCulture, $" --seed {s}");
-        foreach (string r in rules ?? []) extra.Append(" --rule ").Append(Quote(r));
-        if (allowLarge) extra.Append(" --allow-large");
+        if (options.Samples is int n) extra.Append(CultureInfo.InvariantCulture, $" --samples {n}");
+        if (options.Seed is int s) extra.Append(CultureInfo.InvariantCulture, $" --seed {s}");
+        foreach (string r in options.Rules ?? []) extra.Append(" --rule ").Append(Quote(r));
+        if (options.AllowLarge) extra.Append(" --allow-large");
         long perTask = (definition.Samples + tasks - 1) / tasks;
         Write(document, folder, "spread", extra.ToString(), tasks, cpus, MemoryMegabytes(document, definition, cpus), MergeMegabytes(definition),
             i => $"shard-{i}-of-{tasks}.json", Path.GetFullPath(folder),

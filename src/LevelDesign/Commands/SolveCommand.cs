@@ -29,30 +29,33 @@ public static class SolveCommand
         var purity = CommonOptions.Purity("list roots whose states are less pure than this apart, as inside a hybridized region");
         var command = new Command("solve", "every bias in a range where a quantity meets a target (e.g. the coupler flux of zero ZZ)")
             { file, vary, target, link, at, point, levels, json, allowLarge, purity };
-        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(vary), parse.GetValue(target), parse.GetValue(link), parse.GetValue(at),
-            parse.GetValue(point), parse.GetValue(levels), parse.GetValue(json), parse.GetValue(allowLarge), parse.GetValue(purity)));
+        command.SetAction(parse => Run(new SolveArguments
+        {
+            Path = parse.GetValue(file)!, Vary = parse.GetValue(vary), Target = parse.GetValue(target), Links = parse.GetValue(link),
+            At = parse.GetValue(at), Point = parse.GetValue(point), Levels = parse.GetValue(levels), Json = parse.GetValue(json),
+            AllowLarge = parse.GetValue(allowLarge), Purity = parse.GetValue(purity),
+        }));
         return command;
     }
 
-    public static int Run(string path, string[]? vary, string? target, string[]? links, string[]? at, string? point, int? levels, bool json,
-        bool allowLarge, double? purity = null) => CommandGuard.Run(path, () =>
+    public static int Run(SolveArguments a) => CommandGuard.Run(a.Path, () =>
     {
-        if (vary is not { Length: > 0 }) throw new UsageException("give the range: --vary BIAS=START:STOP[:SCAN]");
-        if (target is null) throw new UsageException("give --target QUANTITY=VALUE, e.g. zz:qa:qb=0");
-        var document = CommandGuard.Load(path, allowLarge);
-        double threshold = CommonOptions.PurityThreshold(purity, document);
-        var setup = SweepSetup.Create(document, point, at, vary, links, null, maxAxes: 1, defaultCount: DefaultScan);
+        if (a.Vary is not { Length: > 0 }) throw new UsageException("give the range: --vary BIAS=START:STOP[:SCAN]");
+        string target = a.Target ?? throw new UsageException("give --target QUANTITY=VALUE, e.g. zz:qa:qb=0");
+        var document = CommandGuard.Load(a.Path, a.AllowLarge);
+        double threshold = CommonOptions.PurityThreshold(a.Purity, document);
+        var setup = SweepSetup.Create(document, a.Point, a.At, a.Vary, a.Links, null, maxAxes: 1, defaultCount: DefaultScan);
         var axis = setup.Axes[0];
         if (axis.Count < 2) throw new UsageException($"--vary: a root search needs at least 2 scan points (got {axis.Count})");
         var solver = new DeviceSolver();
-        var (planLevels, _) = SweepExecution.Levels(setup, levels, solver);
+        var (planLevels, _) = SweepExecution.Levels(setup, a.Levels, solver);
         var available = DerivedQuantities.From(solver.Solve(setup.Resolve([axis.Start]), planLevels)).Named().Keys.ToArray();
         var (quantity, value) = FitCommand.Term("--target", () => TargetTerm.Parse(target, available));
         var options = new SweepOptions { Solver = solver };
         var found = SweepExecution.WithCancel(token =>
             TargetSolver.SearchAsync(setup.Resolve, axis, quantity, value, options, planLevels, ToleranceFor(axis), token, refineBelowPurity: threshold));
         var roots = found.Roots;
-        Console.Write(json ? TargetReport.Json(document, axis, quantity, value, roots, threshold) : TargetReport.Table(document, axis, quantity, value, roots, threshold));
+        Console.Write(a.Json ? TargetReport.Json(document, axis, quantity, value, roots, threshold) : TargetReport.Table(document, axis, quantity, value, roots, threshold));
         if (roots.Any(r => r.Refined && r.IsHybridized(threshold)))
             Console.Error.WriteLine(string.Create(System.Globalization.CultureInfo.InvariantCulture, $"warning: {roots.Count(r => r.Refined && r.IsHybridized(threshold))} root(s) lie inside a hybridized region (purity below {threshold:G3})"));
         foreach (var r in roots.Where(r => r.Refined))

@@ -21,32 +21,35 @@ public static class SpectrumCommand
         var states = CommonOptions.States();
         var command = new Command("spectrum", "dressed states (label, energy, purity, components) and derived quantities at one bias point")
             { file, at, point, levels, states, json, csv, allowLarge, purity };
-        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(at), parse.GetValue(point), parse.GetValue(levels),
-            parse.GetValue(json), parse.GetValue(csv), parse.GetValue(allowLarge), parse.GetValue(purity), parse.GetValue(states)));
+        command.SetAction(parse => Run(new SpectrumArguments
+        {
+            Path = parse.GetValue(file)!, At = parse.GetValue(at), Point = parse.GetValue(point), Levels = parse.GetValue(levels),
+            Json = parse.GetValue(json), Csv = parse.GetValue(csv), AllowLarge = parse.GetValue(allowLarge), Purity = parse.GetValue(purity),
+            States = parse.GetValue(states),
+        }));
         return command;
     }
 
-    public static int Run(string path, string[]? at, string? point, int? levels, bool json, bool csv, bool allowLarge, double? purity = null,
-        string? states = null) => CommandGuard.Run(path, () =>
+    public static int Run(SpectrumArguments a) => CommandGuard.Run(a.Path, () =>
     {
-        if (purity is double p && !(p > 0 && p <= 1)) throw new UsageException($"--purity {p}: give a purity in (0, 1], e.g. 0.9");
-        CommandGuard.OneFormat(json, csv);
-        if (levels is < 1) throw new UsageException("--levels must be at least 1");
+        if (a.Purity is double p && !(p > 0 && p <= 1)) throw new UsageException($"--purity {p}: give a purity in (0, 1], e.g. 0.9");
+        CommandGuard.OneFormat(a.Json, a.Csv);
+        if (a.Levels is < 1) throw new UsageException("--levels must be at least 1");
         var selection = StateSelection.Auto;
-        if (states is not null && !StateSelection.TryParse(states, out selection, out string stateError)) throw new UsageException($"--states {stateError}");
-        var document = DeviceInput.Load(path, allowLarge);
-        var device = DeviceInput.Resolve(document, point, at, out var applied);
+        if (a.States is not null && !StateSelection.TryParse(a.States, out selection, out string stateError)) throw new UsageException($"--states {stateError}");
+        var document = DeviceInput.Load(a.Path, a.AllowLarge);
+        var device = DeviceInput.Resolve(document, a.Point, a.At, out var applied);
         if (selection.UnknownElement(device) is string unknown) throw new UsageException(unknown);
-        var (spectrum, shown) = Compute(new DeviceSolver { Selection = selection }, device, levels);
-        var warnings = DeviceWarnings.Print(path, device);
-        double threshold = purity ?? document.PurityThreshold;
-        if (json)
+        var (spectrum, shown) = Compute(new DeviceSolver { Selection = selection }, device, a.Levels);
+        var warnings = DeviceWarnings.Print(a.Path, device);
+        double threshold = a.Purity ?? document.PurityThreshold;
+        if (a.Json)
         {
             var report = SpectrumFormatter.Report(device.Name, spectrum, shown, applied, threshold);
             report["warnings"] = new System.Text.Json.Nodes.JsonArray(warnings.Select(w => (System.Text.Json.Nodes.JsonNode?)w).ToArray());
             Console.WriteLine(JsonValues.Write(report));
         }
-        else if (csv) Console.Write(SpectrumFormatter.StatesCsv(spectrum, shown));
+        else if (a.Csv) Console.Write(SpectrumFormatter.StatesCsv(spectrum, shown));
         else Console.Write(SpectrumFormatter.Table(device.Name, spectrum, shown, threshold));
         return ExitCodes.Ok;
     });

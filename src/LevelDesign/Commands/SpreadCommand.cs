@@ -30,39 +30,42 @@ public static class SpreadCommand
         var allowLarge = CommonOptions.AllowLarge();
         var command = new Command("spread", "fabrication spread: the fraction of drawn chips that pass the file's rules, with a 95% Wilson interval; progress on stderr, Ctrl-C keeps finished samples")
             { file, samples, seed, rule, shard, output, json, threads, slurm, allowLarge };
-        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(samples), parse.GetValue(seed), parse.GetValue(rule), parse.GetValue(shard),
-            parse.GetValue(output), parse.GetValue(json), parse.GetValue(threads), parse.GetValue(slurm), parse.GetValue(allowLarge)));
+        command.SetAction(parse => Run(new SpreadArguments
+        {
+            Path = parse.GetValue(file)!, Samples = parse.GetValue(samples), Seed = parse.GetValue(seed), Rules = parse.GetValue(rule),
+            Shard = parse.GetValue(shard), Output = parse.GetValue(output), Json = parse.GetValue(json), Threads = parse.GetValue(threads),
+            Slurm = parse.GetValue(slurm), AllowLarge = parse.GetValue(allowLarge),
+        }));
         return command;
     }
 
-    public static int Run(string path, int? samples, int? seed, string[]? rules, string? shardText, string? output, bool json, int? threads,
-        int? slurmTasks, bool allowLarge) => CommandGuard.Run(path, () =>
+    public static int Run(SpreadArguments a) => CommandGuard.Run(a.Path, () =>
     {
-        if (samples is < 1) throw new UsageException("--samples must be at least 1");
-        if (seed is < 0) throw new UsageException("--seed must be 0 or more");
-        if (threads is < 1) throw new UsageException("--threads must be at least 1");
-        var document = CommandGuard.Load(path, allowLarge);
-        var definition = Definition(document, samples, seed, rules);
-        if (slurmTasks is int tasks)
+        if (a.Samples is < 1) throw new UsageException("--samples must be at least 1");
+        if (a.Seed is < 0) throw new UsageException("--seed must be 0 or more");
+        if (a.Threads is < 1) throw new UsageException("--threads must be at least 1");
+        var document = CommandGuard.Load(a.Path, a.AllowLarge);
+        var definition = Definition(document, a.Samples, a.Seed, a.Rules);
+        if (a.Slurm is int tasks)
         {
-            if (output is null) throw new UsageException("--slurm needs --out DIR: the folder for the job scripts, the shards and the merged study");
-            if (shardText is not null) throw new UsageException("--slurm writes the scripts that run every shard; leave out --shard");
+            if (a.Output is null) throw new UsageException("--slurm needs --out DIR: the folder for the job scripts, the shards and the merged study");
+            if (a.Shard is not null) throw new UsageException("--slurm writes the scripts that run every shard; leave out --shard");
             if (tasks < 1 || tasks > definition.Samples) throw new UsageException($"--slurm {tasks}: give 1 to {definition.Samples} tasks (one shard each)");
-            SpreadStudyFiles.Prepare(output);
-            SlurmJobScripts.ForStudy(document, definition, output, tasks, threads ?? 2, samples, seed, rules, allowLarge);
+            SpreadStudyFiles.Prepare(a.Output);
+            SlurmJobScripts.ForStudy(document, definition, a.Output, tasks, a.Threads ?? 2, a);
             return ExitCodes.Ok;
         }
         ShardRange range = ShardRange.Whole(definition.Samples);
-        if (shardText is not null)
+        if (a.Shard is not null)
         {
-            range = ShardRange.Parse(shardText, definition.Samples, out string? error) ?? throw new UsageException($"--shard {error}");
-            if (output is null) throw new UsageException("--shard needs --out DIR: each shard writes DIR/shard-I-of-N.json for 'leveldesign merge'");
+            range = ShardRange.Parse(a.Shard, definition.Samples, out string? error) ?? throw new UsageException($"--shard {error}");
+            if (a.Output is null) throw new UsageException("--shard needs --out DIR: each shard writes DIR/shard-I-of-N.json for 'leveldesign merge'");
         }
-        if (output is not null) SpreadStudyFiles.Prepare(output);
+        if (a.Output is not null) SpreadStudyFiles.Prepare(a.Output);
 
         var nominal = Nominal(document, definition);
         var header = SpreadStudyFiles.Header(document, definition, nominal);
-        int parallelism = threads ?? EnvironmentThreads() ?? Environment.ProcessorCount;
+        int parallelism = a.Threads ?? EnvironmentThreads() ?? Environment.ProcessorCount;
         var started = DateTimeOffset.UtcNow;
         var clock = Stopwatch.StartNew();
         var progress = new ProgressBar((int)range.Size);
@@ -70,13 +73,13 @@ public static class SpreadCommand
         double elapsed = clock.Elapsed.TotalSeconds;
         if (!run.Completed) Console.Error.WriteLine($"cancelled: keeping the {run.Outcomes.Count} of {range.Size} samples finished");
         Console.Error.WriteLine(FormattableString.Invariant($"{run.Outcomes.Count} samples in {elapsed:0.0} s on {parallelism} thread(s): {run.Outcomes.Count / Math.Max(elapsed, 1e-9):0.00} samples/s"));
-        if (shardText is not null)
+        if (a.Shard is not null)
         {
-            SpreadStudyFiles.WriteShard(output!, header, run, elapsed, started);
+            SpreadStudyFiles.WriteShard(a.Output!, header, run, elapsed, started);
             return run.Completed ? ExitCodes.Ok : ExitCodes.Cancelled;
         }
-        if (output is not null) SpreadStudyFiles.WriteStudy(output, header, definition, run.Outcomes, run.Completed, elapsed, started, document.Device.Name);
-        Print(document.Device.Name, definition, run.Outcomes, nominal, run.Completed, json);
+        if (a.Output is not null) SpreadStudyFiles.WriteStudy(a.Output, header, definition, run.Outcomes, run.Completed, elapsed, started, document.Device.Name);
+        Print(document.Device.Name, definition, run.Outcomes, nominal, run.Completed, a.Json);
         return run.Completed ? ExitCodes.Ok : ExitCodes.Cancelled;
     });
 

@@ -47,44 +47,43 @@ public static class SweepCommand
         var slurm = new Option<int?>("--slurm") { Description = "TASKS: write a Slurm job array for this sweep or grid in --out DIR (TASKS shards of 2 CPUs and a dependent merge into DIR/sweep.json or .csv) instead of computing" };
         var command = new Command("sweep", "the labelled spectrum at every point of a bias sweep (parallel); progress on stderr, Ctrl-C keeps finished points")
             { file, vary, link, sweep, at, point, levels, states, labels, purity, json, csv, output, allowLarge, shard, slurm };
-        command.SetAction(parse => Run(parse.GetValue(file)!, parse.GetValue(vary), parse.GetValue(link), parse.GetValue(sweep), parse.GetValue(at),
-            parse.GetValue(point), parse.GetValue(levels), parse.GetValue(labels), parse.GetValue(purity), parse.GetValue(json), parse.GetValue(csv),
-            parse.GetValue(output), parse.GetValue(allowLarge), parse.GetValue(states), parse.GetValue(shard), parse.GetValue(slurm)));
+        command.SetAction(parse => Run(new SweepArguments
+        {
+            Path = parse.GetValue(file)!, Vary = parse.GetValue(vary), Links = parse.GetValue(link), SweepName = parse.GetValue(sweep),
+            At = parse.GetValue(at), Point = parse.GetValue(point), Levels = parse.GetValue(levels), States = parse.GetValue(states),
+            Labels = parse.GetValue(labels), Purity = parse.GetValue(purity), Json = parse.GetValue(json), Csv = parse.GetValue(csv),
+            Output = parse.GetValue(output), AllowLarge = parse.GetValue(allowLarge), Shard = parse.GetValue(shard), Slurm = parse.GetValue(slurm),
+        }));
         return command;
     }
 
-    public static int Run(string path, string[]? vary, string[]? links, string? sweepName, string[]? at, string? point, int? levels,
-        string? labels, double? purity, bool json, bool csv, string? output, bool allowLarge, string? states = null, string? shard = null, int? slurm = null) => CommandGuard.Run(path, () =>
+    public static int Run(SweepArguments a) => CommandGuard.Run(a.Path, () =>
     {
         var selection = StateSelection.Auto;
-        if (states is not null && !StateSelection.TryParse(states, out selection, out string stateError)) throw new UsageException($"--states {stateError}");
-        CommandGuard.OneFormat(json, csv);
-        var mode = CommandGuard.LabelMode(labels);
-        if (purity is double p && !(p > 0 && p <= 1)) throw new UsageException($"--purity {p}: give a purity in (0, 1], e.g. 0.9");
-        if (slurm is not null && shard is not null) throw new UsageException("--slurm writes the scripts that run every shard; leave out --shard");
-        if (shard is null && slurm is null) OutputFile.Check(output, path);
-        else if (output is null) throw new UsageException($"{(shard is null ? "--slurm" : "--shard")} needs --out DIR: the folder for the shard files (sweep-shard-I-of-N.json) and the merged sweep");
-        var document = CommandGuard.Load(path, allowLarge);
+        if (a.States is not null && !StateSelection.TryParse(a.States, out selection, out string stateError)) throw new UsageException($"--states {stateError}");
+        CommandGuard.OneFormat(a.Json, a.Csv);
+        var mode = CommandGuard.LabelMode(a.Labels);
+        if (a.Purity is double p && !(p > 0 && p <= 1)) throw new UsageException($"--purity {p}: give a purity in (0, 1], e.g. 0.9");
+        if (a.Slurm is not null && a.Shard is not null) throw new UsageException("--slurm writes the scripts that run every shard; leave out --shard");
+        if (a.Shard is null && a.Slurm is null) OutputFile.Check(a.Output, a.Path);
+        else if (a.Output is null) throw new UsageException($"{(a.Shard is null ? "--slurm" : "--shard")} needs --out DIR: the folder for the shard files (sweep-shard-I-of-N.json) and the merged sweep");
+        var document = CommandGuard.Load(a.Path, a.AllowLarge);
         if (selection.UnknownElement(document.Device) is string unknown) throw new UsageException(unknown);
-        double threshold = CommonOptions.PurityThreshold(purity, document);
-        var setup = SweepSetup.Create(document, point, at, vary, links, sweepName, maxAxes: 2);
-        if (slurm is int tasks)
+        double threshold = CommonOptions.PurityThreshold(a.Purity, document);
+        var setup = SweepSetup.Create(document, a.Point, a.At, a.Vary, a.Links, a.SweepName, maxAxes: 2);
+        if (a.Slurm is int tasks)
         {
             var counts = SweepShards.Counts(setup);
             int units = SweepBlocks.ShardUnits(counts);
             if (tasks < 1 || tasks > units) throw new UsageException($"--slurm {tasks}: give 1 to {units} tasks (this sweep runs in {SweepBlocks.Describe(counts)})");
-            SpreadStudyFiles.Prepare(output!);
-            SlurmJobScripts.ForSweep(document, output!, tasks, 2, counts,
-                SweepShards.CommandLine(vary, links, sweepName, at, point, levels, labels, purity, states, allowLarge, csv), csv);
+            SpreadStudyFiles.Prepare(a.Output!);
+            SlurmJobScripts.ForSweep(document, a.Output!, tasks, 2, counts, SweepShards.CommandLine(a), a.Csv);
             return ExitCodes.Ok;
         }
         var solver = new DeviceSolver { Selection = selection };
-        var (planLevels, shown) = SweepExecution.Levels(setup, levels, solver);
-        if (shard is not null)
-        {
-            var arguments = SweepShards.Arguments(vary, links, sweepName, at, point, levels, labels, purity, states, allowLarge, csv);
-            return SweepShards.RunShard(document, setup, mode, planLevels, shown, threshold, solver, shard, arguments, output!);
-        }
+        var (planLevels, shown) = SweepExecution.Levels(setup, a.Levels, solver);
+        if (a.Shard is not null)
+            return SweepShards.RunShard(document, setup, mode, planLevels, shown, threshold, solver, a.Shard, SweepShards.Arguments(a), a.Output!);
         // a sweep runs in fixed blocks (a grid: each row as a 1-D sweep), so its numbers do not depend on the cores or
         // on a split into shards
         var blocks = SweepBlocks.All(SweepShards.Counts(setup));
@@ -96,7 +95,7 @@ public static class SweepCommand
         if (result.Failure is { } failed)
             Console.Error.WriteLine($"error: the point at {SweepFiles.FailedAt(document, result, failed)} failed: {TerminalText.Clean(failed.Error.Message)}; keeping the {result.Points.Count} of {total} points computed before the sweep stopped");
         else if (!result.Completed) Console.Error.WriteLine($"cancelled: keeping the {result.Points.Count} of {total} points computed");
-        Write(json ? SweepFiles.Json(document, result, table) : SweepFiles.Csv(document, result, table), output, result.Points.Count);
+        Write(a.Json ? SweepFiles.Json(document, result, table) : SweepFiles.Csv(document, result, table), a.Output, result.Points.Count);
         int flagged = table.Rows.Count(r => r.LowPurity), ambiguous = table.Rows.Count(r => r.Ambiguous);
         if (flagged > 0 || ambiguous > 0)
             Console.Error.WriteLine($"{flagged} point(s) with a tracked state below purity {table.PurityThreshold}, {ambiguous} with an ambiguous label (columns low_purity, ambiguous)");

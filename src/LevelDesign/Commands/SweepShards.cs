@@ -23,30 +23,28 @@ public static class SweepShards
     public static string FileName(ShardRange shard) => $"sweep-shard-{shard.Shard}-of-{shard.Count}.json";
 
     /// <summary>The arguments that shape a sweep's output, recorded so the merge can rebuild its setup and compare shards.</summary>
-    public static JsonObject Arguments(string[]? vary, string[]? links, string? sweepName, string[]? at, string? point, int? levels,
-        string? labels, double? purity, string? states, bool allowLarge, bool csv) => new()
+    public static JsonObject Arguments(SweepArguments a) => new()
     {
-        ["vary"] = Texts(vary), ["link"] = Texts(links), ["sweep"] = sweepName, ["at"] = Texts(at), ["point"] = point,
-        ["levels"] = levels, ["labels"] = labels, ["purity"] = purity, ["states"] = states, ["allow_large"] = allowLarge,
-        ["format"] = csv ? "csv" : "json",
+        ["vary"] = Texts(a.Vary), ["link"] = Texts(a.Links), ["sweep"] = a.SweepName, ["at"] = Texts(a.At), ["point"] = a.Point,
+        ["levels"] = a.Levels, ["labels"] = a.Labels, ["purity"] = a.Purity, ["states"] = a.States, ["allow_large"] = a.AllowLarge,
+        ["format"] = a.Csv ? "csv" : "json",
     };
 
     /// <summary>The same arguments as options for the command line of a shard task.</summary>
-    public static IReadOnlyList<string> CommandLine(string[]? vary, string[]? links, string? sweepName, string[]? at, string? point, int? levels,
-        string? labels, double? purity, string? states, bool allowLarge, bool csv)
+    public static IReadOnlyList<string> CommandLine(SweepArguments options)
     {
         var a = new List<string>();
-        foreach (string v in vary ?? []) a.AddRange(["--vary", v]);
-        foreach (string l in links ?? []) a.AddRange(["--link", l]);
-        if (sweepName is not null) a.AddRange(["--sweep", sweepName]);
-        foreach (string x in at ?? []) a.AddRange(["--at", x]);
-        if (point is not null) a.AddRange(["--point", point]);
-        if (levels is int n) a.AddRange(["--levels", n.ToString(System.Globalization.CultureInfo.InvariantCulture)]);
-        if (labels is not null) a.AddRange(["--labels", labels]);
-        if (purity is double p) a.AddRange(["--purity", p.ToString("R", System.Globalization.CultureInfo.InvariantCulture)]);
-        if (states is not null) a.AddRange(["--states", states]);
-        if (allowLarge) a.Add("--allow-large");
-        a.Add(csv ? "--csv" : "--json");
+        foreach (string v in options.Vary ?? []) a.AddRange(["--vary", v]);
+        foreach (string l in options.Links ?? []) a.AddRange(["--link", l]);
+        if (options.SweepName is not null) a.AddRange(["--sweep", options.SweepName]);
+        foreach (string x in options.At ?? []) a.AddRange(["--at", x]);
+        if (options.Point is not null) a.AddRange(["--point", options.Point]);
+        if (options.Levels is int n) a.AddRange(["--levels", n.ToString(System.Globalization.CultureInfo.InvariantCulture)]);
+        if (options.Labels is not null) a.AddRange(["--labels", options.Labels]);
+        if (options.Purity is double p) a.AddRange(["--purity", p.ToString("R", System.Globalization.CultureInfo.InvariantCulture)]);
+        if (options.States is not null) a.AddRange(["--states", options.States]);
+        if (options.AllowLarge) a.Add("--allow-large");
+        a.Add(options.Csv ? "--csv" : "--json");
         return a;
     }
 
