@@ -20,22 +20,16 @@ export NO_COLOR=1 TERM=xterm-256color
 
 fail=0
 capture() { tmux capture-pane -t "$SESSION" -p; }
+# Waits for text (grep -F), or with GREP=-P for a Perl regex (rows whose column widths follow the longest name).
 wait_for() { # text, seconds
   local i
   for ((i = 0; i < ${2:-20} * 5; i++)); do
-    if capture | grep -qF -- "$1"; then return 0; fi
+    if capture | grep -q "${GREP:--F}" -- "$1"; then return 0; fi
     sleep 0.2
   done
   echo "FAIL: '$1' did not appear; screen was:"; capture; fail=1; return 1
 }
-wait_for_re() { # Perl regex, seconds (for rows whose column widths follow the longest name)
-  local i
-  for ((i = 0; i < ${2:-20} * 5; i++)); do
-    if capture | grep -qP -- "$1"; then return 0; fi
-    sleep 0.2
-  done
-  echo "FAIL: /$1/ did not appear; screen was:"; capture; fail=1; return 1
-}
+wait_for_re() { GREP=-P wait_for "$@"; }
 has_braille() { capture | grep -qP '[\x{2801}-\x{28FF}]' || { echo "FAIL: no braille dots drawn"; capture; fail=1; }; }
 start() { # width height
   tmux kill-session -t "$SESSION" 2>/dev/null || true

@@ -24,7 +24,7 @@ public class MatrixPageTests
     /// <summary>The row of the table that starts with dressed index <paramref name="k"/>, split into its cells.</summary>
     private static string[] Row(string screen, int k, string name)
     {
-        string row = screen.Split('\n').Single(r => r.Contains($"║{k,2} {name} ", StringComparison.Ordinal) || r.Contains($"│{k,2} {name} ", StringComparison.Ordinal));
+        string row = screen.Split('\n').Single(r => r.Contains($"║ {k,2} {name} ", StringComparison.Ordinal) || r.Contains($"│ {k,2} {name} ", StringComparison.Ordinal));
         string inner = row[(row.IndexOf($"{k,2} {name} ", StringComparison.Ordinal) + $"{k,2} {name}".Length)..].TrimEnd().TrimEnd('║', '│').Trim();
         return inner.Split(' ', StringSplitOptions.RemoveEmptyEntries);
     }
@@ -96,6 +96,22 @@ public class MatrixPageTests
         ui.Press(Key.CursorRight);
         Assert.Equal(1, ui.Window.Spectrum.CursorIndex);
         Assert.Contains("(point 2/", ui.Screen);
+    }
+
+    [Fact]
+    public void Rows_of_hybridized_states_are_marked_as_on_the_states_page()
+    {
+        using var ui = new UiHarness(100, 30, device: "pair.toml");
+        ui.WaitIdle();
+        ui.Press(Key.End, Key.Enter);   // the operating point coupler_low, where qa and qc mix
+        ui.WaitForScreen("At point coupler_low");
+        ui.Window.ShowPage(Page.Matrix);
+        string screen = ui.Screen;
+        var atPoint = LevelDesign.Ui.Compute.PointComputer.Compute(ui.Session.Document!.AtPoint("coupler_low"), checkConvergence: false, CancellationToken.None).Spectrum;
+        int mixed = Enumerable.Range(0, 5).First(k => atPoint.Labels[k].Purity < ui.Session.Document!.PurityThreshold);
+        Assert.Contains($"!{mixed,2} {LevelDesign.Core.Presentation.StateNames.OfDressed(atPoint, mixed)} ", screen);
+        Assert.Contains(" 0 ground ", screen);   // a pure state is not marked
+        Assert.Contains("! a state below purity", screen.Replace("\n", ""));
     }
 
     [Fact]

@@ -28,13 +28,25 @@ public sealed partial class MainWindow
 
     private double Threshold => _session.Document?.PurityThreshold ?? Core.Analysis.Conventions.DefaultPurityThreshold;
 
+    /// <summary>The grid last laid out, kept while sweep, quantity and threshold stay (a cursor step only redraws).</summary>
+    private MapGrid? _mapGrid;
+    private (SweepResult Sweep, string Quantity, double Threshold)? _mapGridKey;
+
+    private MapGrid CurrentMapGrid(SweepResult sweep)
+    {
+        var key = (sweep, MapQuantity(sweep), Threshold);
+        if (_mapGrid is null || _mapGridKey is not { } k || !ReferenceEquals(k.Sweep, sweep) || k.Quantity != key.Item2 || k.Threshold != key.Threshold)
+            (_mapGrid, _mapGridKey) = (MapGrid.From(sweep, key.Item2, key.Threshold), key);
+        return _mapGrid;
+    }
+
     private IReadOnlyList<TextLine> MapPage(int width)
     {
         if (!IsMapSweep || _sweep is not { } sweep)
             return TextFit.Wrap("the map shows a two-axis sweep: F5 with two axes separated by ';', e.g. " +
                                 "qa_flux 0 0.5 31; qc_flux 0.15 mA 1 mA 31 (or a sweep of the file with a second axis)", width)
                 .Select(l => new TextLine(l)).ToList();
-        var grid = MapGrid.From(sweep, MapQuantity(sweep), Threshold);
+        var grid = CurrentMapGrid(sweep);
         var (x, y) = (grid.X, grid.Y);
         var unitX = ShownUnit.Of(_session.Document, x.Path);
         var unitY = ShownUnit.Of(_session.Document, y.Path);
@@ -50,7 +62,7 @@ public sealed partial class MainWindow
         if (!IsMapSweep || _sweep is not { } sweep) return false;
         var (x, y) = (sweep.Plan.Axes[0], sweep.Plan.Axes[1]);
         _mapCursor = (Math.Clamp(_mapCursor.I + di, 0, x.Count - 1), Math.Clamp(_mapCursor.J + dj, 0, y.Count - 1));
-        _mapPoint = MapGrid.From(sweep, MapQuantity(sweep), Threshold).PointAt(_mapCursor.I, _mapCursor.J);
+        _mapPoint = CurrentMapGrid(sweep).PointAt(_mapCursor.I, _mapCursor.J);
         _cursorSnapshot = _mapPoint >= 0 ? PointComputer.FromSweepPoint(sweep.Points[_mapPoint], DateTime.Now) : null;
         _pointView = null;
         RefreshPage();

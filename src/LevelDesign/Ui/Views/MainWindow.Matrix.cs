@@ -49,7 +49,7 @@ public sealed partial class MainWindow
         if (MatrixOperator(spectrum.Device) is not var (element, op)) return [new TextLine("the device has no elements")];
         int n = MatrixElementsText.StatesThatFit(spectrum, width);
         var matrix = DressedMatrixElements.Matrix(spectrum, element, op, Enumerable.Range(0, n).ToArray());
-        return MatrixElementsText.Build(spectrum, element, op, matrix, where, width);
+        return MatrixElementsText.Build(spectrum, element, op, matrix, where, width, Threshold);
     }
 
     private void AskMatrixOperator()
