@@ -67,9 +67,9 @@ internal static class PointEigenSolve
             return result is null ? null : new SolvedPoint(problem, result.Values, result.Vectors, null,
                 $"block Davidson (sparse; projected: {BlockDavidson.ProjectedName})");
         }
-        if (RealGauge.TryFind(n, h.LowerEntries()) is not var (phases, realEntries)) return null;
+        if (h.ToCsrRealGauged() is not var (phases, gauged)) return null;
         var (gaugedGuess, gaugedColumns) = warmStart?.Invoke(problem.Basis, phases) ?? (null, 0);
-        var real = iterative.TryLowest(CsrMatrix.FromLowerTriangle(n, realEntries), count, gaugedGuess, gaugedColumns);
+        var real = iterative.TryLowest(gauged, count, gaugedGuess, gaugedColumns);
         return real is null ? null : new SolvedPoint(problem, real.Values, null, RealGauge.RotateBack(phases, real.Vectors, n, count),
             $"block Davidson (sparse, real gauge; projected: {BlockDavidson.ProjectedName})");
     }
@@ -89,15 +89,9 @@ internal static class PointEigenSolve
             var real = eigen.LowestReal(h.ToDenseReal(), n, count);
             return Checked(new SolvedPoint(problem, real.Values, real.Vectors, null, eigen.Name));
         }
-        if (RealGauge.TryFind(n, h.LowerEntries()) is var (phases, entries))
+        if (h.ToCsrRealGauged() is var (phases, gauged))
         {
-            var dense = new double[(long)n * n];
-            foreach (var (row, column, value) in entries)
-            {
-                dense[(long)column * n + row] = value;
-                dense[(long)row * n + column] = value;
-            }
-            var real = eigen.LowestReal(dense, n, count);
+            var real = eigen.LowestReal(gauged.ToDense(), n, count);
             return Checked(new SolvedPoint(problem, real.Values, null, RealGauge.RotateBack(phases, real.Vectors, n, count), $"{eigen.Name} (real gauge)"));
         }
         var complex = eigen.LowestComplex(h.ToDenseComplex(), n, count);

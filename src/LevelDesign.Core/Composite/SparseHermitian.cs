@@ -77,6 +77,25 @@ public sealed class SparseHermitian
     }
 
     /// <summary>
+    /// The matrix in a real gauge (see <see cref="RealGauge"/>): the phases and D†HD as a full compressed-row matrix on
+    /// the shared layout; null when no gauge makes it real.
+    /// </summary>
+    public (Complex[] Phases, CsrMatrix Real)? ToCsrRealGauged()
+    {
+        var full = new Complex[_pattern.SourceSlot.Length];
+        for (int r = 0; r < Dimension; r++)
+            for (int p = _pattern.RowStart[r]; p < _pattern.RowStart[r + 1]; p++)
+            {
+                int slot = _pattern.SourceSlot[p];
+                // the slot holds H[row, column] with row ≥ column; the upper triangle is its conjugate
+                full[p] = _pattern.SlotRow[slot] == r ? _lower[slot] : Complex.Conjugate(_lower[slot]);
+            }
+        return RealGauge.TryFind(Dimension, _pattern.RowStart, _pattern.Columns, full) is var (phases, real)
+            ? (phases, new CsrMatrix(Dimension, _pattern.RowStart, _pattern.Columns, real))
+            : null;
+    }
+
+    /// <summary>
     /// The largest ‖H x_k − E_k x_k‖ (GHz) over the given eigenpairs (vectors column-major n×count, real or complex), on
     /// this matrix itself: an independent check of whatever solver (and gauge) produced them. Columns run in parallel
     /// when the work is large.

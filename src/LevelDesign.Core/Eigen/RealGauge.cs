@@ -10,52 +10,51 @@ namespace LevelDesign.Core.Eigen;
 /// </summary>
 public static class RealGauge
 {
-    /// <param name="lower">Lower-triangle entries (row ≥ column) of a Hermitian matrix.</param>
-    /// <returns>The phases and the real lower-triangle entries of D†HD, or null.</returns>
-    public static (Complex[] Phases, List<(int Row, int Column, double Value)> Real)? TryFind(int dimension,
-        IEnumerable<(int Row, int Column, Complex Value)> lower)
+    /// <summary>
+    /// The phases, and the real values of D†HD, for a Hermitian matrix in full compressed rows (both triangles:
+    /// <paramref name="values"/>[p] is H[r, columns[p]] for rowStart[r] ≤ p &lt; rowStart[r + 1]); null when H is not
+    /// real in any gauge. Works on the matrix's own layout, so a sweep point allocates only the phases and the values.
+    /// </summary>
+    public static (Complex[] Phases, double[] Real)? TryFind(int dimension, int[] rowStart, int[] columns, Complex[] values)
     {
-        var entries = lower.ToList();
-        double scale = entries.Count == 0 ? 0 : entries.Max(e => Complex.Abs(e.Value));
+        double scale = 0;
+        foreach (var v in values) scale = Math.Max(scale, Complex.Abs(v));
         double negligible = 1e-14 * Math.Max(scale, 1e-300);
-        var neighbours = new List<(int Other, Complex Value)>[dimension];
-        for (int i = 0; i < dimension; i++) neighbours[i] = [];
-        foreach (var (r, c, v) in entries)
-        {
-            if (r == c || Complex.Abs(v) <= negligible) continue;
-            neighbours[r].Add((c, v));                       // H[r, c]
-            neighbours[c].Add((r, Complex.Conjugate(v)));    // H[c, r]
-        }
         var phases = new Complex[dimension];
         var known = new bool[dimension];
-        var queue = new Queue<int>();
+        var queue = new int[dimension];
         for (int root = 0; root < dimension; root++)
         {
             if (known[root]) continue;
             phases[root] = Complex.One;
             known[root] = true;
-            queue.Enqueue(root);
-            while (queue.Count > 0)
+            int head = 0, tail = 0;
+            queue[tail++] = root;
+            while (head < tail)
             {
-                int i = queue.Dequeue();
-                foreach (var (j, h) in neighbours[i])
+                int i = queue[head++];
+                for (int p = rowStart[i]; p < rowStart[i + 1]; p++)
                 {
-                    if (known[j]) continue;
+                    int j = columns[p];
+                    if (known[j] || Complex.Abs(values[p]) <= negligible) continue;
                     // choose d_j so that conj(d_i)·H[i, j]·d_j is real and positive
-                    var rotated = Complex.Conjugate(phases[i]) * h;
+                    var rotated = Complex.Conjugate(phases[i]) * values[p];
                     phases[j] = Complex.Conjugate(rotated) / Complex.Abs(rotated);
                     known[j] = true;
-                    queue.Enqueue(j);
+                    queue[tail++] = j;
                 }
             }
         }
-        var real = new List<(int, int, double)>(entries.Count);
-        foreach (var (r, c, v) in entries)
-        {
-            var t = r == c ? new Complex(v.Real, 0) : Complex.Conjugate(phases[r]) * v * phases[c];
-            if (Math.Abs(t.Imaginary) > 1e-12 * Math.Max(scale, 1e-300)) return null;
-            real.Add((r, c, t.Real));
-        }
+        var real = new double[values.Length];
+        double imaginaryLimit = 1e-12 * Math.Max(scale, 1e-300);
+        for (int r = 0; r < dimension; r++)
+            for (int p = rowStart[r]; p < rowStart[r + 1]; p++)
+            {
+                int c = columns[p];
+                var t = r == c ? new Complex(values[p].Real, 0) : Complex.Conjugate(phases[r]) * values[p] * phases[c];
+                if (Math.Abs(t.Imaginary) > imaginaryLimit) return null;
+                real[p] = t.Real;
+            }
         return (phases, real);
     }
 

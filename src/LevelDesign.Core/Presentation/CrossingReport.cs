@@ -78,7 +78,7 @@ public static class CrossingReport
         {
             var c = rows[i].Crossing;
             var (path, parameter) = SweepFiles.ParameterOf(document, axis.Path, c.Bias);
-            list.Add(new JsonObject
+            list.AddNode(new JsonObject
             {
                 ["rank"] = i + 1,
                 ["state_a"] = Core.Presentation.StateNames.Of(ids, c.StateA),

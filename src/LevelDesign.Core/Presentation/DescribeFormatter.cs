@@ -25,7 +25,7 @@ public static class DescribeFormatter
         {
             var e = device.Elements[i];
             var bare = problem.Bare[i];
-            elements.Add(new JsonObject
+            elements.AddNode(new JsonObject
             {
                 ["id"] = e.Id,
                 ["kind"] = ElementKindCatalog.Of(e).Name,
@@ -40,7 +40,7 @@ public static class DescribeFormatter
         var couplers = new JsonArray();
         foreach (var c in problem.Couplers)
         {
-            couplers.Add(new JsonObject
+            couplers.AddNode(new JsonObject
             {
                 ["id"] = c.Id,
                 ["kind"] = CouplerKindInfo.Of(c.Source.Kind).Name,

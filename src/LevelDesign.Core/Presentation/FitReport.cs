@@ -39,7 +39,7 @@ public static class FitReport
         {
             var p = parameters[i];
             var f = fields[i];
-            ps.Add(new JsonObject
+            ps.AddNode(new JsonObject
             {
                 ["path"] = p.Path,
                 ["field"] = f.FieldPath,
@@ -55,7 +55,7 @@ public static class FitReport
         }
         var ts = new JsonArray();
         foreach (var r in result.Residuals)
-            ts.Add(new JsonObject
+            ts.AddNode(new JsonObject
             {
                 ["quantity"] = r.Target.Quantity,
                 ["settings"] = new JsonObject((r.Target.Settings ?? new Dictionary<string, double>()).Select(kv => KeyValuePair.Create(kv.Key, JsonValues.Number(kv.Value)))),

@@ -17,6 +17,12 @@ public static class JsonValues
 
     public static string Write(JsonNode node) => node.ToJsonString(Options);
 
+    /// <summary>
+    /// Appends a node through JsonArray's non-generic Add: the generic Add&lt;T&gt; (which C# picks for a JsonObject or
+    /// JsonArray argument) is marked unsafe for trimmed and ahead-of-time compiled builds.
+    /// </summary>
+    public static void AddNode(this JsonArray array, JsonNode? node) => array.Add(node);
+
     public static JsonArray Matrix(double[,] m)
     {
         var rows = new JsonArray();
@@ -24,7 +30,7 @@ public static class JsonValues
         {
             var row = new JsonArray();
             for (int j = 0; j < m.GetLength(1); j++) row.Add(Number(m[i, j]));
-            rows.Add(row);
+            rows.AddNode(row);
         }
         return rows;
     }

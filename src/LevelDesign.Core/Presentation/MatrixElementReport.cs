@@ -55,7 +55,7 @@ public static class MatrixElementReport
         var rows = new JsonArray();
         for (int r = 0; r < states.Count; r++)
             for (int c = 0; c < states.Count; c++)
-                rows.Add(new JsonObject
+                rows.AddNode(new JsonObject
                 {
                     ["i"] = states[r],
                     ["j"] = states[c],

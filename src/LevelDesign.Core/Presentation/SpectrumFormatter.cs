@@ -21,7 +21,7 @@ public static class SpectrumFormatter
     {
         var list = new JsonArray();
         foreach (var c in s.Couplers)
-            list.Add(new JsonObject
+            list.AddNode(new JsonObject
             {
                 ["id"] = c.Id,
                 ["coefficient_ghz"] = JsonValues.Number(c.CoefficientGHz),
@@ -40,13 +40,13 @@ public static class SpectrumFormatter
             var label = s.Labels[k];
             var components = new JsonArray();
             foreach (var c in label.Components)
-                components.Add(new JsonObject
+                components.AddNode(new JsonObject
                 {
                     ["label"] = Core.Presentation.StateNames.Json(s, c.BareIndex),
                     ["text"] = Core.Presentation.StateNames.OfBare(s, c.BareIndex),
                     ["percent"] = JsonValues.Number(100 * c.Weight),
                 });
-            states.Add(new JsonObject
+            states.AddNode(new JsonObject
             {
                 ["index"] = k,
                 ["label"] = Core.Presentation.StateNames.Json(s, label.BareIndex),
@@ -65,7 +65,7 @@ public static class SpectrumFormatter
         JsonNode? Low(double purity) => purity < purityThreshold;
         var transitions = new JsonArray();
         foreach (var t in d.Transitions)
-            transitions.Add(new JsonObject
+            transitions.AddNode(new JsonObject
             {
                 ["element"] = t.ElementId,
                 ["bare_f01_ghz"] = JsonValues.Number(t.BareF01),
@@ -81,15 +81,15 @@ public static class SpectrumFormatter
             });
         var chi = new JsonArray();
         foreach (var c in d.DispersiveShifts)
-            chi.Add(new JsonObject { ["qubit"] = c.First, ["resonator"] = c.Second, ["chi2_ghz"] = JsonValues.Number(c.Value),
+            chi.AddNode(new JsonObject { ["qubit"] = c.First, ["resonator"] = c.Second, ["chi2_ghz"] = JsonValues.Number(c.Value),
                 ["purity"] = JsonValues.Number(c.Purity), ["hybridized"] = Low(c.Purity) });
         var zz = new JsonArray();
         foreach (var z in d.ZZ)
-            zz.Add(new JsonObject { ["first"] = z.First, ["second"] = z.Second, ["zz_ghz"] = JsonValues.Number(z.Value),
+            zz.AddNode(new JsonObject { ["first"] = z.First, ["second"] = z.Second, ["zz_ghz"] = JsonValues.Number(z.Value),
                 ["purity"] = JsonValues.Number(z.Purity), ["hybridized"] = Low(z.Purity) });
         var purcell = new JsonArray();
         foreach (var p in d.Purcell)
-            purcell.Add(new JsonObject
+            purcell.AddNode(new JsonObject
             {
                 ["qubit"] = p.Qubit,
                 ["resonator"] = p.Resonator,

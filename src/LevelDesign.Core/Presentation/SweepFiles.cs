@@ -88,7 +88,7 @@ public static class SweepFiles
                     parameters[linkedPath] = JsonValues.Number(linkedValue);
                 }
             }
-            points.Add(new JsonObject
+            points.AddNode(new JsonObject
             {
                 ["index"] = row.Index,
                 ["axis_values"] = Numbers(row.AxisValues.Select((x, i) => units[i].ToShown(x))),

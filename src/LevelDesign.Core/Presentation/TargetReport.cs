@@ -66,7 +66,7 @@ public static class TargetReport
             };
             if (!r.Refined) o["note"] = JumpNote;
             else if (r.IsHybridized(purityThreshold)) o["note"] = HybridizedNote;
-            list.Add(o);
+            list.AddNode(o);
         }
         return JsonValues.Write(new JsonObject
         {

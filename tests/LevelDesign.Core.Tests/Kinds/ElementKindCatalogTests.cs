@@ -30,6 +30,17 @@ public class ElementKindCatalogTests
         Assert.Equal(letters.Length, letters.Distinct().Count());
     }
 
+    [Fact]
+    public void Every_concrete_kind_description_in_the_assembly_is_listed_in_the_catalog()
+    {
+        // The catalog is an explicit list (the ahead-of-time build cannot find types by reflection); this is the
+        // check that a new kind's file was also added to it.
+        var defined = typeof(ElementKindInfo).Assembly.GetTypes()
+            .Where(t => t.IsSubclassOf(typeof(ElementKindInfo)) && !t.IsAbstract)
+            .Select(t => t.Name).Order().ToArray();
+        Assert.Equal(defined, ElementKindCatalog.All.Select(k => k.GetType().Name).Order().ToArray());
+    }
+
     [Theory]
     [MemberData(nameof(KindNames))]
     public void A_new_element_of_every_kind_reads_and_describes_as_its_kind(string name)
