@@ -88,7 +88,8 @@ public static class SweepCommand
         // on a split into shards
         var blocks = SweepBlocks.All(SweepShards.Counts(setup));
         // a point that fails (e.g. a device invalid at the end of the range) stops the sweep; the points before it are written
-        var result = SweepExecution.Run(setup, mode, planLevels, solver, blocks, keepPointsOnFailure: true);
+        // only the table is written: eigenvectors are dropped once a point is labelled (less memory to touch)
+        var result = SweepExecution.Run(setup, mode, planLevels, solver, blocks, keepVectors: false, keepPointsOnFailure: true);
         if (result.Failure is { } failure && result.Points.Count == 0) throw failure.Error;
         var table = SweepTable.From(result, shown, threshold);
         int total = SweepGrid.PointCount(result.Plan);

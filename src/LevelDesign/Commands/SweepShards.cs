@@ -56,7 +56,7 @@ public static class SweepShards
             ?? throw new UsageException($"--shard {error} (this sweep of {SweepBlocks.All(counts)[^1].End} points runs in {SweepBlocks.Describe(counts)})");
         SpreadStudyFiles.Prepare(folder);
         var (compute, first, end, leadIn) = SweepBlocks.ForShard(counts, shard);
-        var result = SweepExecution.Run(setup, mode, planLevels, solver, compute);
+        var result = SweepExecution.Run(setup, mode, planLevels, solver, compute, keepVectors: false);
         var table = SweepTable.From(result, shown, threshold);
         var own = table with { Rows = table.Rows.Where(r => r.Index >= first && r.Index < end).ToArray() };
         string[]? Labels(int index) => result.Points.FirstOrDefault(p => p.Index == index) is { } p ? LabelList(p) : null;
