@@ -130,37 +130,58 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
     /// <summary>|⟨previous i|current k⟩|², matching product states across the two bases.</summary>
     private static double[,] Overlaps(SolvedPoint previous, SolvedPoint current)
     {
-        int n = current.Dimension, oldN = previous.Dimension;
-        var map = current.IndexMapTo(previous.Problem.Basis);
-        var result = new double[previous.Count, current.Count];
-        if (previous.RealVectors is double[] oldReal && current.RealVectors is double[] real)
-        {
-            // the neighbour's vectors in this basis (gathered only when the two bases differ), then all dot products
-            // in one blocked product
-            var gathered = oldReal;
-            if (!ReferenceEquals(previous.Problem.Basis.Structure, current.Problem.Basis.Structure))
+        int n = current.Dimension, oldCount = previous.Count, count = current.Count;
+        // the neighbour's vectors in this basis (gathered only when the two bases differ), split into real and
+        // imaginary parts, so that every ⟨old_i|new_k⟩ comes from blocked real products: a real gauge makes most
+        // complex points real up to phases, and the parts keep the product vectorised either way
+        bool sameBasis = ReferenceEquals(previous.Problem.Basis.Structure, current.Problem.Basis.Structure);
+        var map = sameBasis ? null : current.IndexMapTo(previous.Problem.Basis);
+        var (oldRe, oldIm) = Parts(previous, map, n);
+        var (re, im) = Parts(current, null, n);
+        var rr = Dots(oldRe, oldCount, re, count, n);
+        var ii = oldIm is not null && im is not null ? Dots(oldIm, oldCount, im, count, n) : null;
+        var ri = im is not null ? Dots(oldRe, oldCount, im, count, n) : null;
+        var ir = oldIm is not null ? Dots(oldIm, oldCount, re, count, n) : null;
+        var result = new double[oldCount, count];
+        for (int i = 0; i < oldCount; i++)
+            for (int k = 0; k < count; k++)
             {
-                gathered = new double[n * previous.Count];
-                for (int i = 0; i < previous.Count; i++)
-                    for (int j = 0; j < n; j++) gathered[i * n + j] = map[j] < 0 ? 0 : oldReal[i * oldN + map[j]];
-            }
-            var dots = new double[previous.Count * current.Count];
-            BlockProducts.Dots(gathered, n, previous.Count, real, current.Count, dots, current.Count);
-            for (int i = 0; i < previous.Count; i++)
-                for (int k = 0; k < current.Count; k++) result[i, k] = dots[i * current.Count + k] * dots[i * current.Count + k];
-            return result;
-        }
-        Complex Old(int i, int j) => previous.ComplexVectors?[i * oldN + j] ?? previous.RealVectors![i * oldN + j];
-        Complex New(int k, int j) => current.ComplexVectors?[k * n + j] ?? current.RealVectors![k * n + j];
-        for (int i = 0; i < previous.Count; i++)
-            for (int k = 0; k < current.Count; k++)
-            {
-                Complex sum = 0;
-                for (int j = 0; j < n; j++)
-                    if (map[j] >= 0) sum += Complex.Conjugate(Old(i, map[j])) * New(k, j);
-                result[i, k] = sum.Real * sum.Real + sum.Imaginary * sum.Imaginary;
+                int p = i * count + k;
+                // ⟨o|v⟩ = Σ (o_re − i o_im)(v_re + i v_im)
+                double real = rr[p] + (ii?[p] ?? 0), imaginary = (ri?[p] ?? 0) - (ir?[p] ?? 0);
+                result[i, k] = real * real + imaginary * imaginary;
             }
         return result;
+    }
+
+    /// <summary>A point's vectors (column-major, n per state) as real and imaginary parts in a basis of n states; map[j] is the point's index of state j (−1: absent), null when the bases agree. Imaginary is null for real vectors.</summary>
+    private static (double[] Real, double[]? Imaginary) Parts(SolvedPoint point, int[]? map, int n)
+    {
+        int own = point.Dimension, count = point.Count;
+        if (map is null && point.RealVectors is double[] real) return (real, null);
+        var re = new double[n * count];
+        var im = point.ComplexVectors is null ? null : new double[n * count];
+        for (int k = 0; k < count; k++)
+            for (int j = 0; j < n; j++)
+            {
+                int source = map is null ? j : map[j];
+                if (source < 0) continue;
+                if (point.ComplexVectors is Complex[] complex)
+                {
+                    var z = complex[k * own + source];
+                    re[k * n + j] = z.Real;
+                    im![k * n + j] = z.Imaginary;
+                }
+                else re[k * n + j] = point.RealVectors![k * own + source];
+            }
+        return (re, im);
+    }
+
+    private static double[] Dots(double[] a, int aCount, double[] b, int bCount, int n)
+    {
+        var dots = new double[aCount * bCount];
+        BlockProducts.Dots(a, n, aCount, b, bCount, dots, bCount);
+        return dots;
     }
 
     private static DressedLabel MakeLabel(double[] weights, int[] top, int n, int k, int bare, bool ambiguous)
