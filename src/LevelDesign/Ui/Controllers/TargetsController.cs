@@ -206,7 +206,7 @@ public sealed class TargetsController
     }
 
     /// <summary>Fitted values in the file's units and each target's residual; 'a' writes all values as one undoable edit.</summary>
-    public Offer FitOffer(DeviceDocument fittedOn, FitRequest request, FitResult result)
+    private Offer FitOffer(DeviceDocument fittedOn, FitRequest request, FitResult result)
     {
         Said?.Invoke(ReferenceEquals(fittedOn, _session.Document) ? $"fit done ({result.Iterations} steps); a applies the values, Esc leaves the device as it is"
             : "the device changed while fitting; the values are for the device as it was", false);

@@ -1,9 +1,4 @@
 using LevelDesign.Core.Presentation;
-using System.Diagnostics;
-using LevelDesign.Core.Composite;
-using LevelDesign.Core.DeviceFiles;
-using LevelDesign.Core.Eigen;
-using LevelDesign.Core.Model;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Ui.Compute;
 using LevelDesign.Ui.Text;

@@ -1,9 +1,5 @@
 using LevelDesign.Core.Kinds;
 using LevelDesign.Core.DeviceFiles;
-using LevelDesign.Core.Couplers;
-using LevelDesign.Core.Eigen;
-using LevelDesign.Core.Elements;
-using LevelDesign.Core.Model;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Ui.Compute;
 using LevelDesign.Ui.Controllers;
