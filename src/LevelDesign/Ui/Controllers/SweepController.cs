@@ -190,6 +190,8 @@ public sealed class SweepController
     /// <summary>The window closes: nothing more is computed or posted.</summary>
     public void Stop()
     {
+        if (_resweepTimer is not null) _scheduler.Cancel(_resweepTimer);
+        _resweepTimer = null;
         _jobs.Cancel();
         _namedPointJobs.Cancel();
     }

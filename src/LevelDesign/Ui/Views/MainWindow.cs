@@ -16,10 +16,10 @@ namespace LevelDesign.Ui.Views;
 /// <summary>
 /// The board: device tree and parameter form on the left, one page (states, shifts, spectrum, crossings,
 /// help) on the right — at 120×34 and above the spectrum and a page show together — then the status line,
-/// the question bar and the key bar. A view over three controllers that hold the state and its policy: sweeps and
-/// the point shown (<see cref="SweepController"/>), targets and fits (<see cref="TargetsController"/>), files
-/// (<see cref="FilesController"/>). All work runs off the UI thread and comes back through the scheduler; a result
-/// whose generation is no longer current is dropped.
+/// the question bar and the key bar. A view over the controllers that hold the state and its policy: the point at
+/// the file's biases (<see cref="PointController"/>), sweeps and the point the pages show (<see cref="SweepController"/>),
+/// targets and fits (<see cref="TargetsController"/>), files (<see cref="FilesController"/>). All work runs off the UI
+/// thread and comes back through the scheduler; a result whose generation is no longer current is dropped.
 /// </summary>
 public sealed partial class MainWindow : Window
 {
@@ -110,13 +110,13 @@ public sealed partial class MainWindow : Window
         _form.Bind(Key.F2, Command.Edit, () => { EditField(); return true; });
         _point.Changed += () => { ShowFields(); RefreshPage(); UpdateStatus(); };   // the coupler form shows g at the point
         _point.Progressed += UpdateStatus;
-        _point.Said += (text, warning) => Say(text, warning);
+        _point.Said += Say;
         _spectrum.CursorMoved += _sweeps.MoveCursor;
         _sweeps.Changed += OnSweepChanged;
         _sweeps.Progressed += OnSweepProgress;
-        _sweeps.Said += (text, warning) => Say(text, warning);
+        _sweeps.Said += Say;
         _targets.Changed += UpdateStatus;
-        _targets.Said += (text, warning) => Say(text, warning);
+        _targets.Said += Say;
         _targets.Offered += AskOffer;
         _crossingList.RowActivated += JumpToCrossing;
         _crossingList.Bind(Key.Esc, Command.Cancel, () => { ShowPage(Page.Spectrum); return true; });
