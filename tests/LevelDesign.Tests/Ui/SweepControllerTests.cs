@@ -53,6 +53,18 @@ public sealed class SweepControllerTests : IDisposable
     }
 
     [Fact]
+    public void Stopping_drops_a_pending_re_sweep()
+    {
+        Sweep("q_flux 0 0.5 3");
+        Assert.True(_session.SetValue("elements.r.frequency", "7 GHz").Accepted);
+        _sweeps.DeviceChanged();
+        Assert.Equal(1, _scheduler.PendingTimers);
+        _sweeps.Stop();                                 // the window closed
+        Assert.Equal(0, _scheduler.PendingTimers);
+        Assert.False(_sweeps.IsRunning);
+    }
+
+    [Fact]
     public void Before_the_first_sweep_an_edit_schedules_nothing()
     {
         Assert.True(_session.SetValue("elements.r.frequency", "7 GHz").Accepted);
