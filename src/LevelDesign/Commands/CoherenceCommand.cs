@@ -58,7 +58,7 @@ public static class CoherenceCommand
             return ExitCodes.Ok;
         }
 
-        var setup = SweepSetup.Create(document, a.Point, a.At, a.Vary, a.Links, a.SweepName, maxAxes: 2);
+        var setup = SweepSetup.Create(document, a, maxAxes: 2);
         // the budgets read matrix elements from every point's vectors
         var result = SweepExecution.Run(setup, LabelMode.ByCharacter, null, solver, keepVectors: true);
         // the budget needs extra solves per point (flux and charge derivatives); points are independent

@@ -50,7 +50,7 @@ public static class CrossingsCommand
         double min = Gap("--min-gap", a.MinGap, 0), max = Gap("--max-gap", a.MaxGap, 0.5);
         if (min > max) throw new UsageException($"--min-gap {a.MinGap} is above --max-gap {a.MaxGap ?? "500MHz"}");
         var document = CommandGuard.Load(a.Path, a.AllowLarge);
-        var setup = SweepSetup.Create(document, a.Point, a.At, a.Vary, a.Links, a.SweepName, maxAxes: 1);
+        var setup = SweepSetup.Create(document, a, maxAxes: 1);
         var axis = setup.Axes[0];
         if (axis.Count < 3) throw new UsageException($"--vary: a crossing search needs at least 3 points (got {axis.Count})");
         var points = OperatingPoints(setup, a.Near);

@@ -60,7 +60,7 @@ public static class PlotCommand
         var mode = CommandGuard.LabelMode(a.Labels);
         OutputFile.Check(output, a.Path);
         var document = CommandGuard.Load(a.Path, a.AllowLarge);
-        var setup = SweepSetup.Create(document, a.Point, a.At, a.Vary, a.Links, a.SweepName, maxAxes: 1);
+        var setup = SweepSetup.Create(document, a, maxAxes: 1);
         if (setup.Axes[0].Count < 3) throw new UsageException($"--vary: a plot needs at least 3 points (got {setup.Axes[0].Count})");
         if (a.Quantities is { Length: > 0 } quantities)
             return DrawQuantities(document, setup, mode, a.Levels, quantities, output, extension, w, h);

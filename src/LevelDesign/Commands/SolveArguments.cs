@@ -1,16 +1,11 @@
 namespace LevelDesign.Commands;
 
 /// <summary>The options of <c>leveldesign solve</c>, as typed.</summary>
-public sealed record SolveArguments : DeviceArguments
+/// <remarks>--vary is the range BIAS=START:STOP[:SCAN] to search (one axis); --link moves other values with it; no --sweep.</remarks>
+public sealed record SolveArguments : SweepAxesArguments
 {
-    /// <summary>--vary: the range BIAS=START:STOP[:SCAN] to search.</summary>
-    public string[]? Vary { get; init; }
-
     /// <summary>--target: QUANTITY=VALUE.</summary>
     public string? Target { get; init; }
-
-    /// <summary>--link: other biases or parameters moved with the axis.</summary>
-    public string[]? Links { get; init; }
 
     /// <summary>--levels: dressed states solved at each scan point.</summary>
     public int? Levels { get; init; }

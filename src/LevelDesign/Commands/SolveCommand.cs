@@ -44,7 +44,7 @@ public static class SolveCommand
         string target = a.Target ?? throw new UsageException("give --target QUANTITY=VALUE, e.g. zz:qa:qb=0");
         var document = CommandGuard.Load(a.Path, a.AllowLarge);
         double threshold = CommonOptions.PurityThreshold(a.Purity, document);
-        var setup = SweepSetup.Create(document, a.Point, a.At, a.Vary, a.Links, null, maxAxes: 1, defaultCount: DefaultScan);
+        var setup = SweepSetup.Create(document, a, maxAxes: 1, defaultCount: DefaultScan);
         var axis = setup.Axes[0];
         if (axis.Count < 2) throw new UsageException($"--vary: a root search needs at least 2 scan points (got {axis.Count})");
         var solver = new DeviceSolver();

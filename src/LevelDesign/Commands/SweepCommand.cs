@@ -70,7 +70,7 @@ public static class SweepCommand
         var document = CommandGuard.Load(a.Path, a.AllowLarge);
         if (selection.UnknownElement(document.Device) is string unknown) throw new UsageException(unknown);
         double threshold = CommonOptions.PurityThreshold(a.Purity, document);
-        var setup = SweepSetup.Create(document, a.Point, a.At, a.Vary, a.Links, a.SweepName, maxAxes: 2);
+        var setup = SweepSetup.Create(document, a, maxAxes: 2);
         if (a.Slurm is int tasks)
         {
             var counts = SweepShards.Counts(setup);
@@ -83,7 +83,10 @@ public static class SweepCommand
         var solver = new DeviceSolver { Selection = selection };
         var (planLevels, shown) = SweepExecution.Levels(setup, a.Levels, solver);
         if (a.Shard is not null)
-            return SweepShards.RunShard(document, setup, mode, planLevels, shown, threshold, solver, a.Shard, SweepShards.Arguments(a), a.Output!);
+            return SweepShards.RunShard(new ShardRun
+            {
+                Arguments = a, Setup = setup, Mode = mode, PlanLevels = planLevels, Shown = shown, PurityThreshold = threshold, Solver = solver,
+            });
         // a sweep runs in fixed blocks (a grid: each row as a 1-D sweep), so its numbers do not depend on the cores or
         // on a split into shards
         var blocks = SweepBlocks.All(SweepShards.Counts(setup));

@@ -11,11 +11,11 @@ public sealed record SweepSetup(DeviceDocument Document, IReadOnlyDictionary<str
 {
     public Device Resolve(IReadOnlyList<double> values) => Document.Resolve(Axes, values, Start);
 
-    /// <summary>Builds the setup or throws <see cref="UsageException"/>; <paramref name="maxAxes"/> is 1 for 1-D commands.</summary>
-    public static SweepSetup Create(DeviceDocument document, string? point, string[]? at, string[]? vary, string[]? links,
-        string? sweepName, int maxAxes, int? defaultCount = null)
+    /// <summary>Builds the setup from a command's options or throws <see cref="UsageException"/>; <paramref name="maxAxes"/> is 1 for 1-D commands.</summary>
+    public static SweepSetup Create(DeviceDocument document, SweepAxesArguments options, int maxAxes, int? defaultCount = null)
     {
-        DeviceInput.Resolve(document, point, at, out var applied);   // checks the point and --at settings
+        var (vary, links, sweepName) = (options.Vary, options.Links, options.SweepName);
+        DeviceInput.Resolve(document, options.Point, options.At, out var applied);   // checks the point and --at settings
         var start = applied.ToDictionary(kv => kv.Key, kv => kv.Value!.GetValue<double>());
         IReadOnlyList<SweepAxis> axes;
         if (vary is { Length: > 0 })

@@ -48,20 +48,20 @@ public static class SweepShards
         return a;
     }
 
-    public static int RunShard(DeviceDocument document, SweepSetup setup, LabelMode mode, int? planLevels, int shown, double threshold,
-        DeviceSolver solver, string shardText, JsonObject arguments, string folder)
+    public static int RunShard(ShardRun run)
     {
+        var (setup, document, folder) = (run.Setup, run.Setup.Document, run.Arguments.Output!);
         var counts = Counts(setup);
-        var shard = ShardRange.Parse(shardText, SweepBlocks.ShardUnits(counts), out string? error)
+        var shard = ShardRange.Parse(run.Arguments.Shard!, SweepBlocks.ShardUnits(counts), out string? error)
             ?? throw new UsageException($"--shard {error} (this sweep of {SweepBlocks.All(counts)[^1].End} points runs in {SweepBlocks.Describe(counts)})");
         SpreadStudyFiles.Prepare(folder);
         var (compute, first, end, leadIn) = SweepBlocks.ForShard(counts, shard);
-        var result = SweepExecution.Run(setup, mode, planLevels, solver, compute, keepVectors: false);
-        var table = SweepTable.From(result, shown, threshold);
+        var result = SweepExecution.Run(setup, run.Mode, run.PlanLevels, run.Solver, compute, keepVectors: false);
+        var table = SweepTable.From(result, run.Shown, run.PurityThreshold);
         var own = table with { Rows = table.Rows.Where(r => r.Index >= first && r.Index < end).ToArray() };
         string[]? Labels(int index) => result.Points.FirstOrDefault(p => p.Index == index) is { } p ? LabelList(p) : null;
         var id = new SweepShardFile.Identity(SpreadStudyFiles.Version(), document.Path, SpreadStudyFiles.Sha256(document.Text), EigenSolvers.Describe(),
-            arguments, counts);
+            Arguments(run.Arguments), counts);
         var contents = new SweepShardFile.Contents(id, shard, first, end, result.Completed, leadIn >= 0 ? Labels(leadIn) : null, Labels(end - 1), own);
         string path = Path.Combine(folder, FileName(shard));
         OutputFile.Write(path, () => AtomicFile.Write(path, SweepShardFile.Write(contents)));
@@ -110,7 +110,11 @@ public static class SweepShards
         if (SpreadStudyFiles.Sha256(document.Text) != id.DeviceSha256)
             throw new UsageException($"{file}: the device file has changed since the shards were computed (its SHA-256 differs); run the sweep again");
         var a = id.Arguments;
-        var setup = SweepSetup.Create(document, (string?)a["point"], Texts(a["at"]), Texts(a["vary"]), Texts(a["link"]), (string?)a["sweep"], maxAxes: 2);
+        var recorded = new SweepArguments
+        {
+            Path = file, Point = (string?)a["point"], At = Texts(a["at"]), Vary = Texts(a["vary"]), Links = Texts(a["link"]), SweepName = (string?)a["sweep"],
+        };
+        var setup = SweepSetup.Create(document, recorded, maxAxes: 2);
         var plan = new SweepPlan(setup.Axes, CommandGuard.LabelMode((string?)a["labels"]));
         var table = first.Table with { Rows = ordered.SelectMany(c => c.Table.Rows).ToArray() };
         var sweep = new SweepResult(plan, [], true);

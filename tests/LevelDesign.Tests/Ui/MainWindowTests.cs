@@ -379,7 +379,7 @@ public class MainWindowTests
         var sweep = ui.Window.LastSweep!;
         // an independent run of the finder on the same sweep: the first row is its nearest crossing to sweet_spot (q_flux = 0)
         var document = ui.Session.Document!;
-        var options = MainWindow.CrossingOptionsFor(document, sweep);
+        var options = LevelDesign.Ui.Controllers.SweepController.CrossingOptionsFor(document, sweep);
         Assert.Equal([0.0], options.OperatingPoints);   // sweet_spot sets q_flux = 0
         var found = CrossingFinder.Find(sweep, x => document.Resolve(sweep.Plan.Axes, [x]), options);
         Assert.NotEmpty(found);

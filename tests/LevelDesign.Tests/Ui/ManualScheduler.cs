@@ -28,6 +28,18 @@ public sealed class ManualScheduler : IUiScheduler
         while (_posted.TryDequeue(out var action)) action();
     }
 
+    /// <summary>Runs posted work until <paramref name="condition"/> holds (background work posts its result here).</summary>
+    public void PumpUntil(Func<bool> condition, string what, int timeoutMs = 60000)
+    {
+        var clock = System.Diagnostics.Stopwatch.StartNew();
+        while (!condition())
+        {
+            if (clock.ElapsedMilliseconds > timeoutMs) throw new TimeoutException("timed out waiting for " + what);
+            Thread.Sleep(10);
+            Pump();
+        }
+    }
+
     public void Advance(TimeSpan by)
     {
         Now += by;

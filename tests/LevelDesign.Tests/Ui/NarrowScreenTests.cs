@@ -97,7 +97,7 @@ public class NarrowScreenTests
         ui.WaitIdle();
         ui.Press(Key.F9);
         var rows = Rows(ui);
-        var lines = MainWindow.TargetQuestion.Split('\n');
+        var lines = LevelDesign.Ui.Controllers.TargetsController.Question.Split('\n');
         Assert.Contains(rows, r => r.Contains("» " + lines[0], StringComparison.Ordinal));
         Assert.Contains(rows, r => r.Contains("  " + lines[1], StringComparison.Ordinal));
         Assert.Contains(rows, r => r.Contains("Enter accept · Esc cancel", StringComparison.Ordinal));

@@ -35,13 +35,13 @@ public sealed partial class MainWindow
     private IReadOnlyList<TextLine> MatrixPage(int width)
     {
         var shown = Shown;
-        if (shown is null) return [new TextLine(_computing ? "⟳ computing…" : "nothing computed yet")];
+        if (shown is null) return [new TextLine(_point.IsComputing ? "⟳ computing…" : "nothing computed yet")];
         var spectrum = shown.Spectrum;
         string where = Where();
         // module-size sweeps keep no eigenvectors per point; the file's biases always have them
         if (!spectrum.HasVectors)
         {
-            if (_snapshot is not { Spectrum.HasVectors: true } fileSnapshot)
+            if (_point.Snapshot is not { Spectrum.HasVectors: true } fileSnapshot)
                 return TextFit.Wrap("no eigenvectors were kept for this point, so its matrix elements cannot be formed", width).Select(l => new TextLine(l)).ToList();
             spectrum = fileSnapshot.Spectrum;
             where = "the biases in the file (this sweep point kept no eigenvectors)";

@@ -1,11 +1,8 @@
 using LevelDesign.Core.Kinds;
 using LevelDesign.Core.DeviceFiles;
-using LevelDesign.Core.Couplers;
-using LevelDesign.Core.Eigen;
-using LevelDesign.Core.Elements;
-using LevelDesign.Core.Model;
 using LevelDesign.Core.Sweeps;
 using LevelDesign.Ui.Compute;
+using LevelDesign.Ui.Controllers;
 using LevelDesign.Ui.Export;
 using LevelDesign.Ui.Session;
 using LevelDesign.Ui.Text;
@@ -19,20 +16,22 @@ namespace LevelDesign.Ui.Views;
 /// <summary>
 /// The board: device tree and parameter form on the left, one page (states, shifts, spectrum, crossings,
 /// help) on the right — at 120×34 and above the spectrum and a page show together — then the status line,
-/// the question bar and the key bar. All work runs off the UI thread and comes back through the scheduler;
-/// a result whose generation is no longer current is dropped.
+/// the question bar and the key bar. A view over the controllers that hold the state and its policy: the point at
+/// the file's biases (<see cref="PointController"/>), sweeps and the point the pages show (<see cref="SweepController"/>),
+/// targets and fits (<see cref="TargetsController"/>), files (<see cref="FilesController"/>). All work runs off the UI
+/// thread and comes back through the scheduler; a result whose generation is no longer current is dropped.
 /// </summary>
 public sealed partial class MainWindow : Window
 {
     /// <summary>The board column: 30 columns leave the page 46 at 80 columns; wider screens give the form room for "← bias NAME".</summary>
     private int LeftWidth => Frame.Width >= 110 ? 40 : Frame.Width >= 100 ? 34 : 30;
-    private static readonly TimeSpan ResweepPause = TimeSpan.FromMilliseconds(600);
 
     private readonly EditSession _session;
-    private readonly ISweepService _sweeps;
-    private readonly ITargetSolver _targets;
-    private readonly IPlotExporter? _plots;
     private readonly IUiScheduler _scheduler;
+    private readonly PointController _point;
+    private readonly SweepController _sweeps;
+    private readonly TargetsController _targets;
+    private readonly FilesController _files;
 
     private readonly FrameView _boardFrame, _formFrame, _pageFrame, _plotFrame;
     private readonly RowList _board, _form, _page;
@@ -42,31 +41,20 @@ public sealed partial class MainWindow : Window
     private readonly KeyBar _keyBar;
     private readonly IReadOnlyList<(KeyHint Hint, Key Key, Action? Action)> _windowKeys;
 
-    private readonly LatestOnly _pointJobs = new(), _sweepJobs = new(), _fitJobs = new(), _solveJobs = new();
     private IReadOnlyList<BoardNode> _nodes = [];
     private string? _selectAfterEdit;
     private IReadOnlyList<FieldRow> _fields = [];
     private Page _pageShown = Page.States, _pageBeforeHelp = Page.States;
-    private bool _showLimits, _wideOff, _allowQuit, _computing, _sweeping, _sweepStale, _fitting, _solving;
-    private PointSnapshot? _snapshot, _cursorSnapshot;
-    private string _eigenPath = "…";
-    private SweepRequest? _lastSweep;
-    private SweepResult? _sweep;
-    private SpectrumSeries? _series;
-    private IReadOnlyList<CrossingMark> _crossings = [];
-    private bool _crossingsPending;
-    private Manifold _manifold = Manifold.UpToTwo;
-    private object? _resweepTimer;
-    private string _progressText = "", _pointProgressText = "";
-    private string _sweepSummary = "";
+    private bool _showLimits, _wideOff, _allowQuit;
 
     public MainWindow(EditSession session, IUiScheduler scheduler, ISweepService? sweeps = null, ITargetSolver? targets = null, IPlotExporter? plots = null)
     {
         _session = session;
         _scheduler = scheduler;
-        _sweeps = sweeps ?? new SweepService();
-        _targets = targets ?? new TargetSearch();
-        _plots = plots;
+        _point = new PointController(scheduler);
+        _sweeps = new SweepController(session, scheduler, sweeps ?? new SweepService());
+        _targets = new TargetsController(session, scheduler, targets ?? new TargetSearch());
+        _files = new FilesController(session, _sweeps, plots);
         if (Palette.Monochrome) SetScheme(Palette.MonochromeScheme());
 
         _board = new RowList { Width = Dim.Fill(), Height = Dim.Fill() };
@@ -87,7 +75,7 @@ public sealed partial class MainWindow : Window
         _plotFrame.Add(_spectrum);
 
         _crossingList = new RowList { Width = Dim.Fill(), Height = Dim.Fill(), Visible = false };
-        _crossingList.CanSelect = i => i >= CrossingsText.HeaderLines && i - CrossingsText.HeaderLines < _crossings.Count;
+        _crossingList.CanSelect = i => i >= CrossingsText.HeaderLines && i - CrossingsText.HeaderLines < _sweeps.Crossings.Count;
         _pageFrame.Add(_crossingList);
 
         _status = new StatusLine { X = 0, Y = Pos.AnchorEnd(3), Width = Dim.Fill() };
@@ -115,12 +103,21 @@ public sealed partial class MainWindow : Window
         // Enter on an operating point shows its states; on anything else it goes to the form
         _board.RowActivated += i =>
         {
-            if (i < _nodes.Count && _nodes[i].Kind == BoardNodeKind.Point) ShowNamedPoint(_nodes[i].Id);
+            if (i < _nodes.Count && _nodes[i].Kind == BoardNodeKind.Point) _sweeps.ShowNamedPoint(_nodes[i].Id, OnNamedPointShown);
             else _form.SetFocus();
         };
         _form.RowActivated += _ => EditField();
         _form.Bind(Key.F2, Command.Edit, () => { EditField(); return true; });
-        _spectrum.CursorMoved += OnCursorMoved;
+        _point.Changed += () => { ShowFields(); RefreshPage(); UpdateStatus(); };   // the coupler form shows g at the point
+        _point.Progressed += UpdateStatus;
+        _point.Said += Say;
+        _spectrum.CursorMoved += _sweeps.MoveCursor;
+        _sweeps.Changed += OnSweepChanged;
+        _sweeps.Progressed += OnSweepProgress;
+        _sweeps.Said += Say;
+        _targets.Changed += UpdateStatus;
+        _targets.Said += Say;
+        _targets.Offered += AskOffer;
         _crossingList.RowActivated += JumpToCrossing;
         _crossingList.Bind(Key.Esc, Command.Cancel, () => { ShowPage(Page.Spectrum); return true; });
         FrameChanged += (_, _) => { ApplyLayout(); SayIfTooSmall(); };
@@ -136,19 +133,21 @@ public sealed partial class MainWindow : Window
 
     private readonly RowList _crossingList;
     private string? _formItemId;
-    private Core.DeviceFiles.DeviceDocument? _computedDocument;
     private BoardNodeKind _formItemKind;
 
     /// <summary>The question bar, for tests and for the app to answer start-up offers.</summary>
     public PromptBar Prompt => _prompt;
     public Page CurrentPage => _pageShown;
     public SpectrumView Spectrum => _spectrum;
-    public SweepResult? LastSweep => _sweep;
+    public SweepResult? LastSweep => _sweeps.Result;
     /// <summary>The latest computation at the file's biases (null before the first).</summary>
-    public PointSnapshot? LastSnapshot => _snapshot;
-    public bool IsComputing => _computing || _sweeping;
-    public bool IsFitting => _fitting;
-    public bool IsSolving => _solving;
+    public PointSnapshot? LastSnapshot => _point.Snapshot;
+    public bool IsComputing => _point.IsComputing || _sweeps.IsRunning;
+    public bool IsFitting => _targets.IsFitting;
+    public bool IsSolving => _targets.IsSolving;
+
+    /// <summary>The latest fit's task (it ends as cancelled after Esc), for tests that check the work really stops.</summary>
+    public Task? RunningFit => _targets.RunningFit;
     public bool QuitAllowed => _allowQuit;
 
     /// <summary>
@@ -173,7 +172,7 @@ public sealed partial class MainWindow : Window
     ];
 
     /// <summary>True while a sweep, fit or target search runs (Esc stops it).</summary>
-    private bool Cancellable => _sweeping || _fitting || _solving;
+    private bool Cancellable => _sweeps.IsRunning || _targets.IsFitting || _targets.IsSolving;
 
     /// <summary>The key bar for the moment: Esc only while work runs, F1 "Back" on the help page, F2 "Fix" on the errors page.</summary>
     private void UpdateKeyBar() =>
@@ -228,7 +227,7 @@ public sealed partial class MainWindow : Window
         _page.Bind(Key.CursorLeft, Command.Left, () => MoveCursorOnPage(-1));
         _page.Bind(Key.CursorRight, Command.Right, () => MoveCursorOnPage(1));
         // on the map, ↑ and ↓ move the cursor along the second axis instead of scrolling
-        _page.ArrowOverride = step => _pageShown == Page.Map && MoveMapCursor(0, -step);
+        _page.ArrowOverride = step => _pageShown == Page.Map && _sweeps.MoveMapCursor(0, -step);
         _page.Bind(Key.L, Command.Context, () => { ToggleLimits(); return true; });
         _page.Bind(Key.L.WithShift, Command.Context, () => { ToggleLimits(); return true; });   // the help writes "L"
     }
@@ -236,9 +235,9 @@ public sealed partial class MainWindow : Window
     /// <summary>← → on a text page: the map's cursor on the map page, the spectrum's cursor on the pages that share it.</summary>
     private bool MoveCursorOnPage(int step)
     {
-        if (_pageShown == Page.Map) return MoveMapCursor(step, 0);
+        if (_pageShown == Page.Map) return _sweeps.MoveMapCursor(step, 0);
         if (!CursorPage) return false;
-        _spectrum.SetCursor(_spectrum.CursorIndex + step);
+        _spectrum.SetCursor(_sweeps.CursorIndex + step);
         return true;
     }
 
@@ -411,27 +410,10 @@ public sealed partial class MainWindow : Window
 
     private bool? CancelSomething()
     {
-        if (_fitting || _solving)
-        {
-            // The result of a cancelled fit or search is dropped when it arrives, so the device stays as it was.
-            string what = _fitting ? "fit" : "target search";
-            if (_fitting) _fitJobs.Cancel();
-            if (_solving) _solveJobs.Cancel();
-            _fitting = _solving = false;
-            UpdateStatus();
-            Say($"{what} cancelled; the device is unchanged");
-            return true;
-        }
-        if (_sweeping)
-        {
-            _sweepJobs.Cancel();
-            _sweeping = false;
-            UpdateStatus();
-            Say("sweep cancelled; the points computed so far stay on screen");
-            return true;
-        }
+        // the result of a cancelled fit or search is dropped when it arrives, so the device stays as it was
+        if (_targets.Cancel() || _sweeps.Cancel()) return true;
         if (_pageShown == Page.Help) { ShowPage(_pageBeforeHelp); return true; }
-        if (LeavePointView()) return true;
+        if (_sweeps.LeavePointView()) return true;
         return true;   // Esc never quits (the framework's default quit key is Esc); Ctrl+Q does, through the guard
     }
 
@@ -463,37 +445,17 @@ public sealed partial class MainWindow : Window
         if (_pageShown == Page.Errors) ShowPage(Page.States);
         // Saving changes only the unsaved mark, and an operating point, sweep or spread table leaves the device as it
         // was: neither needs a new computation (a map's sweep can take tens of seconds).
-        if (!ReferenceEquals(document, _computedDocument)
-            && (_computedDocument is null || document.ModelText() != _computedDocument.ModelText()))
-        {
-            _computedDocument = document;
-            StartPointCompute(document.Device);
-            if (_lastSweep is not null) ScheduleResweep();
-        }
-        else
-        {
-            var before = _computedDocument;
-            _computedDocument = document;
-            // a named point whose values were edited is computed again at its new values; a removed one is left
-            if (_pointView is var (name, _) && !SamePoint(before, document, name))
-            {
-                _pointView = null;
-                if (document.Points.Any(p => p.Name == name)) ShowNamedPoint(name); else RefreshPage();
-            }
-        }
+        if (_point.Follow(document, out var before)) _sweeps.DeviceChanged();
+        else _sweeps.PointsEdited(before, document, OnNamedPointShown);
         UpdateStatus();
     }
-
-    private static bool SamePoint(DeviceDocument? a, DeviceDocument b, string name) =>
-        a?.Points.FirstOrDefault(p => p.Name == name)?.BiasValues is { } x && b.Points.FirstOrDefault(p => p.Name == name)?.BiasValues is { } y
-        && x.Count == y.Count && x.All(v => y.TryGetValue(v.Key, out double w) && w == v.Value);
 
     private void ShowFields()
     {
         var document = _session.Document;
         if (document is null || _board.SelectedIndex >= _nodes.Count) { _form.SetLines([]); return; }
         var node = _nodes[_board.SelectedIndex];
-        _fields = BoardOutline.Fields(document, node, _snapshot?.Spectrum.Couplers);
+        _fields = BoardOutline.Fields(document, node, _point.Snapshot?.Spectrum.Couplers);
         _formFrame.Title = node.Kind switch
         {
             BoardNodeKind.Element => $"Parameters: {node.Id}",
@@ -520,7 +482,7 @@ public sealed partial class MainWindow : Window
         {
             var outcome = _session.SetValue(field.FieldPath!, text);
             if (!outcome.Accepted) return $"{field.Name} stays {field.StartText}: {outcome.Message}";
-            Say(outcome.Message + (_lastSweep is null ? "" : "; the sweep re-runs shortly"));
+            Say(outcome.Message + (_sweeps.Request is null ? "" : "; the sweep re-runs shortly"));
             return null;
         });
     }
@@ -625,16 +587,16 @@ public sealed partial class MainWindow : Window
     {
         string file = _session.Path is null ? "demo" : Path.GetFileName(_session.Path);
         string dirty = _session.IsDirty ? " ● unsaved" : "";
-        string disk = (_diskChanged ? " ⚠ changed on disk" : "") + (_session.IsReadOnly ? " read-only" : "")
+        string disk = (_files.DiskChanged ? " ⚠ changed on disk" : "") + (_session.IsReadOnly ? " read-only" : "")
                       + (_session.AutosaveProblem is null ? "" : " ⚠ autosave failed");
-        string computed = _computing ? (_pointProgressText.Length > 0 ? "⟳ computing, " + _pointProgressText : "⟳ computing") : _snapshot is null ? "not computed" : $"at {_snapshot.ComputedAt:HH:mm:ss} ({_snapshot.Elapsed.TotalSeconds:0.00} s)";
-        string trunc = _snapshot?.ConvergenceText ?? "…";
-        string work = string.Join(" · ", new[] { _sweeping ? _progressText : "", _fitting ? "⟳ fitting" : "", _solving ? "⟳ solving" : "" }.Where(w => w.Length > 0));
+        string computed = _point.IsComputing ? (_point.ProgressText.Length > 0 ? "⟳ computing, " + _point.ProgressText : "⟳ computing") : _point.Snapshot is null ? "not computed" : $"at {_point.Snapshot.ComputedAt:HH:mm:ss} ({_point.Snapshot.Elapsed.TotalSeconds:0.00} s)";
+        string trunc = _point.Snapshot?.ConvergenceText ?? "…";
+        string work = string.Join(" · ", new[] { _sweeps.IsRunning ? _sweeps.ProgressText : "", _targets.IsFitting ? "⟳ fitting" : "", _targets.IsSolving ? "⟳ solving" : "" }.Where(w => w.Length > 0));
         // Ranks: what is left out first on a narrow screen is the largest (the time of the last result, then the eigensolver).
         _status.SetFacts(
         [
             ($"{file}{dirty}{disk}", 0),
-            ($"eigen {_eigenPath}", 3),
+            ($"eigen {_point.EigenPath}", 3),
             ($"trunc {trunc}", 2),
             (computed, 4),
             (work.Length > 0 ? work + " (Esc cancels)" : "", 1),
@@ -642,17 +604,4 @@ public sealed partial class MainWindow : Window
         ]);
         UpdateKeyBar();
     }
-
-    private static bool NativeEigen()
-    {
-        try { return EigenSolvers.Active.IsNative; }
-        catch (Exception e) when (e is not OutOfMemoryException) { return false; }
-    }
-
-    private static string DescribeProblem(Exception e) => e switch
-    {
-        InvalidDeviceException invalid => "the device is not valid: " + string.Join("; ", invalid.Problems),
-        AggregateException { InnerException: { } inner } => DescribeProblem(inner),
-        _ => e.Message,
-    };
 }
