@@ -28,6 +28,12 @@ internal sealed class PointSolver
         _iterative = options.Iterative ? new BlockDavidson() : null;
     }
 
+    /// <summary>
+    /// Forgets the points solved so far, so the next point starts cold (a new block of a sweep), while the iterative
+    /// solver keeps its work arrays: the numbers are those of a new solver, without allocating its workspace again.
+    /// </summary>
+    public void StartCold() => _previous = _beforePrevious = _third = null;
+
     public SolvedPoint Solve(Device device, int? levels)
     {
         var problem = _solver.Prepare(device);

@@ -44,9 +44,10 @@ public static class SweepRunner
                     try
                     {
                         int b;
+                        var pointSolver = new PointSolver(solver, options);
                         while (!stop.IsCancellationRequested && (b = Interlocked.Increment(ref nextBlock)) < blocks.Count)
                         {
-                            var pointSolver = new PointSolver(solver, options);
+                            pointSolver.StartCold();
                             for (int i = blocks[b].Start; i < blocks[b].End && !stop.IsCancellationRequested; i++)
                             {
                                 try { labelling.Add(i, pointSolver.Solve(resolve(axisValues[i]), plan.Levels)); }
