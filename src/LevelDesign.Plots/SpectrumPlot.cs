@@ -57,8 +57,10 @@ public static class SpectrumPlot
 
         if (crossings is not null && points.Count > 0)
         {
-            double left = x.Min(), right = x.Max();
-            foreach (var c in crossings)
+            // Each crossing is a numbered ring on its branches, explained in one list: labels written beside the rings
+            // overlap one another wherever crossings cluster (several pairs often cross near one bias).
+            var lines = new List<string>();
+            foreach (var c in crossings.OrderBy(c => c.Bias))
             {
                 if (manifold is not null && (!manifold(c.StateA.Sum()) || !manifold(c.StateB.Sum()))) continue;
                 double cx = unit.ToShown(c.Bias);
@@ -67,12 +69,19 @@ public static class SpectrumPlot
                 double ea = s.EnergyOf(c.StateA.ToArray()), eb = s.EnergyOf(c.StateB.ToArray());
                 if (!double.IsFinite(ea) || !double.IsFinite(eb)) continue;
                 double mid = 0.5 * (ea + eb) + shift[nearest];
+                int number = lines.Count + 1;
                 plot.Add.Marker(cx, mid, MarkerShape.OpenCircle, 9, Colors.Black);
-                var text = plot.Add.Text(string.Create(System.Globalization.CultureInfo.InvariantCulture,
-                    $"{StateNames.Of(s.Device, c.StateA)} ↔ {StateNames.Of(s.Device, c.StateB)}: gap {FrequencyText.Format(c.GapGHz)}, purity {c.Purity:F2}"), cx, mid);
-                text.LabelFontSize = 10;
-                // keep the label inside the canvas: it extends away from the nearer edge
-                text.LabelAlignment = cx > 0.5 * (left + right) ? Alignment.LowerRight : Alignment.LowerLeft;
+                var tag = plot.Add.Text(number.ToString(System.Globalization.CultureInfo.InvariantCulture), cx, mid);
+                tag.LabelFontSize = 10;
+                tag.LabelBold = true;
+                tag.LabelAlignment = Alignment.LowerLeft;
+                lines.Add(string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                    $"{number}  {StateNames.Of(s.Device, c.StateA)} ↔ {StateNames.Of(s.Device, c.StateB)}: gap {FrequencyText.Format(c.GapGHz)}, purity {c.Purity:F2}, at {unit.Text(c.Bias)}"));
+            }
+            if (lines.Count > 0)
+            {
+                var list = plot.Add.Annotation("avoided crossings\n" + string.Join("\n", lines), Alignment.LowerRight);
+                list.LabelFontSize = 9;
             }
         }
 

@@ -44,6 +44,34 @@ public class SpectrumPlotTests
         Assert.Contains("MHz", text);   // a crossing annotation
     }
 
+    /// <summary>
+    /// Crossings are numbered rings explained in one list (by bias), so clustered crossings do not print their texts on
+    /// top of each other: every crossing drawn has its number beside its ring and one line of the list.
+    /// </summary>
+    [Fact]
+    public async Task Crossings_are_numbered_on_the_plot_and_listed_once_in_bias_order()
+    {
+        var (sweep, crossings) = await TunableQubitAndResonator();
+        var plot = SpectrumPlot.Build(sweep, crossings, levels: 4);
+        var list = plot.GetPlottables().OfType<ScottPlot.Plottables.Annotation>().Single(a => a.Text.StartsWith("avoided crossings"));
+        var lines = list.Text.Split('\n').Skip(1).ToArray();
+        var rings = plot.GetPlottables().OfType<ScottPlot.Plottables.Marker>().ToArray();
+        var tags = plot.GetPlottables().OfType<ScottPlot.Plottables.Text>().Select(t => t.LabelText).ToArray();
+        Assert.NotEmpty(lines);
+        Assert.Equal(lines.Length, rings.Length);
+        for (int i = 0; i < lines.Length; i++)
+        {
+            Assert.StartsWith($"{i + 1}  ", lines[i]);
+            Assert.Contains("gap", lines[i]);
+            Assert.Contains("Φ0", lines[i]);   // where, in the axis unit
+            Assert.Contains($"{i + 1}", tags);
+        }
+        var order = rings.Select(r => r.X).ToArray();
+        Assert.Equal(order.Order().ToArray(), order);
+        // no crossing text is written on the canvas beside a ring
+        Assert.DoesNotContain(tags, t => t.Contains("gap"));
+    }
+
     [Fact]
     public async Task The_ground_branch_is_left_out_when_energies_are_measured_from_it()
     {

@@ -66,10 +66,11 @@ public static class PlotCommand
             return DrawQuantities(document, setup, mode, a.Levels, quantities, output, extension, w, h);
         var (result, crossings, judged) = CrossingsCommand.Find(setup, mode, a.Levels, 0, 0.5, []);
         if (result is null) return ExitCodes.Cancelled;
+        // (the title's second line keeps it inside a 1200-pixel canvas)
         // all judged labels when one manifold is picked (its branches may lie above the lowest 12), else the lowest 12
         int shown = a.Levels ?? (manifold is null ? Math.Min(judged, 12) : judged);
         var plot = SpectrumPlot.Build(result, crossings, shown, document: document, manifold: manifold is int wanted ? e => e == wanted : null,
-            title: $"{document.Device.Name}: spectrum along {setup.Axes[0].Path}, labels by {(mode == LabelMode.ByCharacter ? "character" : "order")}"
+            title: $"{document.Device.Name}: spectrum along {setup.Axes[0].Path}\nlabels by {(mode == LabelMode.ByCharacter ? "character" : "order")}"
                    + (manifold is int m ? $", {m}-excitation manifold" : "") + "; lines coloured by character, blended where states mix");
         // the caption from the axis name alone cannot know a bias's control unit; say it, and what the bias moves
         OutputFile.Write(output, () =>
