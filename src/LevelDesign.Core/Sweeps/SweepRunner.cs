@@ -151,7 +151,8 @@ public static class SweepRunner
         string? memory = options.MemoryLimitBytes is long limit
             ? SweepMemoryEstimate.Refusal(dimension, entries, count, total, workers, keep, complex, iterativeFrom, limit)
             : null;
-        bool timed = memory is not null || (options.TimeLimit is not null && wanted >= SweepTimeEstimate.MinimumTimedPoints);
+        bool timed = memory is not null || (options.TimeLimit is TimeSpan limitTime && wanted >= SweepTimeEstimate.MinimumTimedPoints
+                                            && !SweepTimeEstimate.SurelyWithin(dimension, wanted, workers, limitTime));
         double onePoint = SweepMemoryEstimate.Bytes(dimension, entries, count, 1, 1, false, complex, iterativeFrom);
         TimeSpan? perPoint = timed && onePoint <= (options.MemoryLimitBytes ?? long.MaxValue) ? FirstPointTime(first, plan, options, solver) : null;
         if (memory is not null)

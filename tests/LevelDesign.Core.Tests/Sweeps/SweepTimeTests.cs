@@ -32,6 +32,22 @@ public class SweepTimeTests
         Assert.Equal(0, reported);
     }
 
+    /// <summary>
+    /// The first point is timed only when the sweep could exceed the limit at the worst-case cost of a point (a dense
+    /// decomposition at 10⁸ n³-operations a second): never for a usual sweep of a small device, always for a module of
+    /// tens of thousands of states or an absurd number of points.
+    /// </summary>
+    [Fact]
+    public void Timing_is_skipped_only_when_even_the_worst_case_point_cost_fits_the_limit()
+    {
+        var day = SweepTimeEstimate.DefaultLimit;
+        Assert.True(SweepTimeEstimate.SurelyWithin(462, 201, 2, day));          // worst case ≈ 1.1 s a point: 2 min
+        Assert.False(SweepTimeEstimate.SurelyWithin(462, 1_000_000, 2, day));   // 6 days at the worst case
+        Assert.False(SweepTimeEstimate.SurelyWithin(46_376, 51, 2, day));       // a 3×3 module: ~10⁶ s a point at worst
+        Assert.False(SweepTimeEstimate.SurelyWithin(462, 201, 2, TimeSpan.FromSeconds(1)));
+        Assert.Equal(0.1 + 1e-8 * 1200.0 * 1200 * 1200, SweepTimeEstimate.WorstPointSeconds(1200), 12);
+    }
+
     [Fact]
     public async Task Short_sweeps_are_not_timed_and_no_limit_means_no_refusal()
     {
