@@ -54,6 +54,7 @@ internal sealed unsafe class LapackExports
     public static LapackExports? TryLoad(string libraryName, out string? failureReason)
     {
         // The handle is never freed: function pointers into it live as long as the process.
+        OneBlasThreadUnlessAsked();
         if (!NativeLibrary.TryLoad(libraryName, out nint handle))
         {
             failureReason = $"cannot load {libraryName}";
@@ -81,6 +82,15 @@ internal sealed unsafe class LapackExports
         UseOneThreadUnlessAsked(handle);
         return new LapackExports(libraryName, MappedFileContaining(dsyevr), dsyevr, zheevr, dpotrf, dsygst, dtrsm);
     }
+
+    /// <summary>
+    /// Threaded OpenBLAS starts its worker threads when it is loaded, and they spin (sched_yield) for about a tenth of
+    /// a second before they sleep: measured on a whole 201-point sweep, one of the two cores was taken by them for the
+    /// first 130 ms. Setting OPENBLAS_NUM_THREADS=1 in the process's own environment before the load (only when the
+    /// user has not set it) means no such threads are started. .NET's Environment.SetEnvironmentVariable does not reach
+    /// the C library's environment on Linux (see NativeEnvironment).
+    /// </summary>
+    private static void OneBlasThreadUnlessAsked() => NativeEnvironment.SetUnlessSet("OPENBLAS_NUM_THREADS", "1");
 
     /// <summary>
     /// Sweeps run points in parallel and the iterative solver's projected problems are small (tens of states);
