@@ -54,7 +54,7 @@ internal sealed unsafe class LapackExports
     public static LapackExports? TryLoad(string libraryName, out string? failureReason)
     {
         // The handle is never freed: function pointers into it live as long as the process.
-        OneBlasThreadUnlessAsked();
+        bool oneThreadFromStart = OneBlasThreadUnlessAsked();
         if (!NativeLibrary.TryLoad(libraryName, out nint handle))
         {
             failureReason = $"cannot load {libraryName}";
@@ -79,7 +79,7 @@ internal sealed unsafe class LapackExports
         }
 
         failureReason = null;
-        UseOneThreadUnlessAsked(handle);
+        if (!oneThreadFromStart) UseOneThreadUnlessAsked(handle);
         return new LapackExports(libraryName, MappedFileContaining(dsyevr), dsyevr, zheevr, dpotrf, dsygst, dtrsm);
     }
 
@@ -90,11 +90,12 @@ internal sealed unsafe class LapackExports
     /// user has not set it) means no such threads are started. .NET's Environment.SetEnvironmentVariable does not reach
     /// the C library's environment on Linux (see NativeEnvironment).
     /// </summary>
-    private static void OneBlasThreadUnlessAsked() => NativeEnvironment.SetUnlessSet("OPENBLAS_NUM_THREADS", "1");
+    private static bool OneBlasThreadUnlessAsked() => NativeEnvironment.SetUnlessSet("OPENBLAS_NUM_THREADS", "1");
 
     /// <summary>
     /// Sweeps run points in parallel and the iterative solver's projected problems are small (tens of states);
     /// threaded OpenBLAS only adds contention there, so it runs one thread unless OPENBLAS_NUM_THREADS says otherwise.
+    /// This is the fallback when the environment could not be set before the load (see OneBlasThreadUnlessAsked).
     /// </summary>
     private static void UseOneThreadUnlessAsked(nint handle)
     {

@@ -1,4 +1,5 @@
 using System.Numerics;
+using System.Runtime.InteropServices;
 using LevelDesign.Core.Composite;
 using LevelDesign.Core.Eigen;
 using LevelDesign.Core.Labels;
@@ -131,56 +132,66 @@ internal sealed class LabelTracker(LabelMode mode, SweepOptions options, int jud
     private static double[,] Overlaps(SolvedPoint previous, SolvedPoint current)
     {
         int n = current.Dimension, oldCount = previous.Count, count = current.Count;
-        // the neighbour's vectors in this basis (gathered only when the two bases differ), split into real and
-        // imaginary parts, so that every ⟨old_i|new_k⟩ comes from blocked real products: a real gauge makes most
-        // complex points real up to phases, and the parts keep the product vectorised either way
         bool sameBasis = ReferenceEquals(previous.Problem.Basis.Structure, current.Problem.Basis.Structure);
+        // the neighbour's vectors in this basis (gathered only when the two bases differ)
         var map = sameBasis ? null : current.IndexMapTo(previous.Problem.Basis);
-        var (oldRe, oldIm) = Parts(previous, map, n);
-        var (re, im) = Parts(current, null, n);
-        var rr = Dots(oldRe, oldCount, re, count, n);
-        var ii = oldIm is not null && im is not null ? Dots(oldIm, oldCount, im, count, n) : null;
-        var ri = im is not null ? Dots(oldRe, oldCount, im, count, n) : null;
-        var ir = oldIm is not null ? Dots(oldIm, oldCount, re, count, n) : null;
         var result = new double[oldCount, count];
+        if (previous.ComplexVectors is null && current.ComplexVectors is null)
+        {
+            var dots = Dots(Gathered(previous.RealVectors!, previous.Dimension, oldCount, map, n), current.RealVectors!, n, oldCount, count);
+            for (int i = 0; i < oldCount; i++)
+                for (int k = 0; k < count; k++) result[i, k] = dots[i * count + k] * dots[i * count + k];
+            return result;
+        }
+        // Complex vectors as interleaved (re, im) pairs, so every ⟨o|v⟩ = Σ (o_re v_re + o_im v_im) + i Σ (o_re v_im −
+        // o_im v_re) is two blocked real products of length 2n: one with v itself, one with v turned to (v_im, −v_re).
+        var old = Interleaved(previous, map, n);
+        var now = Interleaved(current, null, n);
+        var turned = new double[now.Length];
+        for (int j = 0; j < now.Length; j += 2) { turned[j] = now[j + 1]; turned[j + 1] = -now[j]; }
+        var real = Dots(old, now, 2 * n, oldCount, count);
+        var imaginary = Dots(old, turned, 2 * n, oldCount, count);
         for (int i = 0; i < oldCount; i++)
             for (int k = 0; k < count; k++)
             {
                 int p = i * count + k;
-                // ⟨o|v⟩ = Σ (o_re − i o_im)(v_re + i v_im)
-                double real = rr[p] + (ii?[p] ?? 0), imaginary = (ri?[p] ?? 0) - (ir?[p] ?? 0);
-                result[i, k] = real * real + imaginary * imaginary;
+                result[i, k] = real[p] * real[p] + imaginary[p] * imaginary[p];
             }
         return result;
     }
 
-    /// <summary>A point's vectors (column-major, n per state) as real and imaginary parts in a basis of n states; map[j] is the point's index of state j (−1: absent), null when the bases agree. Imaginary is null for real vectors.</summary>
-    private static (double[] Real, double[]? Imaginary) Parts(SolvedPoint point, int[]? map, int n)
+    /// <summary>Real vectors (column-major, <paramref name="own"/> per state) in a basis of n states; map[j] is the vectors' index of state j (−1: absent), null when the bases agree.</summary>
+    private static double[] Gathered(double[] vectors, int own, int count, int[]? map, int n)
+    {
+        if (map is null) return vectors;
+        var gathered = new double[n * count];
+        for (int k = 0; k < count; k++)
+            for (int j = 0; j < n; j++) gathered[k * n + j] = map[j] < 0 ? 0 : vectors[k * own + map[j]];
+        return gathered;
+    }
+
+    /// <summary>A point's vectors as interleaved (re, im) pairs in a basis of n states (see <see cref="Gathered"/>); complex vectors in their own basis are read in place.</summary>
+    private static ReadOnlySpan<double> Interleaved(SolvedPoint point, int[]? map, int n)
     {
         int own = point.Dimension, count = point.Count;
-        if (map is null && point.RealVectors is double[] real) return (real, null);
-        var re = new double[n * count];
-        var im = point.ComplexVectors is null ? null : new double[n * count];
+        if (map is null && point.ComplexVectors is Complex[] inPlace) return MemoryMarshal.Cast<Complex, double>(inPlace.AsSpan());
+        var pairs = new double[2 * n * count];
         for (int k = 0; k < count; k++)
             for (int j = 0; j < n; j++)
             {
                 int source = map is null ? j : map[j];
                 if (source < 0) continue;
-                if (point.ComplexVectors is Complex[] complex)
-                {
-                    var z = complex[k * own + source];
-                    re[k * n + j] = z.Real;
-                    im![k * n + j] = z.Imaginary;
-                }
-                else re[k * n + j] = point.RealVectors![k * own + source];
+                var z = point.ComplexVectors?[k * own + source] ?? point.RealVectors![k * own + source];
+                pairs[2 * (k * n + j)] = z.Real;
+                pairs[2 * (k * n + j) + 1] = z.Imaginary;
             }
-        return (re, im);
+        return pairs;
     }
 
-    private static double[] Dots(double[] a, int aCount, double[] b, int bCount, int n)
+    private static double[] Dots(ReadOnlySpan<double> a, ReadOnlySpan<double> b, int length, int aCount, int bCount)
     {
         var dots = new double[aCount * bCount];
-        BlockProducts.Dots(a, n, aCount, b, bCount, dots, bCount);
+        BlockProducts.Dots(a, length, aCount, b, bCount, dots, bCount);
         return dots;
     }
 
