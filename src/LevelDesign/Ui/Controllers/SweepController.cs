@@ -197,17 +197,16 @@ public sealed class SweepController
     }
 
     /// <summary>How the screen searches a finished one-axis sweep for crossings.</summary>
-    public static CrossingOptions CrossingOptionsFor(DeviceDocument document, SweepResult sweep)
-    {
-        string axis = sweep.Plan.Axes[0].Path;
-        var points = CrossingSearch.OperatingPoints(document, axis, CrossingSearch.FileValue(document, axis));
-        return CrossingSearch.Options(sweep, points.Select(p => p.Value).ToArray());
-    }
+    public static CrossingOptions CrossingOptionsFor(DeviceDocument document, SweepResult sweep) =>
+        CrossingSearch.Options(sweep, PointsOnAxis(document, sweep).Select(p => p.Value).ToArray());
 
     /// <summary>The file's operating points on the swept axis, for the crossings page's nearest-point column.</summary>
-    public IReadOnlyList<(string Name, double Value)> CrossingPoints()
+    public IReadOnlyList<(string Name, double Value)> CrossingPoints() =>
+        _session.Document is { } document && Result is { Plan.Axes.Count: 1 } sweep ? PointsOnAxis(document, sweep) : [];
+
+    // the screen's sweep starts from the file's biases, so a point that does not set the axis sits at the file's value
+    private static IReadOnlyList<(string Name, double Value)> PointsOnAxis(DeviceDocument document, SweepResult sweep)
     {
-        if (_session.Document is not { } document || Result is not { Plan.Axes.Count: 1 } sweep) return [];
         string axis = sweep.Plan.Axes[0].Path;
         return CrossingSearch.OperatingPoints(document, axis, CrossingSearch.FileValue(document, axis));
     }
